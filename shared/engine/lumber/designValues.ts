@@ -1,0 +1,62 @@
+import { EngineError } from '../errors';
+import { MPA_PER_PSI, mpa, type MPa } from '../units';
+import { parseLumberId } from './ids';
+import { REPETITIVE_MEMBER_FACTOR, sizeFactors } from './factors';
+import { GRADE_DATA, referenceValuesPsi } from './referenceValues';
+import { dressedSize } from './sizes';
+
+/** Options for adjusting reference values. */
+export interface DesignValueOptions {
+  /** Load duration factor CD of the governing load combination (NDS 2018 Table 2.3.2). */
+  cd: number;
+  /** Apply Cr = 1.15 on Fb (trusses ≤ 24 in. o.c. with sheathing). */
+  repetitive: boolean;
+}
+
+/**
+ * Adjusted (ASD) design values in MPa. Dry service (CM = 1), normal temperature (Ct = 1), not
+ * incised (Ci = 1), chords braced by sheathing/ceiling (CL = 1). `fcStar` is Fc* (all factors
+ * but Cp); `fcPerp` excludes Cb (apply it per bearing); `e`/`emin` take no CD.
+ */
+export interface DesignValues {
+  fb: MPa;
+  ft: MPa;
+  fv: MPa;
+  fcStar: MPa;
+  fcPerp: MPa;
+  e: MPa;
+  emin: MPa;
+  /** The factors used, for reports and printouts. */
+  factors: { cd: number; cfB: number; cfT: number; cfC: number; cr: number };
+}
+
+// CM, Ct and Ci are 1.0 for the dry, enclosed, non-incised truss lumber Spanwise designs; they
+// are kept as named constants so a wet-service option has one place to go.
+const CM = 1;
+const CT = 1;
+const CI = 1;
+
+/** Adjusted design values for a lumber id (NDS 2018 Table 4.3.1, ASD column). */
+export function designValues(lumberId: string, options: DesignValueOptions): DesignValues {
+  const { cd, repetitive } = options;
+  if (!(cd > 0) || cd > 2) {
+    throw new EngineError('invalid', `Load duration factor CD must be in (0, 2]; got ${cd}.`, {
+      cd,
+    });
+  }
+  const { size, grade } = parseLumberId(lumberId);
+  const ref = referenceValuesPsi(grade, size);
+  const cf = sizeFactors(GRADE_DATA[grade].sizeFactor, dressedSize(size).nominalWidth);
+  const cr = repetitive ? REPETITIVE_MEMBER_FACTOR : 1;
+  const toMpa = (p: number) => mpa(p * MPA_PER_PSI);
+  return {
+    fb: toMpa(ref.fb * cd * CM * CT * cf.fb * CI * cr),
+    ft: toMpa(ref.ft * cd * CM * CT * cf.ft * CI),
+    fv: toMpa(ref.fv * cd * CM * CT * CI),
+    fcStar: toMpa(ref.fc * cd * CM * CT * cf.fc * CI),
+    fcPerp: toMpa(ref.fcPerp * CM * CT * CI),
+    e: toMpa(ref.e * CM * CT * CI),
+    emin: toMpa(ref.emin * CM * CT * CI),
+    factors: { cd, cfB: cf.fb, cfT: cf.ft, cfC: cf.fc, cr },
+  };
+}

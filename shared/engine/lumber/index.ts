@@ -1,0 +1,6 @@
+export * from './sizes';
+export * from './referenceValues';
+export * from './ids';
+export * from './factors';
+export * from './designValues';
+export * from './cost';
