@@ -27,6 +27,7 @@ export interface JointLoad {
   fy?: number;
 }
 
+/** A whole plane truss: geometry, supports and (optionally) the loads of one load case. */
 export interface TrussModel {
   joints: Joint[];
   members: Member[];
@@ -34,8 +35,10 @@ export interface TrussModel {
   loads?: JointLoad[];
 }
 
+/** Statically determinate (m + r = 2j, solved by equilibrium alone) or indeterminate (m + r > 2j). */
 export type Classification = 'determinate' | 'indeterminate';
 
+/** The axial force in one member, by member id. */
 export interface MemberForce {
   id: string;
   /** Axial force, tension positive. */
@@ -49,14 +52,18 @@ export interface Reaction {
   ry: number;
 }
 
+/** Displacement of a joint, positive along +x and +y, in the model's length unit. */
 export interface Displacement {
   joint: string;
   ux: number;
   uy: number;
 }
 
+/** Everything one load case gives: member forces, reactions and, with `ea`, displacements. */
 export interface AnalysisResult {
   classification: Classification;
+  /** Degree of static indeterminacy m + r − 2j (0 when determinate). */
+  redundants?: number;
   members: MemberForce[];
   reactions: Reaction[];
   /** Present when every member has `ea`. */
