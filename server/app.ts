@@ -1,0 +1,96 @@
+import express from 'express';
+import session from 'express-session';
+import connectPgSimple from 'connect-pg-simple';
+import helmet from 'helmet';
+import passport from 'passport';
+import { existsSync } from 'node:fs';
+import { join } from 'node:path';
+import type { Sequelize } from 'sequelize';
+import pg from 'pg';
+import { readConfig, type Config } from './config';
+import { configurePassport } from './middleware/auth';
+import { requireCsrf } from './middleware/csrf';
+import { apiNotFound, errorHandler } from './middleware/errors';
+import { presentMe } from './presenters/user';
+import { authRouter } from './routes/auth/router';
+import { usersRouter } from './routes/users/router';
+import { customersRouter } from './routes/customers/router';
+import { jobsRouter } from './routes/jobs/router';
+import { plantRouter } from './routes/plant/router';
+
+export interface AppOptions {
+  sequelize: Sequelize;
+  databaseUrl: string;
+  config?: Partial<Config>;
+  /** Folder of the built client (served with an SPA fallback) — omitted in API-only tests. */
+  clientDir?: string;
+}
+
+/** The whole HTTP app, without a listener, so tests drive it with supertest. */
+export function createApp(opts: AppOptions) {
+  const config = { ...readConfig(), ...opts.config };
+  presentMe.demo = config.demo;
+  configurePassport();
+  const app = express();
+  app.set('trust proxy', config.production ? 1 : false);
+  app.disable('x-powered-by');
+  app.use(
+    helmet({
+      contentSecurityPolicy: {
+        directives: { 'img-src': ["'self'", 'data:', 'blob:'], 'upgrade-insecure-requests': config.production ? [] : null },
+      },
+    }),
+  );
+
+  const pool = new pg.Pool({ connectionString: opts.databaseUrl, max: 5 });
+  const PgStore = connectPgSimple(session);
+  const store = new PgStore({ pool, tableName: 'session', pruneSessionInterval: 15 * 60 });
+  app.locals.close = async () => {
+    store.close();
+    await pool.end().catch(() => undefined);
+  };
+
+  app.get('/api/health', async (_req, res) => {
+    try {
+      await opts.sequelize.query('SELECT 1');
+      res.json({ status: 'ok', db: 'ok', demo: config.demo });
+    } catch {
+      res.status(503).json({ status: 'degraded', db: 'unreachable', demo: config.demo });
+    }
+  });
+
+  app.use('/api', express.json({ limit: '1mb' }));
+  app.use(
+    '/api',
+    session({
+      name: 'spanwise.sid',
+      secret: config.sessionSecret,
+      store,
+      resave: false,
+      saveUninitialized: false,
+      rolling: true, // the idle timeout restarts with every request
+      cookie: {
+        httpOnly: true,
+        sameSite: 'lax',
+        secure: config.production,
+        maxAge: config.sessionIdleMinutes * 60 * 1000,
+      },
+    }),
+  );
+  app.use('/api', passport.session());
+  app.use('/api', requireCsrf);
+
+  app.use('/api/auth', authRouter(config));
+  app.use('/api/users', usersRouter());
+  app.use('/api/customers', customersRouter());
+  app.use('/api/jobs', jobsRouter());
+  app.use('/api/plant', plantRouter());
+  app.use('/api', apiNotFound);
+
+  if (opts.clientDir && existsSync(join(opts.clientDir, 'index.html'))) {
+    app.use(express.static(opts.clientDir, { index: false, maxAge: '1h' }));
+    app.get(/^(?!\/api\/).*/, (_req, res) => res.sendFile(join(opts.clientDir!, 'index.html')));
+  }
+  app.use(errorHandler);
+  return app;
+}

@@ -1,0 +1,25 @@
+/** Settings from the environment, read once. Every variable is listed in the README. */
+export interface Config {
+  port: number;
+  host: string;
+  production: boolean;
+  demo: boolean;
+  sessionSecret: string;
+  sessionIdleMinutes: number;
+  loginAttemptsPer15Min: number;
+}
+
+export function readConfig(env: NodeJS.ProcessEnv = process.env): Config {
+  const production = env.NODE_ENV === 'production';
+  const sessionSecret = env.SESSION_SECRET ?? (production ? '' : 'spanwise-dev-session-secret');
+  if (!sessionSecret) throw new Error('SESSION_SECRET must be set when NODE_ENV=production');
+  return {
+    port: Number(env.PORT ?? 3000),
+    host: env.HOST ?? '127.0.0.1',
+    production,
+    demo: env.DEMO !== 'false',
+    sessionSecret,
+    sessionIdleMinutes: Number(env.SESSION_IDLE_MINUTES ?? 120),
+    loginAttemptsPer15Min: Number(env.LOGIN_ATTEMPTS ?? 10),
+  };
+}

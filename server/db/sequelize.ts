@@ -1,0 +1,17 @@
+import { Sequelize } from 'sequelize';
+import pg from 'pg';
+import { initModels } from '../models';
+
+// BIGINT counts (e.g. COUNT(*)) come back as numbers, not strings.
+pg.types.setTypeParser(20, (v) => Number(v));
+
+/** One Sequelize instance per process, models initialised on it. */
+export function connect(url: string, opts: { log?: boolean } = {}) {
+  const sequelize = new Sequelize(url, {
+    dialect: 'postgres',
+    logging: opts.log ? console.log : false,
+    pool: { max: 10, idle: 10_000 },
+  });
+  initModels(sequelize);
+  return sequelize;
+}

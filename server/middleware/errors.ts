@@ -1,0 +1,27 @@
+import type { ErrorRequestHandler, RequestHandler } from 'express';
+import { AppError } from '../errors';
+
+export const apiNotFound: RequestHandler = (_req, _res, next) =>
+  next(new AppError(404, 'not_found', 'No such API endpoint.'));
+
+/** Every error leaves as `{ error: { code, message, fields? } }`; nothing unexpected leaks. */
+export const errorHandler: ErrorRequestHandler = (err, _req, res, _next) => {
+  if (err instanceof AppError) {
+    res.status(err.status).json({ error: { code: err.code, message: err.message, fields: err.fields } });
+    return;
+  }
+  // Body-parser errors (malformed JSON, too large) are the client's mistake.
+  const status = (err as { status?: number; type?: string }).status;
+  if (status && status >= 400 && status < 500) {
+    const tooLarge = status === 413;
+    res.status(status).json({
+      error: {
+        code: tooLarge ? 'too_large' : 'invalid',
+        message: tooLarge ? 'The request is too large.' : 'The request body is not valid JSON.',
+      },
+    });
+    return;
+  }
+  console.error(err);
+  res.status(500).json({ error: { code: 'internal', message: 'Something went wrong on our side. Try again.' } });
+};

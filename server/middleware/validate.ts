@@ -1,0 +1,33 @@
+import type { RequestHandler } from 'express';
+import type { z } from 'zod';
+import { badRequest } from '../errors';
+
+/** Turn zod issues into `{ field: message }` the client shows beside each field. */
+export function fieldMessages(error: z.ZodError): Record<string, string> {
+  const fields: Record<string, string> = {};
+  for (const issue of error.issues) {
+    const key = issue.path.join('.') || '_';
+    if (!(key in fields)) fields[key] = issue.message;
+  }
+  return fields;
+}
+
+/** Parse `req.body` or `req.query` with a schema from shared/; the parsed value lands in res.locals. */
+export function validate<T extends z.ZodTypeAny>(schema: T, source: 'body' | 'query' = 'body'): RequestHandler {
+  return (req, res, next) => {
+    const parsed = schema.safeParse(source === 'body' ? (req.body ?? {}) : req.query);
+    if (!parsed.success) {
+      const fields = fieldMessages(parsed.error);
+      const first = Object.values(fields)[0] ?? 'Check the highlighted fields.';
+      return next(badRequest(first, fields));
+    }
+    res.locals[source] = parsed.data;
+    next();
+  };
+}
+
+/** Route ids are positive integers; anything else is simply not found. */
+export function parseId(raw: unknown): number | null {
+  const n = typeof raw === 'string' && /^\d{1,9}$/.test(raw) ? Number(raw) : NaN;
+  return Number.isSafeInteger(n) && n > 0 ? n : null;
+}

@@ -1,0 +1,1 @@
+export { listQuerySchema } from '../../../shared/api/list';
