@@ -1,0 +1,21 @@
+/** UI primitives of the Spanwise design system. */
+export { Alert, ErrorMessage, errorText } from './Alert';
+export type { AlertProps, AlertTone, ErrorMessageProps } from './Alert';
+export { Badge } from './Badge';
+export type { BadgeTone } from './Badge';
+export { Button } from './Button';
+export type { ButtonProps, ButtonVariant } from './Button';
+export { Card } from './Card';
+export { Dialog } from './Dialog';
+export { EmptyState } from './EmptyState';
+export { Field, fieldDescriptionIds } from './Field';
+export { focusRing } from './focus';
+export { Input, controlClass } from './Input';
+export { PageHeader } from './PageHeader';
+export { Pager } from './Pager';
+export { SearchBox } from './SearchBox';
+export { QueryState } from './QueryState';
+export { Select } from './Select';
+export { Spinner } from './Spinner';
+export { DataTable, coreTableFeatures, tableColumnHelper } from './Table';
+export type { TableColumn } from './Table';

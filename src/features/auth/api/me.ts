@@ -1,0 +1,23 @@
+import { queryOptions, useQuery } from '@tanstack/react-query';
+import { meSchema, type Me } from '../../../../shared/api/auth';
+import { api, isApiError } from '../../../lib/api-client';
+import { authKeys } from '../../../lib/query-keys';
+
+/** `GET /api/auth/me`: the signed-in user, plant and (for builders) company. Throws 401 when signed out. */
+export function fetchMe(signal?: AbortSignal): Promise<Me> {
+  return api.request('/api/auth/me', { schema: meSchema, signal });
+}
+
+/** Query options of the session; never retried on 401 (signed out is an answer, not a fault). */
+export const meQueryOptions = () =>
+  queryOptions({
+    queryKey: authKeys.me(),
+    queryFn: ({ signal }) => fetchMe(signal),
+    staleTime: 5 * 60_000,
+    retry: (count, error) => !(isApiError(error) && error.status === 401) && count < 2,
+  });
+
+/** The signed-in session (inside the guarded frame it is always loaded). */
+export function useMe() {
+  return useQuery(meQueryOptions());
+}

@@ -1,0 +1,53 @@
+/**
+ * Hierarchical query keys, one factory per resource. Mutations invalidate a prefix (`users.all`)
+ * so every list and detail below it refetches.
+ */
+
+/** Parameters of a paged list, as they appear in the key (and the URL). */
+export interface ListParams {
+  q?: string;
+  page?: number;
+  pageSize?: number;
+  sort?: string;
+}
+
+/** Builds the standard `all / lists / list / details / detail` factory for one resource. */
+function resourceKeys<const R extends string>(resource: R) {
+  const all = [resource] as const;
+  return {
+    all,
+    lists: () => [...all, 'list'] as const,
+    list: (params: ListParams = {}) => [...all, 'list', params] as const,
+    details: () => [...all, 'detail'] as const,
+    detail: (id: number) => [...all, 'detail', id] as const,
+  };
+}
+
+/** Query keys of the signed-in session. */
+export const authKeys = {
+  all: ['auth'] as const,
+  me: () => ['auth', 'me'] as const,
+  health: () => ['auth', 'health'] as const,
+};
+
+/** Query keys of plant users (admin). */
+export const userKeys = resourceKeys('users');
+/** Query keys of builder companies (customers). */
+export const customerKeys = resourceKeys('customers');
+/** Query keys of jobs. */
+export const jobKeys = resourceKeys('jobs');
+
+/** Query keys of the signed-in user's plant. */
+export const plantKeys = {
+  all: ['plant'] as const,
+  summary: () => ['plant', 'summary'] as const,
+};
+
+/** Every factory by resource name. */
+export const queryKeys = {
+  auth: authKeys,
+  users: userKeys,
+  customers: customerKeys,
+  jobs: jobKeys,
+  plant: plantKeys,
+};
