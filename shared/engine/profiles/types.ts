@@ -1,15 +1,7 @@
 import type { Joint, Support } from '../analysis/types';
 
 export type ProfileKind =
-  | 'kingPost'
-  | 'queenPost'
-  | 'fink'
-  | 'howe'
-  | 'fan'
-  | 'doubleFink'
-  | 'scissor'
-  | 'mono'
-  | 'flat';
+  'kingPost' | 'queenPost' | 'fink' | 'howe' | 'fan' | 'doubleFink' | 'scissor' | 'mono' | 'flat';
 
 export type MemberRole = 'topChord' | 'bottomChord' | 'web';
 

@@ -1,0 +1,114 @@
+/** A point of the line model, mm. */
+export interface Point {
+  x: number;
+  y: number;
+}
+
+/**
+ * A profile family's geometry before labels: points, the two chord lines through them and the
+ * webs. The assembler turns it into joints, members and pieces.
+ */
+export interface Layout {
+  points: Point[];
+  /** Point indices along the top chord, left to right. */
+  top: number[];
+  /** Point indices along the bottom chord, left to right. */
+  bottom: number[];
+  /** Web members as pairs of point indices. */
+  webs: Array<readonly [number, number]>;
+  /** Positions in `top` where the chord changes direction (a piece ends there), e.g. the peak. */
+  topBreaks: number[];
+  /** Positions in `bottom` where the chord changes direction (scissor bottom peak). */
+  bottomBreaks: number[];
+  /** Height of the highest top-chord point above the bearing line, mm. */
+  rise: number;
+}
+
+/** A web end: an interior top-chord (`t`) or bottom-chord (`b`) panel point, by index. */
+export type WebEnd = readonly ['t' | 'b', number];
+
+/** The interior panel points of a pitched family; the heels are added by `pitchedLayout`. */
+export interface PitchedSpec {
+  span: number;
+  heelHeight: number;
+  /** Top and bottom chord lines, y as a function of x (bottomY(0) = bottomY(span) = 0). */
+  topY: (x: number) => number;
+  bottomY: (x: number) => number;
+  /** Interior panel points strictly between the bearings, left to right. */
+  topXs: number[];
+  bottomXs: number[];
+  webs: Array<readonly [WebEnd, WebEnd]>;
+  /** Index in `topXs` of the peak, where the top chord breaks into two pieces. */
+  peak?: number;
+  /** Index in `bottomXs` of the bottom-chord peak (scissor). */
+  bottomPeak?: number;
+  /** 'heel': a heel like the left one; 'tallEnd': the high end of a mono, always a vertical. */
+  rightEnd: 'heel' | 'tallEnd';
+  rise: number;
+}
+
+/**
+ * Builds a pitched layout from its interior panel points and adds the heels: with heelHeight 0
+ * the top and bottom chords meet at the bearing joint; with a raised heel a heel post runs up to
+ * the top chord and a heel diagonal from its top to the first interior bottom-chord panel point
+ * triangulates the end panel (without it the end panel would be a four-sided mechanism).
+ */
+export const pitchedLayout = (spec: PitchedSpec): Layout => {
+  const points: Point[] = [];
+  const add = (x: number, y: number): number => points.push({ x, y }) - 1;
+  const webs: Array<readonly [number, number]> = [];
+  const { span, heelHeight } = spec;
+  const raised = heelHeight > 0;
+
+  const bottom = [add(0, 0)];
+  for (const x of spec.bottomXs) bottom.push(add(x, spec.bottomY(x)));
+  bottom.push(add(span, 0));
+  const firstInterior = bottom[1];
+  const lastInterior = bottom[bottom.length - 2];
+  const rightBearing = bottom[bottom.length - 1];
+
+  const top: number[] = [];
+  if (raised) {
+    const heel = add(0, heelHeight);
+    top.push(heel);
+    webs.push([bottom[0], heel], [heel, firstInterior]);
+  } else {
+    top.push(bottom[0]);
+  }
+  const topInterior = spec.topXs.map((x) => add(x, spec.topY(x)));
+  top.push(...topInterior);
+  if (spec.rightEnd === 'tallEnd') {
+    const end = add(span, spec.topY(span));
+    top.push(end);
+    webs.push([rightBearing, end]);
+  } else if (raised) {
+    const heel = add(span, heelHeight);
+    top.push(heel);
+    webs.push([lastInterior, heel], [rightBearing, heel]);
+  } else {
+    top.push(rightBearing);
+  }
+
+  const at = ([chord, i]: WebEnd): number => (chord === 't' ? topInterior[i] : bottom[i + 1]);
+  for (const [a, b] of spec.webs) webs.push([at(a), at(b)]);
+
+  return {
+    points,
+    top,
+    bottom,
+    webs,
+    // +1: position 0 of each chord list is the heel.
+    topBreaks: spec.peak === undefined ? [] : [spec.peak + 1],
+    bottomBreaks: spec.bottomPeak === undefined ? [] : [spec.bottomPeak + 1],
+    rise: spec.rise,
+  };
+};
+
+/** Top chord line of a symmetric pitched truss: heel height plus slope × distance to the nearer heel. */
+export const gableTopY =
+  (span: number, pitch: number, heelHeight: number) =>
+  (x: number): number =>
+    heelHeight + (Math.min(x, span - x) * pitch) / 12;
+
+/** A flat bottom chord on the bearing line. */
+export const flatBottomY = (): number => 0;
