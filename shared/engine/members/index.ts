@@ -1,0 +1,4 @@
+export * from './columnStability';
+export * from './interaction';
+export * from './checkMember';
+export * from './bearing';
