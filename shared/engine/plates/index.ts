@@ -1,0 +1,15 @@
+/** Connector plates: catalogs (demo and plant) and the per-joint plate choice. */
+export { DEMO_PLATE_CATALOG, DEMO_PLATE_LABEL, validatePlateCatalog } from './catalog';
+export { designJointPlate, lateralValueAtAngle } from './design';
+export type {
+  Direction,
+  JointPlateDesign,
+  MemberPlateCheck,
+  PlateCatalog,
+  PlateDesignOptions,
+  PlateJoint,
+  PlateJointKind,
+  PlateJointMember,
+  PlateSpec,
+  SteelCheck,
+} from './types';
