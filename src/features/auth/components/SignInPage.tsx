@@ -16,11 +16,7 @@ import { useHealth } from '../api/health';
 import { useLogin } from '../api/login';
 import { DEMO_ACCOUNTS, DEMO_PASSWORD } from '../demo-accounts';
 import { BrandMark } from './BrandMark';
-
-/** Only same-site paths are followed after sign-in (no open redirect). */
-export function safeReturnPath(from: string | null): string {
-  return from && from.startsWith('/') && !from.startsWith('//') && from !== '/sign-in' ? from : '/';
-}
+import { safeReturnPath } from '../return-path';
 
 /** The sign-in screen at `/sign-in`. */
 export function SignInPage() {

@@ -1,19 +1,12 @@
 import type { Me } from '../../../../shared/api/auth';
-import { ROLE_LABELS, ROLES, type Role } from '../../../../shared/api/roles';
-import type { User } from '../../../../shared/api/users';
+import { ROLE_LABELS, ROLES } from '../../../../shared/api/roles';
 import { ErrorMessage, PageHeader } from '../../../components/ui';
+import { countUsersByRole } from '../user-counts';
 import { useBuilders, useRecentJobs, useUsersOverview } from '../api/dashboard-queries';
 import { CautionsPanel } from './CautionsPanel';
 import { TextLink } from './links';
 import { RecentJobs } from './RecentJobs';
 import { StatTile } from './StatTile';
-
-/** Active users per role (deactivated users do not count). */
-export function countUsersByRole(users: readonly User[]): Record<Role, number> {
-  const counts = Object.fromEntries(ROLES.map((r) => [r, 0])) as Record<Role, number>;
-  for (const user of users) if (user.active) counts[user.role] += 1;
-  return counts;
-}
 
 /** Admin landing page: "Plant overview". */
 export function AdminOverview({ me }: { me: Me }) {
