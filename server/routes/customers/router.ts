@@ -20,7 +20,7 @@ export function customersRouter() {
   const router = Router();
   const attributes = { include: [[jobCount, 'jobCount']] as [typeof jobCount, string][] };
   const findCustomer = (id: number, actor: User) =>
-    Customer.findOne({ where: { id, ...customerPolicy.scope(actor) }, attributes });
+    Customer.findOne({ where: { [Op.and]: [{ id }, customerPolicy.scope(actor)] }, attributes });
 
   router.get('/', requireUser, validate(listQuerySchema, 'query'), authorize(customerPolicy.list), handle(async (req, res) => {
     const q = res.locals.query as ListQuery;

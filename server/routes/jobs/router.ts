@@ -19,7 +19,7 @@ const SORT = { name: 'name', createdAt: 'createdAt', customerName: ['customer', 
 export function jobsRouter() {
   const router = Router();
   const findJob = (id: number, actor: User) =>
-    Job.findOne({ where: { id, ...jobPolicy.scope(actor) }, include: withCustomer });
+    Job.findOne({ where: { [Op.and]: [{ id }, jobPolicy.scope(actor)] }, include: withCustomer });
 
   router.get('/', requireUser, validate(listQuerySchema, 'query'), authorize(jobPolicy.list), handle(async (req, res) => {
     const q = res.locals.query as ListQuery;

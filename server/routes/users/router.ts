@@ -20,7 +20,7 @@ const SORT = { name: 'name', email: 'email', role: 'role', createdAt: 'createdAt
 export function usersRouter() {
   const router = Router();
   const findUser = (id: number, actor: User) =>
-    User.findOne({ where: { id, ...userPolicy.scope(actor) }, include: withCustomer });
+    User.findOne({ where: { [Op.and]: [{ id }, userPolicy.scope(actor)] }, include: withCustomer });
 
   router.get('/', requireUser, validate(listQuerySchema, 'query'), authorize(userPolicy.list), handle(async (req, res) => {
     const q = res.locals.query as ListQuery;

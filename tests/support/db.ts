@@ -1,0 +1,29 @@
+import type { Sequelize } from 'sequelize';
+import { connect } from '../../server/db/sequelize';
+import { createApp } from '../../server/app';
+
+/** The database `npm test` started (scripts/test.ts sets TEST_DATABASE_URL). */
+export function testDatabaseUrl() {
+  const url = process.env.TEST_DATABASE_URL;
+  if (!url) throw new Error('TEST_DATABASE_URL is not set: run the integration tests through `npm test`.');
+  return url;
+}
+
+let shared: Sequelize | null = null;
+
+/** One Sequelize per test file's worker. */
+export function testSequelize() {
+  shared ??= connect(testDatabaseUrl());
+  return shared;
+}
+
+/** A fresh app on the test database; options override config (e.g. the sign-in limit). */
+export function testApp(config: Parameters<typeof createApp>[0]['config'] = {}, clientDir?: string) {
+  const sequelize = testSequelize();
+  return createApp({
+    sequelize,
+    databaseUrl: testDatabaseUrl(),
+    config: { demo: false, loginAttemptsPer15Min: 1000, ...config },
+    clientDir,
+  });
+}
