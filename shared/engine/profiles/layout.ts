@@ -1,3 +1,6 @@
+import { EngineError } from '../errors';
+import { MIN_JOINT_ANGLE_DEG, describeLength } from './limits';
+
 /** A point of the line model, mm. */
 export interface Point {
   x: number;
@@ -67,6 +70,12 @@ export const pitchedLayout = (spec: PitchedSpec): Layout => {
   const lastInterior = bottom[bottom.length - 2];
   const rightBearing = bottom[bottom.length - 1];
 
+  if (raised) {
+    checkHeelPanel(heelHeight, spec.bottomXs[0]);
+    if (spec.rightEnd === 'heel')
+      checkHeelPanel(heelHeight, span - spec.bottomXs[spec.bottomXs.length - 1]);
+  }
+
   const top: number[] = [];
   if (raised) {
     const heel = add(0, heelHeight);
@@ -102,6 +111,24 @@ export const pitchedLayout = (spec: PitchedSpec): Layout => {
     bottomBreaks: spec.bottomPeak === undefined ? [] : [spec.bottomPeak + 1],
     rise: spec.rise,
   };
+};
+
+/**
+ * The heel diagonal meets the bottom chord at atan(heel / run); a heel too low for the run makes a
+ * sliver panel. Caught here, before the general joint-angle check, to say which heel would do.
+ */
+const checkHeelPanel = (heelHeight: number, run: number): void => {
+  const tan = Math.tan((MIN_JOINT_ANGLE_DEG * Math.PI) / 180);
+  if (heelHeight >= run * tan) return;
+  // Suggest a heel rounded up to the next half inch, the way the trade measures it.
+  const suggestion = Math.ceil((run * tan) / 12.7) * 12.7;
+  throw new EngineError(
+    'geometry',
+    `A raised heel of ${describeLength(heelHeight)} is too low for this span: the end panel ` +
+      `would be a sliver. Use a heel of at least ${describeLength(suggestion)}, or 0 for a ` +
+      `pointed heel.`,
+    { field: 'heelHeight', value: heelHeight, min: suggestion },
+  );
 };
 
 /** Top chord line of a symmetric pitched truss: heel height plus slope × distance to the nearer heel. */

@@ -8,7 +8,7 @@ import { describeLength } from './limits';
  * sits at the panel point between member k − 1 and member k), ascending. A run that fits is not
  * cut; otherwise the cut goes at the interior panel point nearest the middle that keeps both
  * parts within stock, and when no single cut does, at the point nearest the middle and each part
- * is cut again. Throws EngineError('geometry') when one member alone is longer than the stock.
+ * is cut again (ties go to the left). Throws EngineError('geometry') when one member alone is longer than the stock.
  */
 export const spliceRun = (
   lengths: readonly number[],
@@ -38,8 +38,11 @@ export const spliceRun = (
     for (let k = from + 1; k < to; k++) {
       const fits = prefix[k] - prefix[from] <= limit && prefix[to] - prefix[k] <= limit;
       const distance = Math.abs(prefix[k] - middle);
-      // A cut that keeps both parts within stock always beats one that does not.
-      if ((fits && !bestFits) || (fits === bestFits && distance < bestDistance)) {
+      // A cut that keeps both parts within stock always beats one that does not; of two equally
+      // near the middle (a symmetric chord), the left one wins so the result does not hang on
+      // rounding.
+      const nearer = distance < bestDistance - TOLERANCE * total;
+      if ((fits && !bestFits) || (fits === bestFits && nearer)) {
         best = k;
         bestFits = fits;
         bestDistance = distance;

@@ -98,7 +98,8 @@ describe('generateProfile: determinate, stable plane trusses', () => {
         for (const heelHeight of heels) {
           const bottomPitches = kind === 'scissor' ? [0, pitch / 2 - 1, pitch / 2] : [undefined];
           for (const bottomPitch of bottomPitches) {
-            if (bottomPitch !== undefined && (bottomPitch < 0 || bottomPitch >= pitch - 2)) continue;
+            if (bottomPitch !== undefined && (bottomPitch < 0 || bottomPitch >= pitch - 2))
+              continue;
             const p = tryGenerate(base(kind, { span, pitch, heelHeight, bottomPitch }));
             if (!p) continue;
             built++;
@@ -128,14 +129,16 @@ describe('generateProfile: determinate, stable plane trusses', () => {
 });
 
 describe('generateProfile: geometry', () => {
-  const heels = [0, 8 * IN];
+  const heels = [0, 12 * IN];
 
   it.each(SYMMETRIC)('%s joints mirror about mid-span', (kind) => {
     for (const heelHeight of heels) {
       const p = generateProfile(base(kind, { heelHeight }));
       const L = p.params.span;
       for (const j of p.joints) {
-        const mirror = p.joints.find((k) => Math.abs(k.x - (L - j.x)) < 1e-6 && Math.abs(k.y - j.y) < 1e-6);
+        const mirror = p.joints.find(
+          (k) => Math.abs(k.x - (L - j.x)) < 1e-6 && Math.abs(k.y - j.y) < 1e-6,
+        );
         expect(mirror, `mirror of ${j.id}`).toBeDefined();
       }
     }
@@ -144,7 +147,9 @@ describe('generateProfile: geometry', () => {
   it('flat joints mirror about mid-span', () => {
     const p = generateProfile(base('flat'));
     for (const j of p.joints) {
-      expect(p.joints.some((k) => Math.abs(k.x - (p.params.span - j.x)) < 1e-6 && k.y === j.y)).toBe(true);
+      expect(
+        p.joints.some((k) => Math.abs(k.x - (p.params.span - j.x)) < 1e-6 && k.y === j.y),
+      ).toBe(true);
     }
   });
 
@@ -168,7 +173,7 @@ describe('generateProfile: geometry', () => {
   });
 
   it.each([...PITCHED, 'flat' as const])('%s member lengths by Pythagoras', (kind) => {
-    const p = generateProfile(base(kind, { heelHeight: 8 * IN }));
+    const p = generateProfile(base(kind, { heelHeight: 12 * IN }));
     const at = new Map(p.joints.map((j) => [j.id, j]));
     for (const m of p.members) {
       const a = at.get(m.from)!;
@@ -214,7 +219,9 @@ describe('generateProfile: geometry', () => {
 
 describe('generateProfile: pieces and overhangs', () => {
   it.each([...PITCHED, 'flat' as const])('%s piece lengths add up', (kind) => {
-    const p = generateProfile(base(kind, { heelHeight: 8 * IN, overhangLeft: 12 * IN, overhangRight: 24 * IN }));
+    const p = generateProfile(
+      base(kind, { heelHeight: 12 * IN, overhangLeft: 12 * IN, overhangRight: 24 * IN }),
+    );
     const sum = (xs: number[]) => xs.reduce((s, x) => s + x, 0);
     const overhang = sum(p.overhangs.map((o) => o.slopeLength));
     for (const role of ['topChord', 'bottomChord', 'web'] as const) {
@@ -225,7 +232,9 @@ describe('generateProfile: pieces and overhangs', () => {
     // Every member sits in exactly one piece; each web is its own piece.
     const carried = p.pieces.flatMap((x) => x.members).sort();
     expect(carried).toEqual(p.members.map((m) => m.id).sort());
-    expect(p.pieces.filter((x) => x.role === 'web').every((x) => x.members.length === 1)).toBe(true);
+    expect(p.pieces.filter((x) => x.role === 'web').every((x) => x.members.length === 1)).toBe(
+      true,
+    );
   });
 
   // Slope length = horizontal × √(1 + (pitch/12)²), Pythagoras on the roof slope.
@@ -233,7 +242,12 @@ describe('generateProfile: pieces and overhangs', () => {
     const p = generateProfile(base('fink', { pitch: 5, overhangLeft: 24 * IN, overhangRight: 0 }));
     expect(p.overhangs).toHaveLength(1);
     const [o] = p.overhangs;
-    expect(o).toMatchObject({ side: 'left', heelJoint: 'A', horizontal: 24 * IN, member: p.members[0].id });
+    expect(o).toMatchObject({
+      side: 'left',
+      heelJoint: 'A',
+      horizontal: 24 * IN,
+      member: p.members[0].id,
+    });
     expect(o.slopeLength).toBeWithin(24 * IN * Math.sqrt(1 + (5 / 12) ** 2), { rel: 1e-12 });
     expect(p.members.some((m) => m.from === 'A' && p.topChordJoints.includes(m.to))).toBe(true);
   });
