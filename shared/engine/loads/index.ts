@@ -1,0 +1,3 @@
+export * from './snow';
+export * from './combinations';
+export * from './areaLoads';
