@@ -1,0 +1,391 @@
+import { z } from 'zod';
+import type { ProfileKind, ProfileParams } from '../engine/profiles/types';
+import { inch, inchToMm, KPA_PER_PSF, type MPa, type Mm, mm } from '../engine/units';
+
+/**
+ * The design input contract: one truss as the sales desk describes it. Shared by the CLI,
+ * `POST /api/designs/preview` and the browser form. Numbers are in the user's units:
+ * imperial = inches, psf; metric = mm, kPa. `pitch` and `bottomPitch` are rise per 12.
+ *
+ * Defaults (common practice): spacing 24 in / 610 mm, overhang 0, heel 0, plies 1, bearing
+ * 3.5 in / 89 mm, deflection L/240 live and L/180 total, snow Ce = Ct = Is = 1.0 on a
+ * non-slippery roof by ASCE 7-16.
+ */
+
+/** Every profile the engine generates (mirrors `ProfileKind`). */
+export const PROFILE_KINDS = [
+  'kingPost',
+  'queenPost',
+  'fink',
+  'howe',
+  'fan',
+  'doubleFink',
+  'scissor',
+  'mono',
+  'flat',
+] as const satisfies readonly ProfileKind[];
+
+/** Dressed lumber sizes a design may name (NDS 2018 Supplement Table 1A sizes). */
+export const LUMBER_SIZES = ['2x3', '2x4', '2x6', '2x8', '2x10', '2x12'] as const;
+/** Species/grade ids of the lumber table. */
+export const LUMBER_GRADES = [
+  'SPF-1/2',
+  'DFL-1',
+  'DFL-2',
+  'HF-1',
+  'HF-2',
+  'SP-1',
+  'SP-2',
+  'MSR-1650-1.5E',
+  'MSR-2100-1.8E',
+] as const;
+
+const LUMBER_IDS = new Set(LUMBER_SIZES.flatMap((s) => LUMBER_GRADES.map((g) => `${s} ${g}`)));
+
+/** ASCE 7 editions the snow calculation knows. */
+export const SNOW_EDITIONS = ['7-16', '7-22'] as const;
+
+const num = (label: string) =>
+  z
+    .number({ error: `${label} must be a number` })
+    .refine(Number.isFinite, `${label} must be a number`);
+
+const lumberId = z
+  .string({ error: 'Pick a lumber size and grade, e.g. "2x4 SPF-1/2"' })
+  .trim()
+  .refine((id) => LUMBER_IDS.has(id), {
+    error: (iss) =>
+      `"${String(iss.input)}" is not a known lumber size and grade; use e.g. "2x4 SPF-1/2"`,
+  });
+const lumberChoice = z.union([
+  lumberId,
+  z.array(lumberId).min(1, 'Allow at least one lumber size and grade'),
+]);
+
+const baseSchema = z.object({
+  units: z.enum(['imperial', 'metric'], { error: 'Units must be imperial or metric' }),
+  profile: z.enum(PROFILE_KINDS, {
+    error: `Truss type must be one of ${PROFILE_KINDS.join(', ')}`,
+  }),
+  span: num('Span'),
+  pitch: num('Pitch').optional(),
+  heelHeight: num('Heel height').default(0),
+  overhang: z
+    .union([
+      num('Overhang'),
+      z.object({ left: num('Left overhang'), right: num('Right overhang') }),
+    ])
+    .default(0),
+  spacing: num('Spacing').optional(),
+  plies: z
+    .number({ error: 'Plies must be a number' })
+    .int('Plies must be a whole number')
+    .min(1, 'Plies must be between 1 and 4')
+    .max(4, 'Plies must be between 1 and 4')
+    .default(1),
+  bottomPitch: num('Bottom-chord pitch').optional(),
+  depth: num('Depth').optional(),
+  panels: z
+    .number({ error: 'Panels must be a number' })
+    .int('Panels must be a whole number')
+    .optional(),
+  loads: z.object(
+    {
+      tcll: num('TCLL'),
+      tcdl: num('TCDL'),
+      bcll: num('BCLL'),
+      bcdl: num('BCDL'),
+      bcllNonConcurrent: num('Non-concurrent BCLL').optional(),
+      snow: z
+        .object({
+          pg: num('Ground snow load'),
+          ce: num('Exposure factor Ce').optional(),
+          ct: num('Thermal factor Ct').optional(),
+          is: num('Importance factor Is').optional(),
+          slippery: z.boolean({ error: 'Slippery roof must be yes or no' }).optional(),
+          edition: z
+            .enum(SNOW_EDITIONS, { error: 'ASCE 7 edition must be 7-16 or 7-22' })
+            .optional(),
+        })
+        .optional(),
+      windUplift: num('Wind uplift').optional(),
+    },
+    { error: 'Enter the design loads (TCLL, TCDL, BCLL, BCDL)' },
+  ),
+  lumber: z
+    .object({
+      topChord: lumberChoice.optional(),
+      bottomChord: lumberChoice.optional(),
+      webs: lumberChoice.optional(),
+    })
+    .optional(),
+  bearingWidth: num('Bearing width').optional(),
+  deflection: z
+    .object({
+      live: num('Live-load deflection limit').optional(),
+      total: num('Total-load deflection limit').optional(),
+    })
+    .optional(),
+  webBraces: z
+    .array(
+      z
+        .string({ error: 'A braced web is named by its member id, e.g. "BK"' })
+        .trim()
+        .regex(/^[A-Za-z0-9]{2,12}$/, 'A braced web is named by its member id, e.g. "BK"'),
+    )
+    .optional(),
+  maxStockLength: num('Longest stock length').optional(),
+});
+
+type Base = z.infer<typeof baseSchema>;
+type Units = Base['units'];
+
+/** A limit in both unit systems, with the words the message shows. */
+interface Limit {
+  label: string;
+  imperial: [number, number, string, string];
+  metric: [number, number, string, string];
+}
+const same = (lo: number, hi: number, a: string, b: string): Limit['imperial'] => [lo, hi, a, b];
+const lim = (label: string, imperial: Limit['imperial'], metric = imperial): Limit => ({
+  label,
+  imperial,
+  metric,
+});
+
+// Field ranges a truss plant works within (common practice; DESIGN.md §1): wide enough for
+// any residential or light-commercial truss, narrow enough to catch a unit slip.
+const LIMITS = {
+  span: lim('Span', [48, 960, '4 ft', '80 ft'], [1200, 24400, '1.2 m', '24.4 m']),
+  pitch: lim('Pitch', same(1, 24, '1/12', '24/12')),
+  heelHeight: lim('Heel height', [0, 48, '0', '48 in'], [0, 1200, '0', '1200 mm']),
+  overhang: lim('Overhang', [0, 48, '0', '48 in'], [0, 1200, '0', '1200 mm']),
+  spacing: lim('Spacing', [12, 48, '12 in', '48 in'], [300, 1200, '300 mm', '1200 mm']),
+  depth: lim('Depth', [12, 96, '12 in', '96 in'], [300, 2400, '300 mm', '2400 mm']),
+  bearingWidth: lim('Bearing width', [1.5, 24, '1.5 in', '24 in'], [38, 600, '38 mm', '600 mm']),
+  maxStockLength: lim(
+    'Longest stock length',
+    [96, 480, '8 ft', '40 ft'],
+    [2400, 12200, '2.4 m', '12.2 m'],
+  ),
+  areaLoad: lim('', [0, 200, '0', '200 psf'], [0, 9.6, '0', '9.6 kPa']),
+  snowLoad: lim('Ground snow load', [0, 300, '0', '300 psf'], [0, 14.4, '0', '14.4 kPa']),
+  deflection: lim('', same(60, 1200, 'L/60', 'L/1200')),
+} satisfies Record<string, Limit>;
+
+const LOAD_LABELS = {
+  tcll: 'TCLL',
+  tcdl: 'TCDL',
+  bcll: 'BCLL',
+  bcdl: 'BCDL',
+  bcllNonConcurrent: 'Non-concurrent BCLL',
+  windUplift: 'Wind uplift',
+} as const;
+
+/** Checks ranges in the user's units, so the message speaks them ("between 4 ft and 80 ft"). */
+const checkRanges = (v: Base, ctx: z.RefinementCtx): void => {
+  const within = (
+    path: (string | number)[],
+    value: number | undefined,
+    l: Limit,
+    label = l.label,
+  ) => {
+    if (value === undefined) return;
+    const [lo, hi, a, b] = l[v.units as Units];
+    if (value < lo || value > hi) {
+      ctx.addIssue({ code: 'custom', path, message: `${label} must be between ${a} and ${b}` });
+    }
+  };
+  const factor = (
+    path: string[],
+    value: number | undefined,
+    lo: number,
+    hi: number,
+    label: string,
+  ) => {
+    if (value !== undefined && (value < lo || value > hi)) {
+      ctx.addIssue({ code: 'custom', path, message: `${label} must be between ${lo} and ${hi}` });
+    }
+  };
+  within(['span'], v.span, LIMITS.span);
+  if (v.profile !== 'flat') {
+    if (v.pitch === undefined)
+      ctx.addIssue({ code: 'custom', path: ['pitch'], message: 'Enter a pitch, e.g. 6 for 6/12' });
+    within(['pitch'], v.pitch, LIMITS.pitch);
+  }
+  within(['heelHeight'], v.heelHeight, LIMITS.heelHeight);
+  if (typeof v.overhang === 'number') within(['overhang'], v.overhang, LIMITS.overhang);
+  else {
+    within(['overhang', 'left'], v.overhang.left, LIMITS.overhang, 'Left overhang');
+    within(['overhang', 'right'], v.overhang.right, LIMITS.overhang, 'Right overhang');
+  }
+  within(['spacing'], v.spacing, LIMITS.spacing);
+  within(['bearingWidth'], v.bearingWidth, LIMITS.bearingWidth);
+  within(['maxStockLength'], v.maxStockLength, LIMITS.maxStockLength);
+  if (v.profile === 'scissor') {
+    if (v.bottomPitch === undefined) {
+      ctx.addIssue({
+        code: 'custom',
+        path: ['bottomPitch'],
+        message: 'A scissor truss needs a bottom-chord pitch',
+      });
+    } else if (v.bottomPitch <= 0 || (v.pitch !== undefined && v.bottomPitch >= v.pitch)) {
+      ctx.addIssue({
+        code: 'custom',
+        path: ['bottomPitch'],
+        message: 'Bottom-chord pitch must be above 0 and below the top pitch',
+      });
+    }
+  }
+  if (v.profile === 'flat') {
+    if (v.depth === undefined)
+      ctx.addIssue({ code: 'custom', path: ['depth'], message: 'A flat truss needs a depth' });
+    within(['depth'], v.depth, LIMITS.depth);
+  }
+  if (v.panels !== undefined && (v.panels < 2 || v.panels > 24 || v.panels % 2 !== 0)) {
+    ctx.addIssue({
+      code: 'custom',
+      path: ['panels'],
+      message: 'Panels must be an even number from 2 to 24',
+    });
+  }
+  for (const key of ['tcll', 'tcdl', 'bcll', 'bcdl', 'bcllNonConcurrent', 'windUplift'] as const) {
+    within(['loads', key], v.loads[key], LIMITS.areaLoad, LOAD_LABELS[key]);
+  }
+  const snow = v.loads.snow;
+  if (snow) {
+    within(['loads', 'snow', 'pg'], snow.pg, LIMITS.snowLoad);
+    // ASCE 7-16 Table 7.3-1 (Ce), Table 7.3-2 (Ct), Table 1.5-2 (Is) ranges (references §3).
+    factor(['loads', 'snow', 'ce'], snow.ce, 0.7, 1.3, 'Exposure factor Ce');
+    factor(['loads', 'snow', 'ct'], snow.ct, 0.85, 1.3, 'Thermal factor Ct');
+    factor(['loads', 'snow', 'is'], snow.is, 0.8, 1.2, 'Importance factor Is');
+  }
+  within(
+    ['deflection', 'live'],
+    v.deflection?.live,
+    LIMITS.deflection,
+    'Live-load deflection limit',
+  );
+  within(
+    ['deflection', 'total'],
+    v.deflection?.total,
+    LIMITS.deflection,
+    'Total-load deflection limit',
+  );
+};
+
+// Unit-dependent defaults (common practice): 24 in ≈ 610 mm spacing, 3.5 in ≈ 89 mm bearing
+// (a 2x4 plate), deflection L/240 live and L/180 total (IBC Table 1604.3, non-plaster ceiling).
+const DEFAULTS = {
+  imperial: { spacing: 24, bearingWidth: 3.5 },
+  metric: { spacing: 610, bearingWidth: 89 },
+} as const;
+
+const withDefaults = (v: Base) => ({
+  ...v,
+  pitch: v.pitch ?? 0,
+  spacing: v.spacing ?? DEFAULTS[v.units].spacing,
+  bearingWidth: v.bearingWidth ?? DEFAULTS[v.units].bearingWidth,
+  deflection: { live: v.deflection?.live ?? 240, total: v.deflection?.total ?? 180 },
+  webBraces: v.webBraces ?? [],
+});
+
+/** Parses and checks a design request; the output has every default filled in. */
+export const designInputSchema = baseSchema.superRefine(checkRanges).transform(withDefaults);
+
+/** A checked design request with defaults applied (user units). */
+export type DesignInput = z.infer<typeof designInputSchema>;
+/** What a client may send (defaults still optional). */
+export type DesignInputDraft = z.input<typeof designInputSchema>;
+
+/** Area load in N/mm² (numerically MPa; 1 kPa = 0.001 N/mm²). */
+export type AreaLoad = MPa;
+
+/** The design request in engine units: lengths mm, area loads N/mm², chords as allowed lists. */
+export interface EngineDesignInput {
+  profile: ProfileParams;
+  spacing: Mm;
+  plies: number;
+  loads: {
+    tcll: AreaLoad;
+    tcdl: AreaLoad;
+    bcll: AreaLoad;
+    bcdl: AreaLoad;
+    bcllNonConcurrent?: AreaLoad;
+    snow?: {
+      pg: AreaLoad;
+      ce: number;
+      ct: number;
+      is: number;
+      slippery: boolean;
+      edition: (typeof SNOW_EDITIONS)[number];
+    };
+    windUplift?: AreaLoad;
+  };
+  /** Allowed lumber ids per role, cheapest-first choice left to sizing; absent = plant default. */
+  lumber: { topChord?: string[]; bottomChord?: string[]; webs?: string[] };
+  bearingWidth: Mm;
+  /** Span / deflection limits, e.g. 240 for L/240. */
+  deflection: { live: number; total: number };
+  webBraces: string[];
+}
+
+const list = (c: string | string[] | undefined) => (c === undefined ? undefined : [c].flat());
+
+/** Converts a checked request to SI, splitting the overhang into left and right. */
+export const toEngineInput = (input: DesignInput): EngineDesignInput => {
+  const imperial = input.units === 'imperial';
+  const len = (v: number): Mm => (imperial ? inchToMm(inch(v)) : mm(v));
+  // psf → kPa (exact by definition of lbf and ft), then kPa → N/mm².
+  const area = (v: number): AreaLoad => ((imperial ? v * KPA_PER_PSF : v) / 1000) as AreaLoad;
+  const optArea = (v: number | undefined) => (v === undefined ? undefined : area(v));
+  const oh =
+    typeof input.overhang === 'number'
+      ? { left: input.overhang, right: input.overhang }
+      : input.overhang;
+  const { snow } = input.loads;
+  return {
+    profile: {
+      kind: input.profile,
+      span: len(input.span),
+      pitch: input.pitch,
+      heelHeight: len(input.heelHeight),
+      overhangLeft: len(oh.left),
+      overhangRight: len(oh.right),
+      ...(input.bottomPitch !== undefined && { bottomPitch: input.bottomPitch }),
+      ...(input.depth !== undefined && { depth: len(input.depth) }),
+      ...(input.panels !== undefined && { panels: input.panels }),
+      ...(input.maxStockLength !== undefined && { maxStockLength: len(input.maxStockLength) }),
+    },
+    spacing: len(input.spacing),
+    plies: input.plies,
+    loads: {
+      tcll: area(input.loads.tcll),
+      tcdl: area(input.loads.tcdl),
+      bcll: area(input.loads.bcll),
+      bcdl: area(input.loads.bcdl),
+      ...(input.loads.bcllNonConcurrent !== undefined && {
+        bcllNonConcurrent: optArea(input.loads.bcllNonConcurrent),
+      }),
+      ...(snow && {
+        snow: {
+          pg: area(snow.pg),
+          ce: snow.ce ?? 1,
+          ct: snow.ct ?? 1,
+          is: snow.is ?? 1,
+          slippery: snow.slippery ?? false,
+          edition: snow.edition ?? '7-16',
+        },
+      }),
+      ...(input.loads.windUplift !== undefined && { windUplift: optArea(input.loads.windUplift) }),
+    },
+    lumber: {
+      ...(input.lumber?.topChord && { topChord: list(input.lumber.topChord) }),
+      ...(input.lumber?.bottomChord && { bottomChord: list(input.lumber.bottomChord) }),
+      ...(input.lumber?.webs && { webs: list(input.lumber.webs) }),
+    },
+    bearingWidth: len(input.bearingWidth),
+    deflection: input.deflection,
+    webBraces: input.webBraces,
+  };
+};
