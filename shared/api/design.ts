@@ -255,8 +255,9 @@ const checkRanges = (v: Base, ctx: z.RefinementCtx): void => {
   const snow = v.loads.snow;
   if (snow) {
     within(['loads', 'snow', 'pg'], snow.pg, LIMITS.snowLoad);
-    // ASCE 7-16 Table 7.3-1 (Ce), Table 7.3-2 (Ct), Table 1.5-2 (Is) ranges (references §3).
-    factor(['loads', 'snow', 'ce'], snow.ce, 0.7, 1.3, 'Exposure factor Ce');
+    // Ct 0.85–1.3 and Is 0.8–1.2: ASCE 7-16 Table 7.3-2 and Table 1.5-2 (references §3);
+    // Ce 0.7–1.2: ASCE 7-16 Table 7.3-1, from memory.
+    factor(['loads', 'snow', 'ce'], snow.ce, 0.7, 1.2, 'Exposure factor Ce');
     factor(['loads', 'snow', 'ct'], snow.ct, 0.85, 1.3, 'Thermal factor Ct');
     factor(['loads', 'snow', 'is'], snow.is, 0.8, 1.2, 'Importance factor Is');
   }

@@ -77,14 +77,14 @@ const steelChecks = (
   const lbfToN = N_PER_LBF / MM_PER_INCH; // (lbf/in) · mm → N
   if (kind === 'splice') {
     const chords = local
-      .map((m, i) => ({ m, f: Math.abs(members[i].force) }))
+      .map((m, i) => ({ m, id: members[i].id, f: Math.abs(members[i].force) }))
       .filter((c) => c.m.role !== 'web');
     if (chords.length === 0) return [];
     const top = chords.reduce((a, b) => (b.f > a.f ? b : a));
     const across: Point = [-top.m.direction[1], top.m.direction[0]];
     const section = centreLineLength(across, halfLength, halfWidth);
     const capacity = PLATES_PER_JOINT * plate.tensionValue * section * lbfToN;
-    return [{ kind: 'tension', section, ...check(top.f, capacity) }];
+    return [{ kind: 'tension', member: top.id, section, ...check(top.f, capacity) }];
   }
   if (kind === 'heel') {
     const bc = local.find((m) => m.role === 'bottomChord');
@@ -99,11 +99,13 @@ const steelChecks = (
     return [
       {
         kind: 'shear',
+        member: members[tcIndex].id,
         section,
         ...check(f * along, PLATES_PER_JOINT * plate.shearValue * section * lbfToN),
       },
       {
         kind: 'tension',
+        member: members[tcIndex].id,
         section,
         ...check(f * square, PLATES_PER_JOINT * plate.tensionValue * section * lbfToN),
       },
@@ -183,7 +185,10 @@ export const designJointPlate = (
     const steel = steelChecks(joint.kind, local, joint.members, plate, halfLength, halfWidth);
     const badSteel = steel.find((s) => s.ratio > 1);
     if (badSteel) {
-      failure = { member: `steel ${badSteel.kind} across the joint line`, ratio: badSteel.ratio };
+      failure = {
+        member: `${badSteel.member} (steel ${badSteel.kind} across the joint line)`,
+        ratio: badSteel.ratio,
+      };
       continue;
     }
     const checks: MemberPlateCheck[] = [];

@@ -98,6 +98,8 @@ export interface MemberPlateCheck {
 /** Steel across the joint line at a heel or splice, both plates counted. */
 export interface SteelCheck {
   kind: 'tension' | 'shear';
+  /** The chord whose force crosses the joint line. */
+  member: string;
   /** Steel width (tension) or length (shear) crossing the joint line, per plate, mm. */
   section: number;
   demand: number;

@@ -236,6 +236,20 @@ describe('plate choice', () => {
     }
   });
 
+  it('names the spliced chord when the steel across the joint line is too weak', () => {
+    const joint: PlateJoint = {
+      id: 'S',
+      x: 0,
+      y: 0,
+      kind: 'splice',
+      members: [member('BC1', 'bottomChord', -1, 0, 900), member('BC2', 'bottomChord', 1, 0, 1000)],
+    };
+    // Tooth holding passes (2 · 10.5 · 100 = 2100 lbf) but the steel gives 2 · 100 · 4 = 800 lbf.
+    expect(() => designJointPlate(joint, catalogOf(plate(4, 8, { tensionValue: 100 })))).toThrow(
+      /joint S: BC2 \(steel tension across the joint line\)/,
+    );
+  });
+
   it('rejects members without a direction or depth', () => {
     const bad: PlateJoint = {
       id: 'X',
