@@ -24,9 +24,12 @@ export const REPETITIVE_MEMBER_FACTOR = 1.15;
 /** Largest spacing at which Cr applies: 24 in. o.c. (NDS 2018 4.3.9), in mm. */
 export const REPETITIVE_MAX_SPACING_MM = 24 * 25.4;
 
-/** Cr applies to 2–4 in. thick members at ≤ 24 in. o.c. joined by a load-distributing element. */
+/**
+ * Cr applies to 2–4 in. thick members at ≤ 24 in. o.c. joined by a load-distributing element.
+ * Half a millimetre of slack so 24 in. entered as 610 mm (rounded) still counts.
+ */
 export const repetitiveApplies = (spacingMm: number) =>
-  spacingMm <= REPETITIVE_MAX_SPACING_MM * (1 + 1e-9);
+  spacingMm <= REPETITIVE_MAX_SPACING_MM + 0.5;
 
 /** Size factors for one nominal width. */
 export interface SizeFactors {
