@@ -1,5 +1,7 @@
-import { describe, expect, it } from 'vitest';
+import { describe, expect, expectTypeOf, it } from 'vitest';
+import type { ProfileKind } from '../../../shared/engine/profiles/types';
 import {
+  PROFILE_KINDS,
   designInputSchema,
   toEngineInput,
   type DesignInputDraft,
@@ -208,5 +210,12 @@ describe('designInputSchema messages', () => {
     expect(e.profile.pitch).toBe(0);
     expect(e.profile.depth).toBeWithin(609.6);
     expect(e.profile.panels).toBe(8);
+  });
+});
+
+describe('PROFILE_KINDS', () => {
+  it('lists every engine profile kind', () => {
+    expectTypeOf<(typeof PROFILE_KINDS)[number]>().toEqualTypeOf<ProfileKind>();
+    expect(new Set(PROFILE_KINDS).size).toBe(PROFILE_KINDS.length);
   });
 });
