@@ -89,13 +89,7 @@ export function AppFrame() {
                 {ROLE_LABELS[me.user.role]} · {who}
               </p>
             </div>
-            <Button
-              variant="secondary"
-              size="sm"
-              onClick={signOut}
-              busy={logout.isPending}
-              className="border-timber-500 bg-timber-700 text-white hover:bg-timber-600"
-            >
+            <Button variant="inverse" size="sm" onClick={signOut} busy={logout.isPending}>
               Sign out
             </Button>
             <button

@@ -4,13 +4,16 @@ import { focusRing } from './focus';
 import { Spinner } from './Spinner';
 
 /** Visual weight of a button. */
-export type ButtonVariant = 'primary' | 'secondary' | 'danger' | 'ghost';
+export type ButtonVariant = 'primary' | 'secondary' | 'danger' | 'ghost' | 'inverse';
 
 const variants: Record<ButtonVariant, string> = {
   primary: 'bg-timber-600 text-white hover:bg-timber-700 active:bg-timber-800',
   secondary: 'border border-sand-300 bg-white text-sand-900 hover:bg-sand-100',
   danger: 'bg-danger-600 text-white hover:bg-danger-700',
   ghost: 'text-sand-700 hover:bg-sand-100 hover:text-sand-900',
+  // For the dark header bar.
+  inverse:
+    'border border-timber-500 bg-timber-700 text-white hover:bg-timber-600 focus-visible:outline-white',
 };
 
 /** Props of {@link Button}: native button props plus variant, size and a busy state. */

@@ -9,9 +9,10 @@ export interface InputProps extends InputHTMLAttributes<HTMLInputElement> {
 }
 
 /** Shared look of text inputs and selects. */
-export const controlClass = (invalid?: boolean) =>
+export const controlClass = (invalid?: boolean, size: 'sm' | 'md' = 'md') =>
   clsx(
-    'block h-10 w-full rounded border bg-white px-3 text-base text-sand-900 placeholder:text-sand-500',
+    'block w-full rounded border bg-white text-sand-900 placeholder:text-sand-500',
+    size === 'sm' ? 'h-8 px-2 text-sm' : 'h-10 px-3 text-base',
     'disabled:bg-sand-100 disabled:text-sand-500',
     invalid ? 'border-danger-600' : 'border-sand-300 hover:border-sand-400',
     focusRing,

@@ -39,7 +39,8 @@ export function userColumns({
               value={user.role}
               disabled={busyId === user.id}
               onChange={(event) => onRole(user, event.target.value as Role)}
-              className="h-8 min-w-36 py-0 text-sm"
+              controlSize="sm"
+              className="min-w-44"
             >
               {ROLES.map((r) => (
                 <option key={r} value={r}>
