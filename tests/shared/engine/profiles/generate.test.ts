@@ -291,3 +291,35 @@ describe('generateProfile: pieces and overhangs', () => {
     expect(p.params.maxStockLength).toBe(24 * FT);
   });
 });
+
+describe('generateProfile: web layouts', () => {
+  // Web and panel counts of each layout as documented in its file (common practice layouts).
+  it.each<[ProfileKind, number, number, number]>([
+    ['kingPost', 1, 2, 2],
+    ['queenPost', 4, 4, 3],
+    ['fink', 4, 4, 3],
+    ['howe', 5, 4, 4],
+    ['fan', 6, 6, 3],
+    ['doubleFink', 8, 6, 5],
+    ['scissor', 5, 4, 4],
+    ['mono', 4, 3, 2],
+  ])(
+    '%s: %i webs, %i top-chord and %i bottom-chord panels (pointed heel)',
+    (kind, webs, tc, bc) => {
+      const p = generateProfile(base(kind, { heelHeight: 0 }));
+      const count = (role: string) => p.members.filter((m) => m.role === role).length;
+      expect([count('web'), count('topChord'), count('bottomChord')]).toEqual([webs, tc, bc]);
+      // A raised heel adds a heel post and a heel diagonal at each heel (mono: at the low heel).
+      const raised = generateProfile(base(kind, { heelHeight: 12 * IN }));
+      const extra = kind === 'mono' ? 2 : 4;
+      expect(raised.members.filter((m) => m.role === 'web').length).toBe(webs + extra);
+    },
+  );
+
+  it('is cheap enough to run on every keystroke', () => {
+    const start = performance.now();
+    for (let i = 0; i < 2000; i++) generateProfile(base('doubleFink', { span: 9000 + i }));
+    // About 40 µs a call on a laptop; the bound is loose so a busy machine does not fail it.
+    expect(performance.now() - start).toBeLessThan(2000);
+  });
+});
