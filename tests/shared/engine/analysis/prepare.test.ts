@@ -1,5 +1,10 @@
 import { describe, expect, it } from 'vitest';
-import { analyzeTruss, prepareTruss, type TrussModel } from '../../../../shared/engine/analysis';
+import {
+  analyzeTruss,
+  prepareTruss,
+  solveLoads,
+  type TrussModel,
+} from '../../../../shared/engine/analysis';
 import { kingPost, parallelPratt } from './support/layouts';
 import { engineErrorOf } from './support/errors';
 
@@ -82,6 +87,16 @@ describe('prepareTruss classification and refusals', () => {
     expect(e.details!.joints).toEqual(['E']);
   });
 
+  it('an indeterminate mechanism with ea is caught by the stiffness factorisation', () => {
+    // Both diagonals, but a lone pendulum bar B–E lets E swing about B.
+    const model = square(['AC', 'BD'], 1e7);
+    model.joints.push({ id: 'E', x: 2000, y: 0 });
+    model.members.push({ from: 'B', to: 'E', ea: 1e7 });
+    const e = engineErrorOf(() => prepareTruss(model));
+    expect(e.code).toBe('unstable');
+    expect(e.details!.joints).toEqual(['E']);
+  });
+
   it('an indeterminate truss with ea is classified and solved', () => {
     const r = analyzeTruss({ ...square(['AC', 'BD'], 1e7), loads: [{ joint: 'C', fy: -1000 }] });
     expect(r.classification).toBe('indeterminate');
@@ -102,5 +117,24 @@ describe('prepareTruss classification and refusals', () => {
       loads: [{ joint: 'L2', fy: -1 }],
     });
     expect(withEa.displacements).toHaveLength(8);
+  });
+
+  it('solveLoads rejects loads on unknown joints and non-finite components', () => {
+    const prepared = prepareTruss(kingPost(6000, 2000));
+    const unknown = engineErrorOf(() => solveLoads(prepared, [{ joint: 'Q', fy: -1 }]));
+    expect(unknown.code).toBe('invalid');
+    expect(unknown.message).toContain('unknown joint "Q"');
+    expect(engineErrorOf(() => solveLoads(prepared, [{ joint: 'U1', fx: NaN }])).code).toBe(
+      'invalid',
+    );
+  });
+
+  it('a wrong solution is never returned: a corrupted factorisation fails the residual check', () => {
+    const prepared = prepareTruss(kingPost(6000, 2000));
+    prepared.lu!.lu[0] *= 1.5;
+    const e = engineErrorOf(() => solveLoads(prepared, [{ joint: 'U1', fy: -1000 }]));
+    expect(e.code).toBe('unstable');
+    expect(e.details!.residual as number).toBeGreaterThan(1e-6);
+    expect(e.message).toMatch(/equilibrium check failed/);
   });
 });
