@@ -92,7 +92,7 @@ export const GRADE_DATA: Record<LumberGrade, GradeData> = {
     species: 'Hem-Fir',
     table: 'NDS 2018 Supplement Table 4A',
     sizeFactor: 'table4A',
-    // From memory (absent from engineering.md); matches the buddyd16 Table 4A transcription [B].
+    // From memory (absent from engineering.md); agrees with the buddyd16 Table 4A CSV (source [B] there).
     values: v(975, 625, 150, 405, 1350, 1_500_000, 550_000),
   },
   'HF-2': {
