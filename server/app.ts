@@ -4,7 +4,7 @@ import connectPgSimple from 'connect-pg-simple';
 import helmet from 'helmet';
 import passport from 'passport';
 import { existsSync } from 'node:fs';
-import { join } from 'node:path';
+import { join, resolve } from 'node:path';
 import type { Sequelize } from 'sequelize';
 import pg from 'pg';
 import { readConfig, type Config } from './config';
@@ -87,9 +87,10 @@ export function createApp(opts: AppOptions) {
   app.use('/api/plant', plantRouter());
   app.use('/api', apiNotFound);
 
-  if (opts.clientDir && existsSync(join(opts.clientDir, 'index.html'))) {
-    app.use(express.static(opts.clientDir, { index: false, maxAge: '1h' }));
-    app.get(/^(?!\/api\/).*/, (_req, res) => res.sendFile(join(opts.clientDir!, 'index.html')));
+  const clientDir = opts.clientDir ? resolve(opts.clientDir) : null;
+  if (clientDir && existsSync(join(clientDir, 'index.html'))) {
+    app.use(express.static(clientDir, { index: false, maxAge: '1h' }));
+    app.get(/^(?!\/api\/).*/, (_req, res) => res.sendFile(join(clientDir, 'index.html')));
   }
   app.use(errorHandler);
   return app;
