@@ -28,9 +28,11 @@ export function createQueryClient(): QueryClient {
     defaultOptions: {
       queries: {
         staleTime: 30_000,
-        // Client errors (4xx) will not fix themselves; retry only network and server faults.
+        // Client errors (4xx) will not fix themselves; network and server faults get one retry
+        // a second later, so a failure shows as a message quickly rather than a long spinner.
         retry: (count, error) =>
-          !(isApiError(error) && error.status >= 400 && error.status < 500) && count < 2,
+          !(isApiError(error) && error.status >= 400 && error.status < 500) && count < 1,
+        retryDelay: 1000,
         refetchOnWindowFocus: false,
       },
     },

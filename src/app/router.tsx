@@ -15,18 +15,36 @@ import { jobsQueryOptions } from '../features/jobs/api/list-jobs';
 import { JobsPage } from '../features/jobs/components/JobsPage';
 import { usersQueryOptions } from '../features/users/api/list-users';
 import { UsersPage } from '../features/users/components/UsersPage';
+import { Spinner } from '../components/ui';
 import { listParamsFromSearch } from '../lib/list-params';
 import { AppFrame } from './AppFrame';
 import { ErrorPage, NotFoundPage } from './ErrorPages';
 import { redirectIfSignedIn, requireRole, requireSession } from './guards';
 import { SECTION_ROLES } from './navigation';
 
-/** Starts a prefetch and waits for it, but leaves failures to the page's own error state. */
+/** How long a loader waits for its data before showing the page with its own loading state. */
+const PREFETCH_WAIT_MS = 800;
+
+/**
+ * Starts a prefetch and waits for it briefly, so fast pages render complete; slow or failing
+ * data (retries take seconds) is left to the page's own spinner and error message.
+ */
 const prefetch = (promise: Promise<unknown>) =>
-  promise.then(
-    () => null,
-    () => null,
+  Promise.race([
+    promise.then(
+      () => null,
+      () => null,
+    ),
+    new Promise<null>((resolve) => setTimeout(() => resolve(null), PREFETCH_WAIT_MS)),
+  ]);
+
+function StartupSpinner() {
+  return (
+    <div className="flex min-h-screen items-center justify-center">
+      <Spinner label="Loading Spanwise…" />
+    </div>
   );
+}
 
 const paramsOf = (request: Request) => listParamsFromSearch(new URL(request.url).searchParams);
 
@@ -55,6 +73,7 @@ export function createAppRouter(queryClient: QueryClient) {
         return redirectIfSignedIn(queryClient);
       },
       element: <SignInPage />,
+      hydrateFallbackElement: <StartupSpinner />,
       errorElement: <ErrorPage />,
     },
     {
@@ -62,6 +81,7 @@ export function createAppRouter(queryClient: QueryClient) {
       id: 'frame',
       loader: ({ request }) => requireSession(queryClient, request),
       element: <AppFrame />,
+      hydrateFallbackElement: <StartupSpinner />,
       errorElement: <ErrorPage />,
       children: [
         {
