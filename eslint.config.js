@@ -10,7 +10,10 @@ export default tseslint.config(
   {
     languageOptions: { globals: { ...globals.node, ...globals.browser } },
     rules: {
-      '@typescript-eslint/no-unused-vars': ['error', { argsIgnorePattern: '^_', varsIgnorePattern: '^_' }],
+      '@typescript-eslint/no-unused-vars': [
+        'error',
+        { argsIgnorePattern: '^_', varsIgnorePattern: '^_' },
+      ],
     },
   },
   {
@@ -26,8 +29,24 @@ export default tseslint.config(
         'error',
         {
           patterns: [
-            { group: ['**/src/**', '**/server/**', '../../src/*', '../../server/*'], message: 'shared/ imports nothing from src/ or server/.' },
-            { group: ['node:*', 'fs', 'path', 'os', 'child_process', 'react', 'react-*', 'express', 'sequelize'], message: 'shared/ stays free of Node built-ins, React, Express and Sequelize.' },
+            {
+              group: ['**/src/**', '**/server/**', '../../src/*', '../../server/*'],
+              message: 'shared/ imports nothing from src/ or server/.',
+            },
+            {
+              group: [
+                'node:*',
+                'fs',
+                'path',
+                'os',
+                'child_process',
+                'react',
+                'react-*',
+                'express',
+                'sequelize',
+              ],
+              message: 'shared/ stays free of Node built-ins, React, Express and Sequelize.',
+            },
           ],
         },
       ],

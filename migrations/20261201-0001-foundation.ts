@@ -16,7 +16,12 @@ export async function up({ context: qi }: { context: QueryInterface }) {
   });
   await qi.createTable('customers', {
     id: { type: DataTypes.INTEGER, autoIncrement: true, primaryKey: true },
-    plant_id: { type: DataTypes.INTEGER, allowNull: false, references: { model: 'plants', key: 'id' }, onDelete: 'CASCADE' },
+    plant_id: {
+      type: DataTypes.INTEGER,
+      allowNull: false,
+      references: { model: 'plants', key: 'id' },
+      onDelete: 'CASCADE',
+    },
     name: { type: DataTypes.STRING(160), allowNull: false },
     email: { type: DataTypes.STRING(200), allowNull: false },
     phone: { type: DataTypes.STRING(40), allowNull: true },
@@ -28,8 +33,18 @@ export async function up({ context: qi }: { context: QueryInterface }) {
   await qi.addIndex('customers', ['plant_id', 'name']);
   await qi.createTable('users', {
     id: { type: DataTypes.INTEGER, autoIncrement: true, primaryKey: true },
-    plant_id: { type: DataTypes.INTEGER, allowNull: false, references: { model: 'plants', key: 'id' }, onDelete: 'CASCADE' },
-    customer_id: { type: DataTypes.INTEGER, allowNull: true, references: { model: 'customers', key: 'id' }, onDelete: 'CASCADE' },
+    plant_id: {
+      type: DataTypes.INTEGER,
+      allowNull: false,
+      references: { model: 'plants', key: 'id' },
+      onDelete: 'CASCADE',
+    },
+    customer_id: {
+      type: DataTypes.INTEGER,
+      allowNull: true,
+      references: { model: 'customers', key: 'id' },
+      onDelete: 'CASCADE',
+    },
     email: { type: DataTypes.STRING(200), allowNull: false, unique: true },
     name: { type: DataTypes.STRING(120), allowNull: false },
     role: { type: DataTypes.STRING(20), allowNull: false },
@@ -46,8 +61,18 @@ export async function up({ context: qi }: { context: QueryInterface }) {
   );
   await qi.createTable('jobs', {
     id: { type: DataTypes.INTEGER, autoIncrement: true, primaryKey: true },
-    plant_id: { type: DataTypes.INTEGER, allowNull: false, references: { model: 'plants', key: 'id' }, onDelete: 'CASCADE' },
-    customer_id: { type: DataTypes.INTEGER, allowNull: false, references: { model: 'customers', key: 'id' }, onDelete: 'CASCADE' },
+    plant_id: {
+      type: DataTypes.INTEGER,
+      allowNull: false,
+      references: { model: 'plants', key: 'id' },
+      onDelete: 'CASCADE',
+    },
+    customer_id: {
+      type: DataTypes.INTEGER,
+      allowNull: false,
+      references: { model: 'customers', key: 'id' },
+      onDelete: 'CASCADE',
+    },
     name: { type: DataTypes.STRING(160), allowNull: false },
     address: { type: DataTypes.TEXT, allowNull: false },
     plan_revision: { type: DataTypes.STRING(40), allowNull: true },
@@ -56,8 +81,18 @@ export async function up({ context: qi }: { context: QueryInterface }) {
   await qi.addIndex('jobs', ['plant_id', 'customer_id']);
   await qi.createTable('audit_events', {
     id: { type: DataTypes.BIGINT, autoIncrement: true, primaryKey: true },
-    plant_id: { type: DataTypes.INTEGER, allowNull: false, references: { model: 'plants', key: 'id' }, onDelete: 'CASCADE' },
-    actor_id: { type: DataTypes.INTEGER, allowNull: true, references: { model: 'users', key: 'id' }, onDelete: 'SET NULL' },
+    plant_id: {
+      type: DataTypes.INTEGER,
+      allowNull: false,
+      references: { model: 'plants', key: 'id' },
+      onDelete: 'CASCADE',
+    },
+    actor_id: {
+      type: DataTypes.INTEGER,
+      allowNull: true,
+      references: { model: 'users', key: 'id' },
+      onDelete: 'SET NULL',
+    },
     action: { type: DataTypes.STRING(60), allowNull: false },
     subject_type: { type: DataTypes.STRING(40), allowNull: false },
     subject_id: { type: DataTypes.INTEGER, allowNull: true },

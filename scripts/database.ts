@@ -1,5 +1,12 @@
 /** Where the app's database is: DATABASE_URL, or the project's own cluster under .data/. */
-import { ensureCluster, ensureDatabase, ensurePostgresBinaries, startCluster, stopCluster, type Cluster } from './pg';
+import {
+  ensureCluster,
+  ensureDatabase,
+  ensurePostgresBinaries,
+  startCluster,
+  stopCluster,
+  type Cluster,
+} from './pg';
 
 export const APP_PG_PORT = 54329;
 export const TEST_PG_PORT = 54339;
@@ -11,7 +18,13 @@ export interface Database {
 }
 
 /** Start (creating the first time) the cluster in `dir`, or use DATABASE_URL and start nothing. */
-export async function provideDatabase(opts: { dir: string; port: number; name: string; fresh?: boolean; useEnv?: boolean }): Promise<Database> {
+export async function provideDatabase(opts: {
+  dir: string;
+  port: number;
+  name: string;
+  fresh?: boolean;
+  useEnv?: boolean;
+}): Promise<Database> {
   if (opts.useEnv !== false && process.env.DATABASE_URL) {
     return { url: process.env.DATABASE_URL, cluster: null, stop: () => undefined };
   }

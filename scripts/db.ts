@@ -9,8 +9,16 @@ const db = await provideDatabase({ dir: '.data/postgres', port: APP_PG_PORT, nam
 const sequelize = connect(db.url);
 try {
   const m = migrator(sequelize);
-  if (action === 'migrate') console.log('Applied:', (await m.up()).map((x) => x.name));
-  else if (action === 'rollback') console.log('Rolled back:', (await m.down()).map((x) => x.name));
+  if (action === 'migrate')
+    console.log(
+      'Applied:',
+      (await m.up()).map((x) => x.name),
+    );
+  else if (action === 'rollback')
+    console.log(
+      'Rolled back:',
+      (await m.down()).map((x) => x.name),
+    );
   else if (action === 'seed') await seedDemo().then(() => console.log('Demo data seeded.'));
   else throw new Error('usage: tsx scripts/db.ts migrate|rollback|seed');
 } finally {

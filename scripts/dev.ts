@@ -13,7 +13,10 @@ if ((await User.count()) === 0) await seedDemo();
 await sequelize.close();
 
 const env = { ...process.env, DATABASE_URL: db.url, PORT: '3001', API_PORT: '3001' };
-const api = spawn('npx', ['tsx', 'watch', '--clear-screen=false', 'server/main.ts'], { stdio: 'inherit', env });
+const api = spawn('npx', ['tsx', 'watch', '--clear-screen=false', 'server/main.ts'], {
+  stdio: 'inherit',
+  env,
+});
 const web = spawn('npx', ['vite'], { stdio: 'inherit', env });
 console.log('Open http://127.0.0.1:5173 (API on :3001).');
 const stop = () => {

@@ -4,7 +4,15 @@
  */
 import { execFileSync, spawnSync } from 'node:child_process';
 import { randomBytes } from 'node:crypto';
-import { chmodSync, existsSync, mkdirSync, readFileSync, rmSync, statSync, writeFileSync } from 'node:fs';
+import {
+  chmodSync,
+  existsSync,
+  mkdirSync,
+  readFileSync,
+  rmSync,
+  statSync,
+  writeFileSync,
+} from 'node:fs';
 import { dirname, join, resolve } from 'node:path';
 import pg from 'pg';
 
@@ -77,7 +85,17 @@ export function ensureCluster(dir: string, port: number, database: string): Clus
     }
     run(
       join(PG_BIN, 'initdb'),
-      ['-D', dir, '-U', 'spanwise', `--pwfile=${pwFile}`, '--auth=scram-sha-256', '-E', 'UTF8', '--locale=C.UTF-8'],
+      [
+        '-D',
+        dir,
+        '-U',
+        'spanwise',
+        `--pwfile=${pwFile}`,
+        '--auth=scram-sha-256',
+        '-E',
+        'UTF8',
+        '--locale=C.UTF-8',
+      ],
       { quiet: true },
     );
     rmSync(pwFile, { force: true });
@@ -100,8 +118,15 @@ export function startCluster(c: Cluster): boolean {
   run(
     join(PG_BIN, 'pg_ctl'),
     [
-      '-D', c.dir, '-l', log, '-w', '-t', '60',
-      '-o', `-p ${c.port} -c listen_addresses=127.0.0.1 -c unix_socket_directories='' -c fsync=${process.env.PG_FSYNC ?? 'on'}`,
+      '-D',
+      c.dir,
+      '-l',
+      log,
+      '-w',
+      '-t',
+      '60',
+      '-o',
+      `-p ${c.port} -c listen_addresses=127.0.0.1 -c unix_socket_directories='' -c fsync=${process.env.PG_FSYNC ?? 'on'}`,
       'start',
     ],
     { quiet: true },

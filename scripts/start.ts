@@ -14,7 +14,11 @@ import { APP_PG_PORT, provideDatabase } from './database';
 
 const config = readConfig();
 const db = await provideDatabase({ dir: '.data/postgres', port: APP_PG_PORT, name: 'spanwise' });
-console.log(db.cluster ? `PostgreSQL: 127.0.0.1:${APP_PG_PORT} (data in .data/postgres)` : 'PostgreSQL: DATABASE_URL');
+console.log(
+  db.cluster
+    ? `PostgreSQL: 127.0.0.1:${APP_PG_PORT} (data in .data/postgres)`
+    : 'PostgreSQL: DATABASE_URL',
+);
 const sequelize = connect(db.url);
 const applied = await migrator(sequelize).up();
 if (applied.length) console.log(`Migrations applied: ${applied.map((m) => m.name).join(', ')}`);

@@ -10,11 +10,23 @@ import { migrator } from '../server/db/migrator';
 import { provideDatabase, TEST_PG_PORT } from './database';
 
 const only = process.argv.slice(2); // e.g. `npm test -- tests/server` passes filters to vitest
-for (const [bin, pkg] of [['/usr/bin/chromium', 'chromium'], ['/usr/bin/ccx', 'calculix-ccx']]) {
-  if (!existsSync(bin)) console.warn(`warning: ${bin} is missing (apt-get install -y ${pkg}); tests needing it will fail.`);
+for (const [bin, pkg] of [
+  ['/usr/bin/chromium', 'chromium'],
+  ['/usr/bin/ccx', 'calculix-ccx'],
+]) {
+  if (!existsSync(bin))
+    console.warn(
+      `warning: ${bin} is missing (apt-get install -y ${pkg}); tests needing it will fail.`,
+    );
 }
 
-const db = await provideDatabase({ dir: '.data/test-postgres', port: TEST_PG_PORT, name: 'spanwise_test', fresh: true, useEnv: false });
+const db = await provideDatabase({
+  dir: '.data/test-postgres',
+  port: TEST_PG_PORT,
+  name: 'spanwise_test',
+  fresh: true,
+  useEnv: false,
+});
 const sequelize = connect(db.url);
 await migrator(sequelize).up();
 await sequelize.close();
@@ -37,7 +49,18 @@ for (const [name, cmd] of steps) {
 mkdirSync('test-results', { recursive: true });
 console.log('\n▶ tests: vitest run');
 const report = 'test-results/vitest.json';
-const r = spawnSync('npx', ['vitest', 'run', '--reporter=default', '--reporter=json', `--outputFile.json=${report}`, ...only], { stdio: 'inherit', env });
+const r = spawnSync(
+  'npx',
+  [
+    'vitest',
+    'run',
+    '--reporter=default',
+    '--reporter=json',
+    `--outputFile.json=${report}`,
+    ...only,
+  ],
+  { stdio: 'inherit', env },
+);
 if (r.status !== 0) failed.push('tests');
 db.stop();
 
@@ -45,11 +68,18 @@ let passed = 0;
 let failedTests = 0;
 let skipped = 0;
 if (existsSync(report)) {
-  const j = JSON.parse(readFileSync(report, 'utf8')) as { numPassedTests: number; numFailedTests: number; numPendingTests: number; numTodoTests: number };
+  const j = JSON.parse(readFileSync(report, 'utf8')) as {
+    numPassedTests: number;
+    numFailedTests: number;
+    numPendingTests: number;
+    numTodoTests: number;
+  };
   passed = j.numPassedTests;
   failedTests = j.numFailedTests;
   skipped = j.numPendingTests + j.numTodoTests;
 }
 if (failed.length) console.log(`\nFailed steps: ${failed.join(', ')}`);
-console.log(`\n${passed} passed, ${failedTests + (failed.length && !failedTests ? failed.length : 0)} failed, ${skipped} skipped`);
+console.log(
+  `\n${passed} passed, ${failedTests + (failed.length && !failedTests ? failed.length : 0)} failed, ${skipped} skipped`,
+);
 process.exit(failed.length ? 1 : 0);

@@ -37,7 +37,10 @@ export function createApp(opts: AppOptions) {
   app.use(
     helmet({
       contentSecurityPolicy: {
-        directives: { 'img-src': ["'self'", 'data:', 'blob:'], 'upgrade-insecure-requests': config.production ? [] : null },
+        directives: {
+          'img-src': ["'self'", 'data:', 'blob:'],
+          'upgrade-insecure-requests': config.production ? [] : null,
+        },
       },
     }),
   );

@@ -17,6 +17,7 @@ export const unauthorized = (message = 'Sign in to continue.') =>
   new AppError(401, 'unauthenticated', message);
 export const forbidden = (message = 'Your role may not do that.') =>
   new AppError(403, 'forbidden', message);
-export const notFound = (what = 'That record') => new AppError(404, 'not_found', `${what} was not found.`);
+export const notFound = (what = 'That record') =>
+  new AppError(404, 'not_found', `${what} was not found.`);
 export const conflict = (message: string, fields?: Record<string, string>) =>
   new AppError(409, 'conflict', message, fields);

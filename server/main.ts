@@ -8,4 +8,6 @@ if (!url) throw new Error('DATABASE_URL is required (npm run dev sets it)');
 const config = readConfig();
 const sequelize = connect(url);
 const app = createApp({ sequelize, databaseUrl: url, config });
-app.listen(config.port, config.host, () => console.log(`API on http://${config.host}:${config.port}`));
+app.listen(config.port, config.host, () =>
+  console.log(`API on http://${config.host}:${config.port}`),
+);

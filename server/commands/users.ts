@@ -13,8 +13,14 @@ export async function createUser(actor: User, input: CreateUserInput) {
   return sequelize.transaction(async (t) => {
     let customerId: number | null = null;
     if (input.role === 'builder') {
-      const customer = await Customer.findOne({ where: { id: input.customerId!, plantId: actor.plantId }, transaction: t });
-      if (!customer) throw badRequest('Pick one of your builder companies.', { customerId: 'Unknown builder company' });
+      const customer = await Customer.findOne({
+        where: { id: input.customerId!, plantId: actor.plantId },
+        transaction: t,
+      });
+      if (!customer)
+        throw badRequest('Pick one of your builder companies.', {
+          customerId: 'Unknown builder company',
+        });
       customerId = customer.id;
     }
     try {
@@ -30,10 +36,18 @@ export async function createUser(actor: User, input: CreateUserInput) {
         },
         { transaction: t },
       );
-      await audit(t, { plantId: actor.plantId, actorId: actor.id, action: 'user.created', subjectType: 'user', subjectId: user.id, data: { email: user.email, role: user.role } });
+      await audit(t, {
+        plantId: actor.plantId,
+        actorId: actor.id,
+        action: 'user.created',
+        subjectType: 'user',
+        subjectId: user.id,
+        data: { email: user.email, role: user.role },
+      });
       return user;
     } catch (e) {
-      if (e instanceof UniqueConstraintError) throw conflict('A user with that e-mail already exists.', { email: 'Already in use' });
+      if (e instanceof UniqueConstraintError)
+        throw conflict('A user with that e-mail already exists.', { email: 'Already in use' });
       throw e;
     }
   });
@@ -41,28 +55,43 @@ export async function createUser(actor: User, input: CreateUserInput) {
 
 /** Rename, change role, (de)activate or reset the password of a user of the actor's plant. */
 export async function updateUser(actor: User, user: User, input: UpdateUserInput) {
-  if (user.id === actor.id && (input.active === false || (input.role && input.role !== actor.role))) {
+  if (
+    user.id === actor.id &&
+    (input.active === false || (input.role && input.role !== actor.role))
+  ) {
     throw badRequest('You cannot deactivate yourself or change your own role.');
   }
   if (input.role && (input.role === 'builder') !== (user.role === 'builder')) {
-    throw badRequest('Staff and builder accounts cannot be switched into each other; add a new user instead.', { role: 'Not allowed for this user' });
+    throw badRequest(
+      'Staff and builder accounts cannot be switched into each other; add a new user instead.',
+      { role: 'Not allowed for this user' },
+    );
   }
   return User.sequelize!.transaction(async (t) => {
     const changes: Record<string, unknown> = {};
     if (input.name !== undefined) changes.name = input.name;
     if (input.role !== undefined) changes.role = input.role;
     if (input.active !== undefined) changes.active = input.active;
-    if (input.password !== undefined) changes.passwordHash = await bcrypt.hash(input.password, BCRYPT_COST);
+    if (input.password !== undefined)
+      changes.passwordHash = await bcrypt.hash(input.password, BCRYPT_COST);
     await user.update(changes, { transaction: t });
     await audit(t, {
-      plantId: actor.plantId, actorId: actor.id, action: 'user.updated', subjectType: 'user', subjectId: user.id,
+      plantId: actor.plantId,
+      actorId: actor.id,
+      action: 'user.updated',
+      subjectType: 'user',
+      subjectId: user.id,
       data: { ...input, password: input.password ? 'changed' : undefined },
     });
     if (input.active === false) {
       // End every session of a deactivated user at once (deserializeUser also refuses them).
-      await User.sequelize!.query(`DELETE FROM session WHERE (sess->'passport'->>'user')::int = :id`, {
-        replacements: { id: user.id }, transaction: t,
-      });
+      await User.sequelize!.query(
+        `DELETE FROM session WHERE (sess->'passport'->>'user')::int = :id`,
+        {
+          replacements: { id: user.id },
+          transaction: t,
+        },
+      );
     }
     return user;
   });
@@ -72,6 +101,12 @@ export async function updateUser(actor: User, user: User, input: UpdateUserInput
 export async function recordSignIn(user: User) {
   return User.sequelize!.transaction(async (t) => {
     await user.update({ lastSignInAt: new Date() }, { transaction: t });
-    await audit(t, { plantId: user.plantId, actorId: user.id, action: 'user.signed_in', subjectType: 'user', subjectId: user.id });
+    await audit(t, {
+      plantId: user.plantId,
+      actorId: user.id,
+      action: 'user.signed_in',
+      subjectType: 'user',
+      subjectId: user.id,
+    });
   });
 }

@@ -20,15 +20,18 @@ const DUMMY_HASH = bcrypt.hashSync('not-a-real-password', 10);
 /** passport-local with e-mail + password; a deactivated user never signs in. */
 export function configurePassport() {
   passport.use(
-    new LocalStrategy({ usernameField: 'email', passwordField: 'password' }, async (email, password, done) => {
-      try {
-        const user = await User.findOne({ where: { email: email.trim().toLowerCase() } });
-        const ok = await bcrypt.compare(password, user?.passwordHash ?? DUMMY_HASH);
-        done(null, user && ok && user.active ? user : false);
-      } catch (e) {
-        done(e);
-      }
-    }),
+    new LocalStrategy(
+      { usernameField: 'email', passwordField: 'password' },
+      async (email, password, done) => {
+        try {
+          const user = await User.findOne({ where: { email: email.trim().toLowerCase() } });
+          const ok = await bcrypt.compare(password, user?.passwordHash ?? DUMMY_HASH);
+          done(null, user && ok && user.active ? user : false);
+        } catch (e) {
+          done(e);
+        }
+      },
+    ),
   );
   passport.serializeUser((user, done) => done(null, user.id));
   // Loaded fresh on every request: a deactivated user's sessions stop working at once.

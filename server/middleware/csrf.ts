@@ -22,8 +22,17 @@ export const requireCsrf: RequestHandler = (req, _res, next) => {
   const expected = req.session?.csrfToken;
   const got = req.get('x-csrf-token');
   const ok =
-    !!expected && !!got && got.length === expected.length &&
+    !!expected &&
+    !!got &&
+    got.length === expected.length &&
     timingSafeEqual(Buffer.from(got), Buffer.from(expected));
-  if (!ok) return next(new AppError(403, 'csrf', 'Your session token is missing or stale. Reload the page and try again.'));
+  if (!ok)
+    return next(
+      new AppError(
+        403,
+        'csrf',
+        'Your session token is missing or stale. Reload the page and try again.',
+      ),
+    );
   next();
 };

@@ -7,7 +7,9 @@ export const apiNotFound: RequestHandler = (_req, _res, next) =>
 /** Every error leaves as `{ error: { code, message, fields? } }`; nothing unexpected leaks. */
 export const errorHandler: ErrorRequestHandler = (err, _req, res, _next) => {
   if (err instanceof AppError) {
-    res.status(err.status).json({ error: { code: err.code, message: err.message, fields: err.fields } });
+    res
+      .status(err.status)
+      .json({ error: { code: err.code, message: err.message, fields: err.fields } });
     return;
   }
   // Body-parser errors (malformed JSON, too large) are the client's mistake.
@@ -23,5 +25,7 @@ export const errorHandler: ErrorRequestHandler = (err, _req, res, _next) => {
     return;
   }
   console.error(err);
-  res.status(500).json({ error: { code: 'internal', message: 'Something went wrong on our side. Try again.' } });
+  res
+    .status(500)
+    .json({ error: { code: 'internal', message: 'Something went wrong on our side. Try again.' } });
 };

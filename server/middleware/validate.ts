@@ -13,7 +13,10 @@ export function fieldMessages(error: z.ZodError): Record<string, string> {
 }
 
 /** Parse `req.body` or `req.query` with a schema from shared/; the parsed value lands in res.locals. */
-export function validate<T extends z.ZodTypeAny>(schema: T, source: 'body' | 'query' = 'body'): RequestHandler {
+export function validate<T extends z.ZodTypeAny>(
+  schema: T,
+  source: 'body' | 'query' = 'body',
+): RequestHandler {
   return (req, res, next) => {
     const parsed = schema.safeParse(source === 'body' ? (req.body ?? {}) : req.query);
     if (!parsed.success) {

@@ -1,7 +1,17 @@
-import { DataTypes, Model, type CreationOptional, type InferAttributes, type InferCreationAttributes, type Sequelize } from 'sequelize';
+import {
+  DataTypes,
+  Model,
+  type CreationOptional,
+  type InferAttributes,
+  type InferCreationAttributes,
+  type Sequelize,
+} from 'sequelize';
 
 /** Who did what to which record, written by every command inside its transaction. */
-export class AuditEvent extends Model<InferAttributes<AuditEvent>, InferCreationAttributes<AuditEvent>> {
+export class AuditEvent extends Model<
+  InferAttributes<AuditEvent>,
+  InferCreationAttributes<AuditEvent>
+> {
   declare id: CreationOptional<number>;
   declare plantId: number;
   declare actorId: number | null;

@@ -9,5 +9,7 @@ export const customerPolicy = {
     ownCompany(actor, { plantId: c.plantId, customerId: c.id }),
   ),
   scope: (actor: User): WhereOptions =>
-    actor.role === 'builder' ? { plantId: actor.plantId, id: actor.customerId! } : { plantId: actor.plantId },
+    actor.role === 'builder'
+      ? { plantId: actor.plantId, id: actor.customerId! }
+      : { plantId: actor.plantId },
 };

@@ -13,10 +13,14 @@ export const hasRole =
 
 export const isStaff: Predicate = (actor) => actor.role !== 'builder';
 
-export const samePlant: Predicate<{ plantId: number }> = (actor, record) => record.plantId === actor.plantId;
+export const samePlant: Predicate<{ plantId: number }> = (actor, record) =>
+  record.plantId === actor.plantId;
 
 /** Builders reach only their own company's records; staff their plant's. */
-export const ownCompany: Predicate<{ plantId: number; customerId: number | null }> = (actor, record) =>
+export const ownCompany: Predicate<{ plantId: number; customerId: number | null }> = (
+  actor,
+  record,
+) =>
   samePlant(actor, record) && (actor.role !== 'builder' || record.customerId === actor.customerId);
 
 export const all =

@@ -1,7 +1,9 @@
 import type { CustomerSummary } from '../../shared/api/list';
 import type { Customer } from '../models';
 
-export function presentCustomerSummary(c: Customer & { get(k: 'jobCount'): unknown }): CustomerSummary {
+export function presentCustomerSummary(
+  c: Customer & { get(k: 'jobCount'): unknown },
+): CustomerSummary {
   return {
     id: c.id,
     name: c.name,

@@ -13,7 +13,12 @@ export function presentMe(user: User): Me {
       plantId: user.plantId,
       customerId: user.customerId ?? null,
     },
-    plant: { id: user.plant!.id, name: user.plant!.name, units: user.plant!.units, demo: presentMe.demo },
+    plant: {
+      id: user.plant!.id,
+      name: user.plant!.name,
+      units: user.plant!.units,
+      demo: presentMe.demo,
+    },
     customer: user.customer ? { id: user.customer.id, name: user.customer.name } : null,
   };
 }

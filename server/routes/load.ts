@@ -4,7 +4,11 @@ import { parseId } from '../middleware/validate';
 import type { User } from '../models';
 
 /** load: find the record named by :param within the actor's scope; anything else answers 404. */
-export function load<R>(what: string, find: (id: number, actor: User) => Promise<R | null>, param = 'id'): RequestHandler {
+export function load<R>(
+  what: string,
+  find: (id: number, actor: User) => Promise<R | null>,
+  param = 'id',
+): RequestHandler {
   return async (req, res, next) => {
     try {
       const id = parseId(req.params[param]);

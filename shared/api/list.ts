@@ -14,7 +14,12 @@ export type ListQuery = z.infer<typeof listQuerySchema>;
 
 /** `{ items, total, page, pageSize }`. */
 export const pageOf = <T extends z.ZodTypeAny>(item: T) =>
-  z.object({ items: z.array(item), total: z.number().int(), page: z.number().int(), pageSize: z.number().int() });
+  z.object({
+    items: z.array(item),
+    total: z.number().int(),
+    page: z.number().int(),
+    pageSize: z.number().int(),
+  });
 
 export const customerSummarySchema = z.object({
   id: z.number().int(),

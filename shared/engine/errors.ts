@@ -1,11 +1,6 @@
 /** Stable codes for everything the engine refuses; the API and CLI pass them through unchanged. */
 export type EngineErrorCode =
-  | 'invalid'
-  | 'unstable'
-  | 'indeterminate'
-  | 'geometry'
-  | 'no_lumber_passes'
-  | 'no_plate_fits';
+  'invalid' | 'unstable' | 'indeterminate' | 'geometry' | 'no_lumber_passes' | 'no_plate_fits';
 
 /** The one error the engine throws. `details` carries machine-readable context (e.g. joint ids). */
 export class EngineError extends Error {

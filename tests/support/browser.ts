@@ -9,7 +9,10 @@ import type { Express } from 'express';
 export const SCREENSHOTS = 'test-results/e2e';
 
 /** Debian's Chromium, headless, with no network chatter and a fresh profile. */
-export async function launchBrowser(): Promise<{ browser: BrowserContext; close: () => Promise<void> }> {
+export async function launchBrowser(): Promise<{
+  browser: BrowserContext;
+  close: () => Promise<void>;
+}> {
   const profile = mkdtempSync(join(tmpdir(), 'spanwise-chromium-'));
   mkdirSync(SCREENSHOTS, { recursive: true });
   // A persistent context is how Playwright takes a fresh --user-data-dir of our own.
@@ -17,8 +20,14 @@ export async function launchBrowser(): Promise<{ browser: BrowserContext; close:
     viewport: { width: 1280, height: 800 },
     executablePath: process.env.CHROMIUM_PATH ?? '/usr/bin/chromium',
     args: [
-      '--headless', '--no-sandbox', '--disable-gpu', '--disable-quic', '--no-first-run',
-      '--disable-background-networking', '--disable-component-update', '--disable-sync',
+      '--headless',
+      '--no-sandbox',
+      '--disable-gpu',
+      '--disable-quic',
+      '--no-first-run',
+      '--disable-background-networking',
+      '--disable-component-update',
+      '--disable-sync',
     ],
   });
   return {

@@ -5,7 +5,8 @@ import { createApp } from '../../server/app';
 /** The database `npm test` started (scripts/test.ts sets TEST_DATABASE_URL). */
 export function testDatabaseUrl() {
   const url = process.env.TEST_DATABASE_URL;
-  if (!url) throw new Error('TEST_DATABASE_URL is not set: run the integration tests through `npm test`.');
+  if (!url)
+    throw new Error('TEST_DATABASE_URL is not set: run the integration tests through `npm test`.');
   return url;
 }
 
@@ -18,7 +19,10 @@ export function testSequelize() {
 }
 
 /** A fresh app on the test database; options override config (e.g. the sign-in limit). */
-export function testApp(config: Parameters<typeof createApp>[0]['config'] = {}, clientDir?: string) {
+export function testApp(
+  config: Parameters<typeof createApp>[0]['config'] = {},
+  clientDir?: string,
+) {
   const sequelize = testSequelize();
   return createApp({
     sequelize,

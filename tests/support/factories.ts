@@ -10,12 +10,20 @@ const HASH = bcrypt.hashSync(TEST_PASSWORD, 10);
 const uid = () => randomUUID().slice(0, 8);
 
 /** Each factory builds its own parents when not given them. */
-export async function createPlant(attrs: Partial<{ name: string; units: 'imperial' | 'metric' }> = {}) {
+export async function createPlant(
+  attrs: Partial<{ name: string; units: 'imperial' | 'metric' }> = {},
+) {
   testSequelize();
-  return Plant.create({ name: attrs.name ?? `Plant ${uid()}`, units: attrs.units ?? 'imperial', address: null });
+  return Plant.create({
+    name: attrs.name ?? `Plant ${uid()}`,
+    units: attrs.units ?? 'imperial',
+    address: null,
+  });
 }
 
-export async function createCustomer(attrs: { plant?: Plant; name?: string; terms?: 'account' | 'deposit' } = {}) {
+export async function createCustomer(
+  attrs: { plant?: Plant; name?: string; terms?: 'account' | 'deposit' } = {},
+) {
   const plant = attrs.plant ?? (await createPlant());
   return Customer.create({
     plantId: plant.id,
@@ -28,9 +36,12 @@ export async function createCustomer(attrs: { plant?: Plant; name?: string; term
   });
 }
 
-export async function createUser(attrs: { role?: Role; plant?: Plant; customer?: Customer; active?: boolean; email?: string } = {}) {
+export async function createUser(
+  attrs: { role?: Role; plant?: Plant; customer?: Customer; active?: boolean; email?: string } = {},
+) {
   const role = attrs.role ?? 'sales';
-  const customer = role === 'builder' ? (attrs.customer ?? (await createCustomer({ plant: attrs.plant }))) : null;
+  const customer =
+    role === 'builder' ? (attrs.customer ?? (await createCustomer({ plant: attrs.plant }))) : null;
   const plantId = customer?.plantId ?? (attrs.plant ?? (await createPlant())).id;
   return User.create({
     plantId,

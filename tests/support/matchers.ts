@@ -22,6 +22,6 @@ interface ToleranceMatchers<R = unknown> {
 }
 
 declare module 'vitest' {
-  // eslint-disable-next-line @typescript-eslint/no-empty-object-type
+  // eslint-disable-next-line @typescript-eslint/no-empty-object-type, @typescript-eslint/no-explicit-any
   interface Matchers<T = any> extends ToleranceMatchers<T> {}
 }

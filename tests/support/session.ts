@@ -11,8 +11,16 @@ export async function agentFor(app: Express) {
     agent,
     token,
     get: (url: string) => agent.get(url),
-    post: (url: string, data?: object) => agent.post(url).set('X-CSRF-Token', token).send(data ?? {}),
-    patch: (url: string, data?: object) => agent.patch(url).set('X-CSRF-Token', token).send(data ?? {}),
+    post: (url: string, data?: object) =>
+      agent
+        .post(url)
+        .set('X-CSRF-Token', token)
+        .send(data ?? {}),
+    patch: (url: string, data?: object) =>
+      agent
+        .patch(url)
+        .set('X-CSRF-Token', token)
+        .send(data ?? {}),
     delete: (url: string) => agent.delete(url).set('X-CSRF-Token', token),
   };
 }

@@ -24,9 +24,16 @@ export function authRouter(opts: { loginAttemptsPer15Min: number }) {
     limit: opts.loginAttemptsPer15Min,
     standardHeaders: 'draft-8',
     legacyHeaders: false,
-    keyGenerator: (req) => `${ipKeyGenerator(req.ip ?? '')}|${String(req.body?.email ?? '').toLowerCase()}`,
+    keyGenerator: (req) =>
+      `${ipKeyGenerator(req.ip ?? '')}|${String(req.body?.email ?? '').toLowerCase()}`,
     handler: (_req, _res, next) =>
-      next(new AppError(429, 'rate_limited', 'Too many sign-in attempts. Wait 15 minutes and try again.')),
+      next(
+        new AppError(
+          429,
+          'rate_limited',
+          'Too many sign-in attempts. Wait 15 minutes and try again.',
+        ),
+      ),
   });
 
   router.post('/login', limiter, validate(loginSchema), (req, res, next) => {

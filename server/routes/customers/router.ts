@@ -22,22 +22,45 @@ export function customersRouter() {
   const findCustomer = (id: number, actor: User) =>
     Customer.findOne({ where: { [Op.and]: [{ id }, customerPolicy.scope(actor)] }, attributes });
 
-  router.get('/', requireUser, validate(listQuerySchema, 'query'), authorize(customerPolicy.list), handle(async (req, res) => {
-    const q = res.locals.query as ListQuery;
-    const where = {
-      ...customerPolicy.scope(req.user!),
-      ...(q.q ? { [Op.or]: [{ name: { [Op.iLike]: `%${q.q}%` } }, { city: { [Op.iLike]: `%${q.q}%` } }, { email: { [Op.iLike]: `%${q.q}%` } }] } : {}),
-    };
-    const { rows, count } = await Customer.findAndCountAll({
-      where, attributes, order: orderFrom(q.sort, SORT, [['name', 'ASC']]),
-      limit: q.pageSize, offset: (q.page - 1) * q.pageSize,
-    });
-    res.json(presentPage(rows.map(presentCustomerSummary), count, q));
-  }));
+  router.get(
+    '/',
+    requireUser,
+    validate(listQuerySchema, 'query'),
+    authorize(customerPolicy.list),
+    handle(async (req, res) => {
+      const q = res.locals.query as ListQuery;
+      const where = {
+        ...customerPolicy.scope(req.user!),
+        ...(q.q
+          ? {
+              [Op.or]: [
+                { name: { [Op.iLike]: `%${q.q}%` } },
+                { city: { [Op.iLike]: `%${q.q}%` } },
+                { email: { [Op.iLike]: `%${q.q}%` } },
+              ],
+            }
+          : {}),
+      };
+      const { rows, count } = await Customer.findAndCountAll({
+        where,
+        attributes,
+        order: orderFrom(q.sort, SORT, [['name', 'ASC']]),
+        limit: q.pageSize,
+        offset: (q.page - 1) * q.pageSize,
+      });
+      res.json(presentPage(rows.map(presentCustomerSummary), count, q));
+    }),
+  );
 
-  router.get('/:id', requireUser, load('Builder company', findCustomer), authorize(customerPolicy.show), (_req, res) => {
-    res.json(presentCustomerSummary(res.locals.record));
-  });
+  router.get(
+    '/:id',
+    requireUser,
+    load('Builder company', findCustomer),
+    authorize(customerPolicy.show),
+    (_req, res) => {
+      res.json(presentCustomerSummary(res.locals.record));
+    },
+  );
 
   return router;
 }

@@ -21,20 +21,36 @@ export function jobsRouter() {
   const findJob = (id: number, actor: User) =>
     Job.findOne({ where: { [Op.and]: [{ id }, jobPolicy.scope(actor)] }, include: withCustomer });
 
-  router.get('/', requireUser, validate(listQuerySchema, 'query'), authorize(jobPolicy.list), handle(async (req, res) => {
-    const q = res.locals.query as ListQuery;
-    const where = {
-      ...jobPolicy.scope(req.user!),
-      ...(q.q
-        ? { [Op.or]: [{ name: { [Op.iLike]: `%${q.q}%` } }, { address: { [Op.iLike]: `%${q.q}%` } }, { '$customer.name$': { [Op.iLike]: `%${q.q}%` } }] }
-        : {}),
-    };
-    const { rows, count } = await Job.findAndCountAll({
-      where, include: withCustomer, order: orderFrom(q.sort, SORT, [['createdAt', 'DESC']]),
-      limit: q.pageSize, offset: (q.page - 1) * q.pageSize, subQuery: false,
-    });
-    res.json(presentPage(rows.map(presentJobSummary), count, q));
-  }));
+  router.get(
+    '/',
+    requireUser,
+    validate(listQuerySchema, 'query'),
+    authorize(jobPolicy.list),
+    handle(async (req, res) => {
+      const q = res.locals.query as ListQuery;
+      const where = {
+        ...jobPolicy.scope(req.user!),
+        ...(q.q
+          ? {
+              [Op.or]: [
+                { name: { [Op.iLike]: `%${q.q}%` } },
+                { address: { [Op.iLike]: `%${q.q}%` } },
+                { '$customer.name$': { [Op.iLike]: `%${q.q}%` } },
+              ],
+            }
+          : {}),
+      };
+      const { rows, count } = await Job.findAndCountAll({
+        where,
+        include: withCustomer,
+        order: orderFrom(q.sort, SORT, [['createdAt', 'DESC']]),
+        limit: q.pageSize,
+        offset: (q.page - 1) * q.pageSize,
+        subQuery: false,
+      });
+      res.json(presentPage(rows.map(presentJobSummary), count, q));
+    }),
+  );
 
   router.get('/:id', requireUser, load('Job', findJob), authorize(jobPolicy.show), (_req, res) => {
     res.json(presentJobSummary(res.locals.record));

@@ -18,9 +18,13 @@ describe('migrations', () => {
       const up = await m.up();
       expect(up.length).toBeGreaterThan(0);
       const tables = async () =>
-        (await scratch.getQueryInterface().showAllTables()).filter((t) => t !== 'SequelizeMeta').sort();
+        (await scratch.getQueryInterface().showAllTables())
+          .filter((t) => t !== 'SequelizeMeta')
+          .sort();
       const after = await tables();
-      expect(after).toEqual(expect.arrayContaining(['plants', 'customers', 'users', 'jobs', 'audit_events', 'session']));
+      expect(after).toEqual(
+        expect.arrayContaining(['plants', 'customers', 'users', 'jobs', 'audit_events', 'session']),
+      );
       await m.down({ to: 0 });
       expect(await tables()).toEqual([]);
       await m.up();

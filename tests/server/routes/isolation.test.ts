@@ -5,7 +5,15 @@ import { signedIn } from '../../support/session';
 import type { Customer, Job, User } from '../../../server/models';
 
 const app = testApp();
-let ours: { admin: User; sales: User; builder: User; customer: Customer; otherCustomer: Customer; job: Job; otherCompanyJob: Job };
+let ours: {
+  admin: User;
+  sales: User;
+  builder: User;
+  customer: Customer;
+  otherCustomer: Customer;
+  job: Job;
+  otherCompanyJob: Job;
+};
 let theirs: { user: User; customer: Customer; job: Job };
 
 beforeAll(async () => {
@@ -23,7 +31,11 @@ beforeAll(async () => {
   };
   const otherPlant = await createPlant();
   const c = await createCustomer({ plant: otherPlant });
-  theirs = { user: await createUser({ role: 'foreman', plant: otherPlant }), customer: c, job: await createJob({ customer: c }) };
+  theirs = {
+    user: await createUser({ role: 'foreman', plant: otherPlant }),
+    customer: c,
+    job: await createJob({ customer: c }),
+  };
 });
 
 describe('another plant’s records', () => {
@@ -34,7 +46,11 @@ describe('another plant’s records', () => {
       expect(JSON.stringify(res.body)).not.toContain(theirs.customer.name);
     }
     await s.patch(`/api/users/${theirs.user.id}`, { name: 'Hijacked' }).expect(404);
-    const lists = await Promise.all([s.get('/api/jobs?pageSize=100'), s.get('/api/customers?pageSize=100'), s.get('/api/users?pageSize=100')]);
+    const lists = await Promise.all([
+      s.get('/api/jobs?pageSize=100'),
+      s.get('/api/customers?pageSize=100'),
+      s.get('/api/users?pageSize=100'),
+    ]);
     for (const l of lists) expect(JSON.stringify(l.body)).not.toContain(theirs.customer.name);
     expect(lists[2].body.items.map((u: { id: number }) => u.id)).not.toContain(theirs.user.id);
   });

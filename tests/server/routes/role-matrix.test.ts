@@ -28,11 +28,23 @@ const routes: Record<string, Call> = {
   'GET /api/users': { name: 'users.list', run: (s) => s.get('/api/users') },
   'POST /api/users': {
     name: 'users.create',
-    run: (s) => s.post('/api/users', { email: `new-${Math.random()}@example.test`, name: 'New Person', role: 'foreman', password: 'a-long-password' }),
+    run: (s) =>
+      s.post('/api/users', {
+        email: `new-${Math.random()}@example.test`,
+        name: 'New Person',
+        role: 'foreman',
+        password: 'a-long-password',
+      }),
   },
-  'PATCH /api/users/:id': { name: 'users.update', run: (s) => s.patch(`/api/users/${colleague.id}`, { name: 'Renamed' }) },
+  'PATCH /api/users/:id': {
+    name: 'users.update',
+    run: (s) => s.patch(`/api/users/${colleague.id}`, { name: 'Renamed' }),
+  },
   'GET /api/customers': { name: 'customers.list', run: (s) => s.get('/api/customers') },
-  'GET /api/customers/:id': { name: 'customers.show', run: (s) => s.get(`/api/customers/${customer.id}`) },
+  'GET /api/customers/:id': {
+    name: 'customers.show',
+    run: (s) => s.get(`/api/customers/${customer.id}`),
+  },
   'GET /api/jobs': { name: 'jobs.list', run: (s) => s.get('/api/jobs') },
   'GET /api/jobs/:id': { name: 'jobs.show', run: (s) => s.get(`/api/jobs/${job.id}`) },
   'GET /api/plant': { name: 'plant', run: (s) => s.get('/api/plant') },
@@ -63,7 +75,15 @@ describe('role matrix', () => {
   }
 
   it('signed out, every route answers 401', async () => {
-    for (const path of ['/api/users', '/api/customers', `/api/customers/${customer.id}`, '/api/jobs', `/api/jobs/${job.id}`, '/api/plant', '/api/auth/me']) {
+    for (const path of [
+      '/api/users',
+      '/api/customers',
+      `/api/customers/${customer.id}`,
+      '/api/jobs',
+      `/api/jobs/${job.id}`,
+      '/api/plant',
+      '/api/auth/me',
+    ]) {
       const res = await request(app).get(path);
       expect(res.status, path).toBe(401);
     }

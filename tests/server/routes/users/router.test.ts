@@ -16,12 +16,29 @@ describe('users (plant manager)', () => {
   it('adds a staff user who can then sign in, with an audit event', async () => {
     const { s, admin } = await adminWithPlant();
     const email = `engineer-${Date.now()}@example.test`;
-    const res = await s.post('/api/users', { email, name: 'Ada Reviewer', role: 'engineer', password: 'a-long-password' }).expect(201);
-    expect(res.body).toMatchObject({ email, name: 'Ada Reviewer', role: 'engineer', active: true, customerId: null });
+    const res = await s
+      .post('/api/users', {
+        email,
+        name: 'Ada Reviewer',
+        role: 'engineer',
+        password: 'a-long-password',
+      })
+      .expect(201);
+    expect(res.body).toMatchObject({
+      email,
+      name: 'Ada Reviewer',
+      role: 'engineer',
+      active: true,
+      customerId: null,
+    });
     expect(typeof res.body.id).toBe('number');
     const stored = await User.findByPk(res.body.id);
     expect(stored!.passwordHash).toMatch(/^\$2[aby]\$1[0-9]\$/); // bcrypt, cost ≥ 10
-    expect(await AuditEvent.count({ where: { actorId: admin.id, action: 'user.created', subjectId: res.body.id } })).toBe(1);
+    expect(
+      await AuditEvent.count({
+        where: { actorId: admin.id, action: 'user.created', subjectId: res.body.id },
+      }),
+    ).toBe(1);
     const fresh = await agentFor(app);
     await fresh.post('/api/auth/login', { email, password: 'a-long-password' }).expect(200);
   });
@@ -31,10 +48,20 @@ describe('users (plant manager)', () => {
     const mine = await createCustomer({ plant });
     const foreign = await createCustomer();
     const base = { name: 'B. User', role: 'builder', password: 'a-long-password' };
-    await s.post('/api/users', { ...base, email: `b1-${Date.now()}@example.test`, customerId: mine.id }).expect(201);
-    const bad = await s.post('/api/users', { ...base, email: `b2-${Date.now()}@example.test`, customerId: foreign.id }).expect(400);
+    await s
+      .post('/api/users', { ...base, email: `b1-${Date.now()}@example.test`, customerId: mine.id })
+      .expect(201);
+    const bad = await s
+      .post('/api/users', {
+        ...base,
+        email: `b2-${Date.now()}@example.test`,
+        customerId: foreign.id,
+      })
+      .expect(400);
     expect(bad.body.error.fields).toHaveProperty('customerId');
-    const missing = await s.post('/api/users', { ...base, email: `b3-${Date.now()}@example.test` }).expect(400);
+    const missing = await s
+      .post('/api/users', { ...base, email: `b3-${Date.now()}@example.test` })
+      .expect(400);
     expect(missing.body.error.fields.customerId).toMatch(/builder company/);
   });
 
@@ -56,7 +83,14 @@ describe('users (plant manager)', () => {
   it('refuses a duplicate e-mail with 409', async () => {
     const { s } = await adminWithPlant();
     const other = await createUser();
-    const res = await s.post('/api/users', { email: other.email, name: 'Dup', role: 'sales', password: 'a-long-password' }).expect(409);
+    const res = await s
+      .post('/api/users', {
+        email: other.email,
+        name: 'Dup',
+        role: 'sales',
+        password: 'a-long-password',
+      })
+      .expect(409);
     expect(res.body.error.fields.email).toBeTruthy();
   });
 
