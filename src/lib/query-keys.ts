@@ -37,6 +37,20 @@ export const customerKeys = resourceKeys('customers');
 /** Query keys of jobs. */
 export const jobKeys = resourceKeys('jobs');
 
+/** Query keys of orders; an order's lines live under its detail key (`orders.detail(id)`). */
+export const orderKeys = {
+  ...resourceKeys('orders'),
+  /** One stored truss line of an order. */
+  line: (orderId: number, lineId: number) => ['orders', 'detail', orderId, 'line', lineId] as const,
+};
+/** Query keys of the design reviewer's queue. */
+export const reviewKeys = resourceKeys('reviews');
+/** Query keys of stateless design previews (keyed by the input itself). */
+export const designKeys = {
+  all: ['designs'] as const,
+  preview: (input: unknown) => ['designs', 'preview', input] as const,
+};
+
 /** Query keys of the signed-in user's plant. */
 export const plantKeys = {
   all: ['plant'] as const,
@@ -49,5 +63,8 @@ export const queryKeys = {
   users: userKeys,
   customers: customerKeys,
   jobs: jobKeys,
+  orders: orderKeys,
+  reviews: reviewKeys,
+  designs: designKeys,
   plant: plantKeys,
 };
