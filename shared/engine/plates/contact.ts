@@ -1,6 +1,18 @@
-import polygonClipping, { type MultiPolygon } from 'polygon-clipping';
 import type { MemberRole } from '../profiles/types';
-import { areaInRectangle, clipHalfPlane, stripRing, type Point, type Ring } from './geometry';
+import {
+  areaInRectangle,
+  clipHalfPlane,
+  signedArea,
+  stripRing,
+  type Point,
+  type Ring,
+} from './geometry';
+
+/**
+ * A contact region as disjoint convex pieces (each an open counter-clockwise ring). Convex
+ * pieces keep every later step a half-plane clip: no general polygon boolean is needed.
+ */
+export type Region = Ring[];
 
 /** A member at the joint in the plate frame: unit direction away from the joint, half depth. */
 export interface LocalMember {
@@ -30,7 +42,7 @@ const SAME_DIRECTION = 1e-12;
  * every neighbour that cuts it: a mitre with members of its own rank, the band of any member
  * that runs through it. Computed once per joint; each plate size then only clips rectangles.
  */
-export const memberContactRegions = (members: LocalMember[], rules: ContactRules): MultiPolygon[] =>
+export const memberContactRegions = (members: LocalMember[], rules: ContactRules): Region[] =>
   members.map((m, i) => {
     const half = m.halfDepth - rules.edgeExclusion;
     if (half <= 0 || rules.reach <= rules.endExclusion) return [];
@@ -52,27 +64,52 @@ export const memberContactRegions = (members: LocalMember[], rules: ContactRules
       }
     });
     if (ring.length < 3) return [];
-    const own: MultiPolygon = [[close(ring)]];
-    return cutters.length === 0
-      ? own
-      : polygonClipping.difference(own, ...cutters.map((c) => [close(c)]));
+    return cutters.reduce(subtractConvex, [ring]);
   });
 
-// polygon-clipping wants closed rings; ours are open.
-const close = (ring: Ring): Ring => [...ring, ring[0]];
+// Pieces thinner than this (mm²) are rounding slivers of a cut along a shared edge.
+const SLIVER_AREA = 1e-9;
 
-/** Area of a region inside the centred plate rectangle (outer rings add, holes subtract). */
+/**
+ * Removes the convex polygon `cut` from disjoint convex pieces. For each piece, the part outside
+ * edge i of `cut` but inside edges 0…i−1 is convex, and these parts are disjoint and together
+ * make piece − cut exactly.
+ */
+export const subtractConvex = (pieces: Region, cut: Ring): Region => {
+  const ccw = signedArea(cut) >= 0 ? cut : [...cut].reverse();
+  const edges = ccw.map((p, i) => {
+    const q = ccw[(i + 1) % ccw.length];
+    const a = p[1] - q[1];
+    const b = q[0] - p[0];
+    // Inside the cut: a·u + b·v ≥ c.
+    return { a, b, c: a * p[0] + b * p[1] };
+  });
+  const out: Region = [];
+  for (const piece of pieces) {
+    let inside: Ring = piece;
+    for (const e of edges) {
+      const outside = clipHalfPlane(inside, -e.a, -e.b, -e.c);
+      if (outside.length > 2 && Math.abs(signedArea(outside)) > SLIVER_AREA) out.push(outside);
+      inside = clipHalfPlane(inside, e.a, e.b, e.c);
+      if (inside.length < 3) break;
+    }
+  }
+  return out;
+};
+
+/**
+ * Area of a region (disjoint convex pieces) inside the plate rectangle |u| ≤ halfLength,
+ * |v − offset| ≤ halfWidth (the plate slid `offset` across its axis).
+ */
 export const regionAreaInPlate = (
-  region: MultiPolygon,
+  region: Region,
   halfLength: number,
   halfWidth: number,
+  offset = 0,
 ): number => {
   let area = 0;
-  for (const polygon of region) {
-    polygon.forEach((ring, k) => {
-      const a = Math.abs(areaInRectangle(ring as Ring, halfLength, halfWidth));
-      area += k === 0 ? a : -a;
-    });
+  for (const piece of region) {
+    area += Math.abs(areaInRectangle(piece, halfLength, halfWidth, offset));
   }
   return area;
 };

@@ -114,6 +114,19 @@ const steelChecks = (
   return [];
 };
 
+/**
+ * Where to try the plate centre across its length axis, mm: on the joint first; at a panel
+ * point also slid toward each side until its edge just covers the chord's far face, so the
+ * plate reaches further onto webs that leave the chord on one side (common practice). Heels and
+ * splices stay centred, since their steel checks assume the joint line through the centre.
+ */
+const plateOffsets = (kind: PlateJoint['kind'], local: LocalMember[], halfWidth: number) => {
+  if (kind === 'heel' || kind === 'splice') return [0];
+  const chordHalf = Math.max(0, ...local.filter((m) => m.role !== 'web').map((m) => m.halfDepth));
+  const slide = halfWidth - chordHalf;
+  return chordHalf > 0 && slide > 0 ? [0, slide, -slide] : [0];
+};
+
 /** Catalog order to try: smallest area first, then the lighter steel (higher gauge number). */
 const byAreaThenGauge = (a: PlateSpec, b: PlateSpec) =>
   a.width * a.length - b.width * b.length || b.gauge - a.gauge;
@@ -191,29 +204,37 @@ export const designJointPlate = (
       };
       continue;
     }
-    const checks: MemberPlateCheck[] = [];
-    let fits = true;
-    for (const i of order) {
-      const m = joint.members[i];
-      const lateral = lateralValueAtAngle(plate, m.loadToGrain ?? 0) / MM2_PER_IN2; // lbf/mm²
-      const demand = Math.abs(m.force);
-      // Cheap bound first: even the whole plate area could not hold this member.
-      if (demand > PLATES_PER_JOINT * halfLength * halfWidth * 4 * lateral * cd * N_PER_LBF) {
-        failure = { member: m.id, ratio: Infinity };
-        fits = false;
+    let placed: { offset: number; checks: MemberPlateCheck[] } | undefined;
+    for (const offset of plateOffsets(joint.kind, local, halfWidth)) {
+      const checks: MemberPlateCheck[] = [];
+      let fits = true;
+      for (const i of order) {
+        const m = joint.members[i];
+        const lateral = lateralValueAtAngle(plate, m.loadToGrain ?? 0) / MM2_PER_IN2; // lbf/mm²
+        const demand = Math.abs(m.force);
+        // Cheap bound first: even the whole plate area could not hold this member.
+        if (demand > PLATES_PER_JOINT * halfLength * halfWidth * 4 * lateral * cd * N_PER_LBF) {
+          failure = { member: m.id, ratio: Infinity };
+          fits = false;
+          break;
+        }
+        const area = regionAreaInPlate(regions[i], halfLength, halfWidth, offset);
+        const capacity = PLATES_PER_JOINT * area * lateral * cd * N_PER_LBF;
+        const c = check(demand, capacity);
+        if (c.ratio > 1) {
+          failure = { member: m.id, ratio: c.ratio };
+          fits = false;
+          break;
+        }
+        checks.push({ member: m.id, area, ...c });
+      }
+      if (fits) {
+        placed = { offset, checks };
         break;
       }
-      const area = regionAreaInPlate(regions[i], halfLength, halfWidth);
-      const capacity = PLATES_PER_JOINT * area * lateral * cd * N_PER_LBF;
-      const c = check(demand, capacity);
-      if (c.ratio > 1) {
-        failure = { member: m.id, ratio: c.ratio };
-        fits = false;
-        break;
-      }
-      checks.push({ member: m.id, area, ...c });
     }
-    if (!fits) continue;
+    if (!placed) continue;
+    const { checks, offset } = placed;
     checks.sort(
       (a, b) =>
         joint.members.findIndex((m) => m.id === a.member) -
@@ -224,6 +245,7 @@ export const designJointPlate = (
       plate,
       count: PLATES_PER_JOINT,
       angle: Math.atan2(axis[1], axis[0]),
+      offset,
       members: checks,
       steel,
       ratio: Math.max(0, ...checks.map((c) => c.ratio), ...steel.map((s) => s.ratio)),

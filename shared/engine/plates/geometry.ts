@@ -37,12 +37,17 @@ export const clipHalfPlane = (ring: Ring, a: number, b: number, c: number): Ring
   return out;
 };
 
-/** Area of `ring` inside the centred rectangle |u| ≤ halfLength, |v| ≤ halfWidth. */
-export const areaInRectangle = (ring: Ring, halfLength: number, halfWidth: number): number => {
+/** Area of `ring` inside the rectangle |u| ≤ halfLength, |v − offset| ≤ halfWidth. */
+export const areaInRectangle = (
+  ring: Ring,
+  halfLength: number,
+  halfWidth: number,
+  offset = 0,
+): number => {
   let r = clipHalfPlane(ring, 1, 0, -halfLength);
   if (r.length > 2) r = clipHalfPlane(r, -1, 0, -halfLength);
-  if (r.length > 2) r = clipHalfPlane(r, 0, 1, -halfWidth);
-  if (r.length > 2) r = clipHalfPlane(r, 0, -1, -halfWidth);
+  if (r.length > 2) r = clipHalfPlane(r, 0, 1, offset - halfWidth);
+  if (r.length > 2) r = clipHalfPlane(r, 0, -1, -offset - halfWidth);
   return r.length > 2 ? signedArea(r) : 0;
 };
 

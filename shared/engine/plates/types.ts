@@ -115,6 +115,11 @@ export interface JointPlateDesign {
   count: 2;
   /** Angle of the plate length axis from +x, radians. */
   angle: number;
+  /**
+   * Slide of the plate centre from the joint across its length axis, mm (+ toward the axis
+   * turned +90°); 0 is centred on the joint.
+   */
+  offset: number;
   members: MemberPlateCheck[];
   steel: SteelCheck[];
   /** Largest ratio of all checks (≤ 1). */

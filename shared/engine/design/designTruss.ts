@@ -1,0 +1,310 @@
+import type { EngineDesignInput } from '../../api/design';
+import { lumberLabel } from '../lumber';
+import { checkBearing } from '../members/bearing';
+import { DEMO_PLATE_CATALOG } from '../plates';
+import { generateProfile } from '../profiles';
+import type { TrussProfile } from '../profiles/types';
+import { KPA_PER_PSF } from '../units';
+import { ENGINE_VERSION } from '../version';
+import { DESIGN_CAUTIONS } from './cautions';
+import { designLoads } from './combinedLoads';
+import { designDeflection, prepareWithStiffness } from './deflection';
+import { memberDemands, type MemberDemands } from './demands';
+import { designPlates } from './jointPlates';
+import { lumberCandidates } from './lumberChoice';
+import {
+  chooseForGroup,
+  chordRepetitive,
+  sizingGroups,
+  sizingOptions,
+  type GroupChoice,
+  type MemberVerdict,
+  type SizingContext,
+  type SizingGroup,
+} from './sizing';
+import type {
+  DesignBearing,
+  DesignCombination,
+  DesignMember,
+  DesignOptions,
+  DesignPiece,
+  DesignReaction,
+  TrussDesign,
+} from './types';
+
+/**
+ * Tallest heel analysed as a standard heel: 8 in (common practice). Such a heel is modelled with
+ * the pointed line-model heel at the bearing; taller heels get the heel post and heel diagonal.
+ */
+export const STANDARD_HEEL_MAX_MM = 8 * 25.4;
+
+/** The sizing outcome per member index. */
+interface Sized {
+  groups: { group: SizingGroup; choice: GroupChoice }[];
+  lumberOf: string[];
+  bracedOf: boolean[];
+  verdictOf: MemberVerdict[];
+}
+
+function sizeAll(ctx: SizingContext, input: EngineDesignInput, options: DesignOptions): Sized {
+  const m = ctx.profile.members.length;
+  const lumberOf = new Array<string>(m);
+  const bracedOf = new Array<boolean>(m).fill(false);
+  const verdictOf = new Array<MemberVerdict>(m);
+  const groups = sizingGroups(ctx.profile).map((group) => {
+    const candidates = lumberCandidates(group.role, input.lumber, options.defaultLumber);
+    const web = group.role === 'web';
+    const forced = web && group.members.some((k) => ctx.bracedWebs.has(ctx.profile.members[k].id));
+    const choice = chooseForGroup(ctx, group.members, sizingOptions(candidates, web, forced));
+    for (const k of group.members) {
+      lumberOf[k] = choice.lumber;
+      bracedOf[k] = choice.braced;
+      verdictOf[k] = choice.verdicts.get(k)!;
+    }
+    return { group, choice };
+  });
+  return { groups, lumberOf, bracedOf, verdictOf };
+}
+
+const bracingText = (role: string, braced: boolean) =>
+  role === 'topChord'
+    ? 'Braced out of plane by the roof sheathing.'
+    : role === 'bottomChord'
+      ? 'Braced out of plane by the ceiling.'
+      : braced
+        ? 'Lateral brace at mid-length (permanent bracing per the drawings).'
+        : 'No lateral brace needed.';
+
+function designMembers(
+  profile: TrussProfile,
+  demands: MemberDemands,
+  combos: DesignCombination[],
+  sized: Sized,
+): DesignMember[] {
+  const pieceOf = new Map<string, string>();
+  for (const p of profile.pieces) for (const id of p.members) pieceOf.set(id, p.id);
+  const m = profile.members.length;
+  return profile.members.map((mb, k) => {
+    const forces = combos.map((_, i) => demands.axial[i * m + k]);
+    let maxMoment = 0;
+    for (let i = 0; i < combos.length; i++)
+      maxMoment = Math.max(maxMoment, demands.moment[i * m + k]);
+    const v = sized.verdictOf[k];
+    return {
+      id: mb.id,
+      from: mb.from,
+      to: mb.to,
+      role: mb.role,
+      piece: pieceOf.get(mb.id)!,
+      length: mb.length,
+      lumber: sized.lumberOf[k],
+      braced: sized.bracedOf[k],
+      forces,
+      maxTension: Math.max(0, ...forces),
+      maxCompression: Math.max(0, ...forces.map((f) => -f)),
+      maxMoment,
+      csi: v.csi,
+      governingCombination: combos[v.combination].name,
+      governingCheck: v.governing,
+      bracing: bracingText(mb.role, sized.bracedOf[k]),
+      ...(v.note && { note: v.note }),
+    };
+  });
+}
+
+function designPieces(profile: TrussProfile, sized: Sized): DesignPiece[] {
+  const index = new Map(profile.members.map((mb, k) => [mb.id, k]));
+  const failing = new Set(
+    sized.groups.filter((g) => !g.choice.pass).flatMap((g) => g.group.pieces),
+  );
+  return profile.pieces.map((p) => {
+    const ks = p.members.map((id) => index.get(id)!);
+    return {
+      mark: p.id,
+      role: p.role,
+      lumber: sized.lumberOf[ks[0]],
+      length: p.length,
+      members: p.members,
+      splices: p.spliceAt ?? [],
+      csi: Math.max(...ks.map((k) => sized.verdictOf[k].csi)),
+      failing: failing.has(p),
+    };
+  });
+}
+
+function designReactions(demands: MemberDemands): DesignReaction[] {
+  const s = demands.supports.length;
+  return demands.supports.map((joint, j) => {
+    const vertical = Array.from({ length: demands.combinations }, (_, i) => demands.ry[i * s + j]);
+    const horizontal = Array.from(
+      { length: demands.combinations },
+      (_, i) => demands.rx[i * s + j],
+    );
+    return {
+      joint,
+      maxDown: Math.max(0, ...vertical),
+      maxUp: Math.max(0, ...vertical.map((r) => -r)),
+      maxHorizontal: Math.max(0, ...horizontal.map(Math.abs)),
+      vertical,
+      horizontal,
+    };
+  });
+}
+
+function designBearings(
+  profile: TrussProfile,
+  reactions: DesignReaction[],
+  sized: Sized,
+  input: EngineDesignInput,
+): DesignBearing[] {
+  return reactions.map((r) => {
+    const k = profile.members.findIndex(
+      (mb) => mb.role === 'bottomChord' && (mb.from === r.joint || mb.to === r.joint),
+    );
+    const result = checkBearing({
+      lumberId: sized.lumberOf[k],
+      plies: input.plies,
+      reaction: r.maxDown,
+      bearingLength: input.bearingWidth,
+    });
+    return {
+      joint: r.joint,
+      width: input.bearingWidth,
+      reaction: r.maxDown,
+      stress: result.stress,
+      capacity: result.fcPerpPrime,
+      ratio: result.ratio,
+      pass: result.ratio <= 1,
+    };
+  });
+}
+
+/** The readable reason a sizing group fails, e.g. "Top chord: no allowed lumber passes; …". */
+function sizingWarning(
+  group: SizingGroup,
+  choice: GroupChoice,
+  combos: DesignCombination[],
+  fixed: boolean,
+) {
+  const what = `${lumberLabelSafe(choice.lumber)}${choice.braced ? ' with a mid-length brace' : ''}`;
+  const why = `CSI ${choice.worst.csi.toFixed(2)} (${choice.worst.governing}, ${combos[choice.worst.combination].name})`;
+  return fixed
+    ? `${group.label}: the required ${what} does not pass at ${why}.`
+    : `${group.label}: no allowed lumber passes; best is ${what} at ${why}.`;
+}
+
+const lumberLabelSafe = (id: string) => {
+  try {
+    return lumberLabel(id);
+  } catch {
+    return id;
+  }
+};
+
+/**
+ * Designs one truss (SI in and out; pure): profile, loads and ASD combinations, member forces,
+ * NDS member checks with auto-sizing per piece, bearing, deflection and plates. A design that
+ * merely fails comes back with `ok: false` and the reasons in `warnings`; only a request that
+ * cannot be designed at all throws (EngineError `invalid`, or `geometry` from the profile).
+ */
+export function designTruss(input: EngineDesignInput, options: DesignOptions = {}): TrussDesign {
+  const notes: string[] = [];
+  const warnings: string[] = [];
+  const requestedHeel = input.profile.heelHeight;
+  const standardHeel = requestedHeel > 0 && requestedHeel <= STANDARD_HEEL_MAX_MM;
+  const analysedHeel = standardHeel ? 0 : requestedHeel;
+  if (standardHeel) {
+    notes.push(
+      'Standard heel (8 in. or less): analysed with the pointed line-model heel at the bearing.',
+    );
+  }
+  const profile = generateProfile({ ...input.profile, heelHeight: analysedHeel });
+  const loads = designLoads(input, profile, options.edition ?? '7-16');
+  const combos: DesignCombination[] = loads.combinations.map((c) => ({ name: c.name, cd: c.cd }));
+  const demands = memberDemands(profile, loads.combinations);
+
+  const webIds = new Set(profile.members.filter((mb) => mb.role === 'web').map((mb) => mb.id));
+  const unknownBraces = input.webBraces.filter((id) => !webIds.has(id));
+  if (unknownBraces.length > 0) {
+    warnings.push(`Web brace ignored, no such web in this truss: ${unknownBraces.join(', ')}.`);
+  }
+  const repetitive = chordRepetitive(input.spacing);
+  const ctx: SizingContext = {
+    profile,
+    demands,
+    cds: combos.map((c) => c.cd),
+    plies: input.plies,
+    repetitive,
+    bracedWebs: new Set(input.webBraces),
+  };
+  const sized = sizeAll(ctx, input, options);
+  for (const { group, choice } of sized.groups) {
+    if (choice.pass) continue;
+    const key = group.role === 'web' ? 'webs' : group.role;
+    warnings.push(sizingWarning(group, choice, combos, input.lumber[key]?.length === 1));
+  }
+
+  const members = designMembers(profile, demands, combos, sized);
+  const pieces = designPieces(profile, sized);
+  const reactions = designReactions(demands);
+  const bearing = designBearings(profile, reactions, sized, input);
+  for (const b of bearing.filter((x) => !x.pass)) {
+    warnings.push(
+      `Bearing at ${b.joint}: ratio ${b.ratio.toFixed(2)} on a ${lumberLabelSafe(sized.lumberOf[0])} ` +
+        'bottom chord; use a wider bearing or a bearing block.',
+    );
+  }
+  const stiff = prepareWithStiffness(profile, sized.lumberOf, input.plies);
+  const deflection = designDeflection(stiff, profile, loads.cases, input.deflection);
+  for (const d of [deflection.live, deflection.total]) {
+    if (d && !d.pass) {
+      warnings.push(
+        `Deflection under ${d.load}: span/${Math.round(d.ratio)} at ${d.joint}, limit span/${d.limit}.`,
+      );
+    }
+  }
+  const catalog = options.plateCatalog ?? DEMO_PLATE_CATALOG;
+  const plates = designPlates(profile, demands, ctx.cds, sized.lumberOf, catalog);
+  for (const p of plates.filter((x) => !x.ok)) warnings.push(`Plate at ${p.joint}: ${p.message}.`);
+
+  notes.push(
+    `Load combinations: ASCE ${loads.edition} §2.4.1 allowable stress design, each with the CD of its shortest load.`,
+    ...(loads.snow !== undefined
+      ? [
+          `Roof snow ps = ${loads.snow.toFixed(3)} kPa (${(loads.snow / KPA_PER_PSF).toFixed(1)} psf) from the ground snow load, ASCE ${loads.edition}.`,
+        ]
+      : []),
+    'Top chord braced out of plane by the sheathing, bottom chord by the ceiling; webs over their length unless braced.',
+    'Chord bending between panel points taken as wL²/8 per panel (a simple span: conservative for continuous chords); the heel panel also carries the overhang cantilever moment.',
+    repetitive
+      ? 'Repetitive member factor Cr = 1.15 on chord bending (spacing 24 in. o.c. or less).'
+      : 'No repetitive member factor: spacing over 24 in. o.c.',
+    'Deflection from member axial strain of the line model (no joint slip or creep).',
+    ...(catalog.demo ? [catalog.label] : []),
+  );
+  const ok =
+    sized.groups.every((g) => g.choice.pass) &&
+    bearing.every((b) => b.pass) &&
+    deflection.total.pass &&
+    (deflection.live?.pass ?? true) &&
+    plates.every((p) => p.ok);
+  return {
+    joints: profile.joints,
+    span: profile.params.span,
+    rise: profile.rise,
+    heelHeight: { requested: requestedHeel, analysed: analysedHeel },
+    members,
+    pieces,
+    reactions,
+    combinations: combos,
+    deflection,
+    plates,
+    demoPlates: catalog.demo,
+    bearing,
+    warnings,
+    notes,
+    cautions: [...DESIGN_CAUTIONS],
+    engineVersion: ENGINE_VERSION,
+    ok,
+  };
+}

@@ -1,0 +1,94 @@
+import { isEngineError } from '../errors';
+import { dressedSize, parseLumberId } from '../lumber';
+import { designJointPlate } from '../plates';
+import type { PlateCatalog, PlateJointKind, PlateJointMember } from '../plates/types';
+import type { TrussProfile } from '../profiles/types';
+import { mm, newton } from '../units';
+import type { MemberDemands } from './demands';
+import type { DesignPlate } from './types';
+
+/**
+ * Kind of each joint for the plate's steel checks: a heel where a top and a bottom chord meet, a
+ * splice where a chord piece ends at a splice, otherwise a panel point.
+ */
+export function jointKinds(profile: TrussProfile): Map<string, PlateJointKind> {
+  const kinds = new Map<string, PlateJointKind>();
+  const roles = new Map<string, Set<string>>();
+  for (const m of profile.members) {
+    for (const j of [m.from, m.to]) {
+      const set = roles.get(j) ?? new Set<string>();
+      set.add(m.role);
+      roles.set(j, set);
+    }
+  }
+  const splices = new Set(profile.pieces.flatMap((p) => p.spliceAt ?? []));
+  for (const j of profile.joints) {
+    const r = roles.get(j.id);
+    kinds.set(
+      j.id,
+      r?.has('topChord') && r.has('bottomChord') ? 'heel' : splices.has(j.id) ? 'splice' : 'panel',
+    );
+  }
+  return kinds;
+}
+
+/**
+ * Plates (both faces) at every joint. Each member's demand is its envelope max over the
+ * combinations of |F|/CD with the plate's CD = 1: tooth holding scales with CD, so this is the
+ * same check as one per combination, done in one call per joint. A joint with no fitting plate
+ * is reported (`ok: false`, with the reason), never thrown.
+ */
+export function designPlates(
+  profile: TrussProfile,
+  demands: MemberDemands,
+  cds: readonly number[],
+  lumberOf: readonly string[],
+  catalog: PlateCatalog,
+): DesignPlate[] {
+  const m = profile.members.length;
+  const envelope = new Float64Array(m);
+  for (let i = 0; i < cds.length; i++) {
+    for (let k = 0; k < m; k++) {
+      const f = Math.abs(demands.axial[i * m + k]) / cds[i];
+      if (f > envelope[k]) envelope[k] = f;
+    }
+  }
+  const depthOf = new Map<string, number>();
+  const depth = (id: string) => {
+    let d = depthOf.get(id);
+    if (d === undefined) depthOf.set(id, (d = dressedSize(parseLumberId(id).size).width));
+    return d;
+  };
+  const at = new Map(profile.joints.map((j) => [j.id, j]));
+  const meeting = new Map<string, PlateJointMember[]>(profile.joints.map((j) => [j.id, []]));
+  profile.members.forEach((mb, k) => {
+    const a = at.get(mb.from)!;
+    const b = at.get(mb.to)!;
+    const member = (dx: number, dy: number): PlateJointMember => ({
+      id: mb.id,
+      role: mb.role,
+      direction: { x: dx, y: dy },
+      depth: mm(depth(lumberOf[k])),
+      force: newton(envelope[k]),
+    });
+    meeting.get(a.id)!.push(member(b.x - a.x, b.y - a.y));
+    meeting.get(b.id)!.push(member(a.x - b.x, a.y - b.y));
+  });
+  const kinds = jointKinds(profile);
+  return profile.joints.map((j): DesignPlate => {
+    const kind = kinds.get(j.id)!;
+    try {
+      const design = designJointPlate(
+        { id: j.id, x: j.x, y: j.y, kind, members: meeting.get(j.id)! },
+        catalog,
+        { cd: 1 },
+      );
+      return { joint: j.id, kind, design, ok: true };
+    } catch (e) {
+      if (isEngineError(e) && e.code === 'no_plate_fits') {
+        return { joint: j.id, kind, ok: false, message: e.message };
+      }
+      throw e;
+    }
+  });
+}

@@ -1,0 +1,265 @@
+import { formatFeetInches, formatMm } from '../format';
+import { MM_PER_INCH, MPA_PER_PSI, N_PER_LBF } from '../units';
+import type { DeflectionCheck, TrussDesign } from './types';
+
+/** Unit system of a presented design. */
+export type PresentUnits = 'imperial' | 'metric';
+
+/** A length in the presented unit (in or mm) with the shop's text beside it. */
+export interface PresentedLength {
+  /** Inches (imperial) or mm (metric). */
+  value: number;
+  /** Feet-inches-sixteenths (e.g. `12'-0 1/2"`) or mm (e.g. `3658 mm`). */
+  text: string;
+}
+
+/** Units of every number in a presented design. */
+export interface PresentedUnits {
+  system: PresentUnits;
+  /** "in" or "mm". */
+  length: 'in' | 'mm';
+  /** "lbf" or "kN". */
+  force: 'lbf' | 'kN';
+  /** "lbf·ft" or "kN·m". */
+  moment: 'lbf·ft' | 'kN·m';
+  /** "psi" or "MPa". */
+  stress: 'psi' | 'MPa';
+  /** "in²" or "mm²". */
+  area: 'in²' | 'mm²';
+}
+
+/** A deflection check in presented units (`max` in in or mm; `ratio` null when Δ ≤ 0). */
+export interface PresentedDeflection {
+  load: string;
+  max: number;
+  joint: string;
+  ratio: number | null;
+  limit: number;
+  pass: boolean;
+}
+
+/**
+ * A design in the user's units for the CLI and the API: lengths in inches with feet-inches text
+ * (imperial) or mm (metric), forces lbf or kN, moments lbf·ft or kN·m, stresses psi or MPa.
+ * Field meanings are those of `TrussDesign`; `units` names every unit.
+ */
+export interface PresentedDesign {
+  units: PresentedUnits;
+  ok: boolean;
+  engineVersion: string;
+  span: PresentedLength;
+  rise: PresentedLength;
+  heelHeight: { requested: PresentedLength; analysed: PresentedLength };
+  joints: { id: string; x: number; y: number }[];
+  combinations: { name: string; cd: number }[];
+  members: {
+    id: string;
+    from: string;
+    to: string;
+    role: string;
+    piece: string;
+    length: PresentedLength;
+    lumber: string;
+    braced: boolean;
+    /** Axial force per combination (tension +), same order as `combinations`. */
+    forces: number[];
+    maxTension: number;
+    maxCompression: number;
+    maxMoment: number;
+    csi: number;
+    governingCombination: string;
+    governingCheck: string;
+    bracing: string;
+    note?: string;
+  }[];
+  pieces: {
+    mark: string;
+    role: string;
+    lumber: string;
+    length: PresentedLength;
+    members: string[];
+    splices: string[];
+    csi: number;
+    failing: boolean;
+  }[];
+  reactions: {
+    joint: string;
+    maxDown: number;
+    maxUp: number;
+    maxHorizontal: number;
+    /** Vertical reaction per combination, + up. */
+    vertical: number[];
+    horizontal: number[];
+  }[];
+  bearing: {
+    joint: string;
+    width: PresentedLength;
+    reaction: number;
+    stress: number;
+    capacity: number;
+    ratio: number;
+    pass: boolean;
+  }[];
+  deflection: {
+    liveCase?: string;
+    live?: PresentedDeflection;
+    total: PresentedDeflection;
+    bottomChord: { joint: string; total: number; live: number }[];
+  };
+  plates: {
+    joint: string;
+    kind: string;
+    ok: boolean;
+    /** Catalog id, e.g. "4x6-20"; plate width × length stay in the catalog's inches. */
+    plate?: string;
+    gauge?: number;
+    widthIn?: number;
+    lengthIn?: number;
+    ratio?: number;
+    members?: { member: string; area: number; demand: number; capacity: number; ratio: number }[];
+    steel?: { kind: string; member: string; demand: number; capacity: number; ratio: number }[];
+    message?: string;
+  }[];
+  demoPlates: boolean;
+  warnings: string[];
+  notes: string[];
+  cautions: string[];
+}
+
+const round = (v: number, digits: number) => {
+  const f = 10 ** digits;
+  return Math.round(v * f) / f;
+};
+
+/**
+ * Converts an SI design to the user's units. Imperial: in (3 decimals) with feet-inches text,
+ * lbf (1 decimal), lbf·ft, psi; metric: mm (1 decimal), kN (3 decimals), kN·m, MPa. CSIs and
+ * ratios keep 3 decimals; an infinite span/Δ becomes null (JSON has no Infinity).
+ */
+export function presentDesign(design: TrussDesign, units: PresentUnits): PresentedDesign {
+  const imperial = units === 'imperial';
+  const len = (v: number) => (imperial ? round(v / MM_PER_INCH, 3) : round(v, 1));
+  const length = (v: number): PresentedLength => ({
+    value: len(v),
+    text: imperial ? formatFeetInches(v) : formatMm(v),
+  });
+  const force = (v: number) => (imperial ? round(v / N_PER_LBF, 1) : round(v / 1000, 3));
+  // N·mm → lbf·ft or kN·m.
+  const moment = (v: number) =>
+    imperial ? round(v / N_PER_LBF / (12 * MM_PER_INCH), 1) : round(v / 1e6, 4);
+  const stress = (v: number) => (imperial ? round(v / MPA_PER_PSI, 1) : round(v, 3));
+  const area = (v: number) => (imperial ? round(v / MM_PER_INCH ** 2, 3) : round(v, 1));
+  const ratio = (v: number) => round(v, 3);
+  const deflection = (d: DeflectionCheck): PresentedDeflection => ({
+    load: d.load,
+    max: imperial ? round(d.max / MM_PER_INCH, 4) : round(d.max, 2),
+    joint: d.joint,
+    ratio: Number.isFinite(d.ratio) ? Math.round(d.ratio) : null,
+    limit: d.limit,
+    pass: d.pass,
+  });
+  const drop = (v: number) => (imperial ? round(v / MM_PER_INCH, 4) : round(v, 2));
+
+  return {
+    units: imperial
+      ? { system: units, length: 'in', force: 'lbf', moment: 'lbf·ft', stress: 'psi', area: 'in²' }
+      : { system: units, length: 'mm', force: 'kN', moment: 'kN·m', stress: 'MPa', area: 'mm²' },
+    ok: design.ok,
+    engineVersion: design.engineVersion,
+    span: length(design.span),
+    rise: length(design.rise),
+    heelHeight: {
+      requested: length(design.heelHeight.requested),
+      analysed: length(design.heelHeight.analysed),
+    },
+    joints: design.joints.map((j) => ({ id: j.id, x: len(j.x), y: len(j.y) })),
+    combinations: design.combinations.map((c) => ({ name: c.name, cd: c.cd })),
+    members: design.members.map((m) => ({
+      id: m.id,
+      from: m.from,
+      to: m.to,
+      role: m.role,
+      piece: m.piece,
+      length: length(m.length),
+      lumber: m.lumber,
+      braced: m.braced,
+      forces: m.forces.map(force),
+      maxTension: force(m.maxTension),
+      maxCompression: force(m.maxCompression),
+      maxMoment: moment(m.maxMoment),
+      csi: ratio(m.csi),
+      governingCombination: m.governingCombination,
+      governingCheck: m.governingCheck,
+      bracing: m.bracing,
+      ...(m.note && { note: m.note }),
+    })),
+    pieces: design.pieces.map((p) => ({
+      mark: p.mark,
+      role: p.role,
+      lumber: p.lumber,
+      length: length(p.length),
+      members: p.members,
+      splices: p.splices,
+      csi: ratio(p.csi),
+      failing: p.failing,
+    })),
+    reactions: design.reactions.map((r) => ({
+      joint: r.joint,
+      maxDown: force(r.maxDown),
+      maxUp: force(r.maxUp),
+      maxHorizontal: force(r.maxHorizontal),
+      vertical: r.vertical.map(force),
+      horizontal: r.horizontal.map(force),
+    })),
+    bearing: design.bearing.map((b) => ({
+      joint: b.joint,
+      width: length(b.width),
+      reaction: force(b.reaction),
+      stress: stress(b.stress),
+      capacity: stress(b.capacity),
+      ratio: ratio(b.ratio),
+      pass: b.pass,
+    })),
+    deflection: {
+      ...(design.deflection.liveCase && { liveCase: design.deflection.liveCase }),
+      ...(design.deflection.live && { live: deflection(design.deflection.live) }),
+      total: deflection(design.deflection.total),
+      bottomChord: design.deflection.bottomChord.map((b) => ({
+        joint: b.joint,
+        total: drop(b.total),
+        live: drop(b.live),
+      })),
+    },
+    plates: design.plates.map((p) => ({
+      joint: p.joint,
+      kind: p.kind,
+      ok: p.ok,
+      ...(p.design && {
+        plate: p.design.plate.id,
+        gauge: p.design.plate.gauge,
+        widthIn: p.design.plate.width,
+        lengthIn: p.design.plate.length,
+        ratio: ratio(p.design.ratio),
+        members: p.design.members.map((c) => ({
+          member: c.member,
+          area: area(c.area),
+          demand: force(c.demand),
+          capacity: force(c.capacity),
+          ratio: ratio(c.ratio),
+        })),
+        steel: p.design.steel.map((s) => ({
+          kind: s.kind,
+          member: s.member,
+          demand: force(s.demand),
+          capacity: force(s.capacity),
+          ratio: ratio(s.ratio),
+        })),
+      }),
+      ...(p.message && { message: p.message }),
+    })),
+    demoPlates: design.demoPlates,
+    warnings: design.warnings,
+    notes: design.notes,
+    cautions: design.cautions,
+  };
+}

@@ -1,0 +1,189 @@
+import { repetitiveApplies } from '../lumber';
+import { checkMember, type GoverningCheck } from '../members/checkMember';
+import type { Piece, ProfileMember, TrussProfile } from '../profiles/types';
+import type { MemberDemands } from './demands';
+
+/** Everything sizing needs besides the lumber: demands, CD per combination, plies, spacing. */
+export interface SizingContext {
+  profile: TrussProfile;
+  demands: MemberDemands;
+  cds: readonly number[];
+  plies: number;
+  /** Cr applies to chord bending (spacing ≤ 24 in. o.c., NDS 2018 4.3.9). */
+  repetitive: boolean;
+  /** Webs the request braces at mid-length. */
+  bracedWebs: ReadonlySet<string>;
+}
+
+/** The worst check of one member with one lumber over all combinations. */
+export interface MemberVerdict {
+  csi: number;
+  /** Index of the governing combination. */
+  combination: number;
+  governing: GoverningCheck;
+  note?: string;
+}
+
+/** A lumber (and, for a web, a brace) tried on a group of members. */
+export interface SizingOption {
+  lumber: string;
+  braced: boolean;
+}
+
+/** The choice for one sizing group (both top chords, both bottom chords, or one web). */
+export interface GroupChoice extends SizingOption {
+  pass: boolean;
+  /** Per member index of the group: its verdict with the chosen lumber. */
+  verdicts: Map<number, MemberVerdict>;
+  /** Worst over the group. */
+  worst: MemberVerdict;
+}
+
+/**
+ * Effective lengths, mm (NDS 2018 3.7.1): chords buckle in plane over one panel and are braced
+ * out of plane by sheathing (top) or the ceiling (bottom); a web buckles over its length both
+ * ways unless a lateral brace at mid-length halves it out of plane.
+ */
+export const effectiveLengths = (member: ProfileMember, braced: boolean) =>
+  member.role === 'web'
+    ? { leStrong: member.length, leWeak: braced ? member.length / 2 : member.length }
+    : { leStrong: member.length, leWeak: 0 };
+
+/**
+ * Checks member k with one option over the combinations, worst first by `order` when given.
+ * With `stopAbove`, returns at the first combination whose CSI exceeds it (an early exit that
+ * sizing uses to drop a candidate: the verdict is then only a lower bound).
+ */
+export function checkOverCombinations(
+  ctx: SizingContext,
+  k: number,
+  option: SizingOption,
+  stopAbove = Infinity,
+  order?: readonly number[],
+  perCombination?: Float64Array,
+): MemberVerdict {
+  const member = ctx.profile.members[k];
+  const { leStrong, leWeak } = effectiveLengths(member, option.braced);
+  const { axial, moment, members: m } = ctx.demands;
+  const repetitive = ctx.repetitive && member.role !== 'web';
+  let worst: MemberVerdict = { csi: -1, combination: 0, governing: 'tension' };
+  const n = ctx.cds.length;
+  for (let t = 0; t < n; t++) {
+    const i = order ? order[t] : t;
+    const result = checkMember({
+      lumberId: option.lumber,
+      plies: ctx.plies,
+      axial: axial[i * m + k],
+      moment: moment[i * m + k],
+      leStrong,
+      leWeak,
+      cd: ctx.cds[i],
+      repetitive,
+    });
+    if (perCombination) perCombination[i] = result.csi;
+    if (result.csi > worst.csi) {
+      worst = {
+        csi: result.csi,
+        combination: i,
+        governing: result.governing,
+        ...(result.note && { note: result.note }),
+      };
+      if (worst.csi > stopAbove) return worst;
+    }
+  }
+  return worst;
+}
+
+/** The options to try in order: each lumber unbraced, then (webs) with a mid-length brace. */
+export function sizingOptions(lumber: readonly string[], web: boolean, forcedBrace: boolean) {
+  return lumber.flatMap((id): SizingOption[] =>
+    !web || forcedBrace
+      ? [{ lumber: id, braced: forcedBrace }]
+      : [
+          { lumber: id, braced: false },
+          { lumber: id, braced: true },
+        ],
+  );
+}
+
+/**
+ * Picks the first option (cheapest first) under which every member of the group passes over all
+ * combinations (CSI ≤ 1). Combinations are tried worst first, by the CSIs the first option gave,
+ * and a failing option is dropped at its first failure. When none passes, every option is
+ * evaluated fully and the strongest (lowest worst CSI) is kept, marked failing.
+ */
+export function chooseForGroup(
+  ctx: SizingContext,
+  memberIndices: readonly number[],
+  options: readonly SizingOption[],
+): GroupChoice {
+  const orders = new Map<number, number[]>();
+  for (const option of options) {
+    const verdicts = new Map<number, MemberVerdict>();
+    let pass = true;
+    for (const k of memberIndices) {
+      let order = orders.get(k);
+      let v: MemberVerdict;
+      if (!order) {
+        const csis = new Float64Array(ctx.cds.length);
+        v = checkOverCombinations(ctx, k, option, Infinity, undefined, csis);
+        order = [...csis.keys()].sort((a, b) => csis[b] - csis[a]);
+        orders.set(k, order);
+      } else {
+        v = checkOverCombinations(ctx, k, option, 1, order);
+      }
+      verdicts.set(k, v);
+      if (v.csi > 1) {
+        pass = false;
+        break;
+      }
+    }
+    if (pass) return { ...option, pass, verdicts, worst: worstOf(verdicts) };
+  }
+  let best: GroupChoice | undefined;
+  for (const option of options) {
+    const verdicts = new Map(memberIndices.map((k) => [k, checkOverCombinations(ctx, k, option)]));
+    const worst = worstOf(verdicts);
+    if (!best || worst.csi < best.worst.csi) best = { ...option, pass: false, verdicts, worst };
+  }
+  return best!;
+}
+
+const worstOf = (verdicts: Map<number, MemberVerdict>): MemberVerdict => {
+  let worst: MemberVerdict | undefined;
+  for (const v of verdicts.values()) if (!worst || v.csi > worst.csi) worst = v;
+  return worst!;
+};
+
+/** A sizing group: pieces that share one lumber, and their members' indices. */
+export interface SizingGroup {
+  label: string;
+  role: Piece['role'];
+  pieces: Piece[];
+  members: number[];
+}
+
+/**
+ * Groups for sizing: all top-chord pieces together, all bottom-chord pieces together (a truss is
+ * built with one chord stock per chord, so both top chords match), each web piece on its own.
+ */
+export function sizingGroups(profile: TrussProfile): SizingGroup[] {
+  const index = new Map(profile.members.map((m, k) => [m.id, k]));
+  const of = (pieces: Piece[]) => pieces.flatMap((p) => p.members.map((id) => index.get(id)!));
+  const top = profile.pieces.filter((p) => p.role === 'topChord');
+  const bottom = profile.pieces.filter((p) => p.role === 'bottomChord');
+  const webs = profile.pieces.filter((p) => p.role === 'web');
+  return [
+    { label: 'Top chord', role: 'topChord' as const, pieces: top, members: of(top) },
+    { label: 'Bottom chord', role: 'bottomChord' as const, pieces: bottom, members: of(bottom) },
+    ...webs.map((p) => ({
+      label: `Web ${p.id} (${p.members.join(', ')})`,
+      role: 'web' as const,
+      pieces: [p],
+      members: of([p]),
+    })),
+  ].filter((g) => g.members.length > 0);
+}
+
+/** Cr on chord bending for trusses at ≤ 24 in. o.c. (NDS 2018 4.3.9). */
+export const chordRepetitive = (spacingMm: number) => repetitiveApplies(spacingMm);
