@@ -1,0 +1,79 @@
+/**
+ * The stress-index ramp of the drawing and tables. Our own ramp: blue for comfortable members,
+ * amber as a member approaches its capacity and red with hatching when it fails. Blue against
+ * amber stays distinct for the common colour-vision deficiencies, each hue has a light and a
+ * dark step, and a failing member is also hatched and tagged so colour is never the only cue.
+ * Classes are Tailwind tokens of tailwind.config.ts.
+ */
+
+/** One band of the ramp. `upTo` is inclusive; the failing band has `upTo: Infinity`. */
+export interface CsiBand {
+  id: 'low' | 'moderate' | 'high' | 'near' | 'fails';
+  upTo: number;
+  /** Legend text, e.g. "≤ 0.50". */
+  label: string;
+  /** SVG stroke class of the member band. */
+  stroke: string;
+  /** Fill class of the legend swatch and table badge. */
+  fill: string;
+  fails: boolean;
+}
+
+/** The bands, lowest first (common practice: CSI ≤ 1.00 passes). */
+export const CSI_BANDS: readonly CsiBand[] = [
+  {
+    id: 'low',
+    upTo: 0.5,
+    label: '≤ 0.50',
+    stroke: 'stroke-info-200',
+    fill: 'fill-info-200',
+    fails: false,
+  },
+  {
+    id: 'moderate',
+    upTo: 0.75,
+    label: '≤ 0.75',
+    stroke: 'stroke-info-700',
+    fill: 'fill-info-700',
+    fails: false,
+  },
+  {
+    id: 'high',
+    upTo: 0.9,
+    label: '≤ 0.90',
+    stroke: 'stroke-warning-200',
+    fill: 'fill-warning-200',
+    fails: false,
+  },
+  {
+    id: 'near',
+    upTo: 1,
+    label: '≤ 1.00',
+    stroke: 'stroke-warning-700',
+    fill: 'fill-warning-700',
+    fails: false,
+  },
+  {
+    id: 'fails',
+    upTo: Infinity,
+    label: '> 1.00 fails',
+    stroke: 'stroke-danger-600',
+    fill: 'fill-danger-600',
+    fails: true,
+  },
+];
+
+/**
+ * The band of a combined stress index. Rounded to two decimals first so a member shown as
+ * "1.00" in the table is never drawn as failing; NaN (no result) counts as failing, never as safe.
+ */
+export function csiBand(csi: number): CsiBand {
+  if (!Number.isFinite(csi)) return CSI_BANDS[CSI_BANDS.length - 1];
+  const shown = Math.round(csi * 100) / 100;
+  return CSI_BANDS.find((b) => shown <= b.upTo) ?? CSI_BANDS[CSI_BANDS.length - 1];
+}
+
+/** CSI as the tables show it: two decimals ("0.87"); "—" when there is no result. */
+export function formatCsi(csi: number | undefined | null): string {
+  return csi === undefined || csi === null || !Number.isFinite(csi) ? '—' : csi.toFixed(2);
+}

@@ -1,0 +1,51 @@
+import type { DrawingModel } from './model';
+import { formatLength, formatPitch, type PlantUnits } from './quantities';
+
+/** One horizontal dimension of the chain under the truss, mm along x. */
+export interface ChainSegment {
+  key: 'overhangLeft' | 'span' | 'overhangRight';
+  from: number;
+  to: number;
+  label: string;
+}
+
+/**
+ * The chain of horizontal dimensions under the truss: left overhang, span (out-to-out of
+ * bearings), right overhang; zero-length overhangs are left out.
+ */
+export function chainDimensions(model: DrawingModel, units: PlantUnits): ChainSegment[] {
+  const left = model.overhangs.find((o) => o.side === 'left')?.horizontal ?? 0;
+  const right = model.overhangs.find((o) => o.side === 'right')?.horizontal ?? 0;
+  const segments: ChainSegment[] = [];
+  if (left > 0) {
+    segments.push({ key: 'overhangLeft', from: -left, to: 0, label: formatLength(left, units) });
+  }
+  segments.push({ key: 'span', from: 0, to: model.span, label: formatLength(model.span, units) });
+  if (right > 0) {
+    segments.push({
+      key: 'overhangRight',
+      from: model.span,
+      to: model.span + right,
+      label: formatLength(right, units),
+    });
+  }
+  return segments;
+}
+
+/** The pitch symbol's text: rise over 12, or null for a flat truss. */
+export function pitchSymbol(model: DrawingModel): { rise: string; run: string } | null {
+  if (model.pitch === undefined || model.pitch <= 0) return null;
+  return { rise: formatPitch(model.pitch).replace('/12', ''), run: '12' };
+}
+
+/** A one-line description for the drawing's accessible name. */
+export function drawingTitle(kindLabel: string, model: DrawingModel, units: PlantUnits): string {
+  const parts = [`${kindLabel} truss`, `span ${formatLength(model.span, units)}`];
+  if (model.pitch !== undefined) parts.push(`pitch ${formatPitch(model.pitch)}`);
+  if (model.heelHeight > 0) parts.push(`heel ${formatLength(model.heelHeight, units)}`);
+  const failing = model.members.filter((m) => m.csi !== undefined && m.csi > 1).length;
+  if (model.members.some((m) => m.csi !== undefined)) {
+    parts.push(failing > 0 ? `${failing} members fail` : 'all members pass');
+  }
+  return parts.join(', ');
+}

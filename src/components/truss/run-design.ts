@@ -1,0 +1,63 @@
+import { designInputSchema, toEngineInput, type DesignInput } from '../../../shared/api/design';
+import { designTruss, presentDesign, type PresentedDesign } from '../../../shared/engine/design';
+import { generateProfile } from '../../../shared/engine/profiles';
+import type { ProfileParams } from '../../../shared/engine/profiles/types';
+import { drawingFromDesign } from './from-design';
+import type { DrawingModel, DrawingOverhang } from './model';
+
+/** A design run in the browser: the presented result and its drawing. */
+export interface DesignRun {
+  presented: PresentedDesign;
+  drawing: DrawingModel;
+}
+
+/**
+ * The overhangs of the analysed line model. The engine analyses a standard heel as pointed, so
+ * the profile is regenerated with the analysed heel height to find the joint each overhang
+ * leaves from; a profile the generator refuses simply has no overhangs drawn.
+ */
+export function overhangsOf(params: ProfileParams, analysedHeel: number): DrawingOverhang[] {
+  try {
+    return generateProfile({ ...params, heelHeight: analysedHeel }).overhangs.map((o) => ({
+      side: o.side,
+      heelJoint: o.heelJoint,
+      horizontal: o.horizontal,
+      member: o.member,
+    }));
+  } catch {
+    return [];
+  }
+}
+
+/** Runs the full engine on a checked input, in the user's units. Throws EngineError. */
+export function runDesign(input: DesignInput): DesignRun {
+  const engine = toEngineInput(input);
+  const design = designTruss(engine);
+  const presented = presentDesign(design, input.units);
+  const drawing = drawingFromDesign(presented, {
+    overhangs: overhangsOf(engine.profile, design.heelHeight.analysed),
+    pitch: input.profile === 'flat' ? undefined : input.pitch,
+  });
+  return { presented, drawing };
+}
+
+/**
+ * The drawing of a stored line: its server result drawn as is, with the overhangs and pitch
+ * read from the stored design input (absent when that input no longer parses).
+ */
+export function drawingOfStoredLine(
+  designInput: Record<string, unknown>,
+  result: PresentedDesign,
+): DrawingModel {
+  const parsed = designInputSchema.safeParse(designInput);
+  if (!parsed.success) return drawingFromDesign(result, { overhangs: [] });
+  const engine = toEngineInput(parsed.data);
+  const analysed =
+    result.units.length === 'in'
+      ? result.heelHeight.analysed.value * 25.4
+      : result.heelHeight.analysed.value;
+  return drawingFromDesign(result, {
+    overhangs: overhangsOf(engine.profile, analysed),
+    pitch: parsed.data.profile === 'flat' ? undefined : parsed.data.pitch,
+  });
+}
