@@ -15,12 +15,14 @@ import { lumberCandidates } from './lumberChoice';
 import {
   chooseForGroup,
   chordRepetitive,
+  criticalCombinations,
   sizingGroups,
   sizingOptions,
   type GroupChoice,
   type MemberVerdict,
   type SizingContext,
   type SizingGroup,
+  type SizingOption,
 } from './sizing';
 import type {
   DesignBearing,
@@ -51,11 +53,20 @@ function sizeAll(ctx: SizingContext, input: EngineDesignInput, options: DesignOp
   const lumberOf = new Array<string>(m);
   const bracedOf = new Array<boolean>(m).fill(false);
   const verdictOf = new Array<MemberVerdict>(m);
+  const candidatesOf = new Map<string, string[]>();
+  const optionsOf = new Map<string, SizingOption[]>();
   const groups = sizingGroups(ctx.profile).map((group) => {
-    const candidates = lumberCandidates(group.role, input.lumber, options.defaultLumber);
+    let candidates = candidatesOf.get(group.role);
+    if (!candidates) {
+      candidates = lumberCandidates(group.role, input.lumber, options.defaultLumber);
+      candidatesOf.set(group.role, candidates);
+    }
     const web = group.role === 'web';
     const forced = web && group.members.some((k) => ctx.bracedWebs.has(ctx.profile.members[k].id));
-    const choice = chooseForGroup(ctx, group.members, sizingOptions(candidates, web, forced));
+    const key = `${group.role}${forced}`;
+    let tries = optionsOf.get(key);
+    if (!tries) optionsOf.set(key, (tries = sizingOptions(candidates, web, forced)));
+    const choice = chooseForGroup(ctx, group.members, tries);
     for (const k of group.members) {
       lumberOf[k] = choice.lumber;
       bracedOf[k] = choice.braced;
@@ -229,13 +240,15 @@ export function designTruss(input: EngineDesignInput, options: DesignOptions = {
     warnings.push(`Web brace ignored, no such web in this truss: ${unknownBraces.join(', ')}.`);
   }
   const repetitive = chordRepetitive(input.spacing);
+  const cds = combos.map((c) => c.cd);
   const ctx: SizingContext = {
     profile,
     demands,
-    cds: combos.map((c) => c.cd),
+    cds,
     plies: input.plies,
     repetitive,
     bracedWebs: new Set(input.webBraces),
+    critical: profile.members.map((_, k) => criticalCombinations(demands, cds, k)),
   };
   const sized = sizeAll(ctx, input, options);
   for (const { group, choice } of sized.groups) {

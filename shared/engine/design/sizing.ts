@@ -13,6 +13,42 @@ export interface SizingContext {
   repetitive: boolean;
   /** Webs the request braces at mid-length. */
   bracedWebs: ReadonlySet<string>;
+  /** Per member index, the combinations that can govern (see `criticalCombinations`). */
+  critical: readonly (readonly number[])[];
+}
+
+/**
+ * The combinations that can govern member k, whatever the lumber. Combination B cannot govern
+ * when some A has CD_A ≤ CD_B, M_A ≥ M_B and an axial force of the same sign at least as large
+ * (any axial force when N_B = 0): every NDS ratio of B is then at most one of A's (capacities
+ * grow with CD; the (fb − ft)/Fb** term of B is at most B's own fb/Fb′ ≤ A's). Ties keep the
+ * first. Checking only these keeps sizing fast without changing any result.
+ */
+export function criticalCombinations(
+  demands: MemberDemands,
+  cds: readonly number[],
+  k: number,
+): number[] {
+  const { axial, moment, members: m } = demands;
+  const n = cds.length;
+  const keep: number[] = [];
+  for (let b = 0; b < n; b++) {
+    const nb = axial[b * m + k];
+    const mb = moment[b * m + k];
+    let dominated = false;
+    for (let a = 0; a < n && !dominated; a++) {
+      if (a === b) continue;
+      const na = axial[a * m + k];
+      const ma = moment[a * m + k];
+      const sameSide = nb === 0 || (nb > 0 ? na >= nb : na <= nb);
+      if (!(cds[a] <= cds[b] && ma >= mb && sameSide)) continue;
+      // Equal demands and CD: keep the earlier combination only.
+      const equal = cds[a] === cds[b] && ma === mb && na === nb;
+      dominated = !equal || a < b;
+    }
+    if (!dominated) keep.push(b);
+  }
+  return keep;
 }
 
 /** The worst check of one member with one lumber over all combinations. */
@@ -50,7 +86,7 @@ export const effectiveLengths = (member: ProfileMember, braced: boolean) =>
     : { leStrong: member.length, leWeak: 0 };
 
 /**
- * Checks member k with one option over the combinations, worst first by `order` when given.
+ * Checks member k with one option over its critical combinations (in `order` when given).
  * With `stopAbove`, returns at the first combination whose CSI exceeds it (an early exit that
  * sizing uses to drop a candidate: the verdict is then only a lower bound).
  */
@@ -67,9 +103,9 @@ export function checkOverCombinations(
   const { axial, moment, members: m } = ctx.demands;
   const repetitive = ctx.repetitive && member.role !== 'web';
   let worst: MemberVerdict = { csi: -1, combination: 0, governing: 'tension' };
-  const n = ctx.cds.length;
-  for (let t = 0; t < n; t++) {
-    const i = order ? order[t] : t;
+  const combos = order ?? ctx.critical[k];
+  for (let t = 0; t < combos.length; t++) {
+    const i = combos[t];
     const result = checkMember({
       lumberId: option.lumber,
       plies: ctx.plies,
@@ -127,7 +163,7 @@ export function chooseForGroup(
       if (!order) {
         const csis = new Float64Array(ctx.cds.length);
         v = checkOverCombinations(ctx, k, option, Infinity, undefined, csis);
-        order = [...csis.keys()].sort((a, b) => csis[b] - csis[a]);
+        order = [...ctx.critical[k]].sort((a, b) => csis[b] - csis[a]);
         orders.set(k, order);
       } else {
         v = checkOverCombinations(ctx, k, option, 1, order);

@@ -42,30 +42,40 @@ const SAME_DIRECTION = 1e-12;
  * every neighbour that cuts it: a mitre with members of its own rank, the band of any member
  * that runs through it. Computed once per joint; each plate size then only clips rectangles.
  */
-export const memberContactRegions = (members: LocalMember[], rules: ContactRules): Region[] =>
-  members.map((m, i) => {
-    const half = m.halfDepth - rules.edgeExclusion;
-    if (half <= 0 || rules.reach <= rules.endExclusion) return [];
-    let ring: Ring = stripRing(m.direction, rules.endExclusion, rules.reach, half);
-    const cutters: Ring[] = [];
-    members.forEach((o, j) => {
-      if (j === i) return;
-      const du = m.direction[0] - o.direction[0];
-      const dv = m.direction[1] - o.direction[1];
-      const len2 = du * du + dv * dv;
-      if (RANK[o.role] === RANK[m.role]) {
-        if (len2 < SAME_DIRECTION || ring.length < 3) return;
-        const len = Math.sqrt(len2);
-        // Half-plane on this member's side of the bisector, moved back by the end exclusion.
-        ring = clipHalfPlane(ring, du / len, dv / len, rules.endExclusion);
-      } else if (RANK[o.role] < RANK[m.role]) {
-        const grown = o.halfDepth + rules.endExclusion;
-        cutters.push(stripRing(o.direction, -rules.endExclusion, rules.reach, grown));
-      }
-    });
-    if (ring.length < 3) return [];
-    return cutters.reduce(subtractConvex, [ring]);
-  });
+export const memberContactRegions = (members: LocalMember[], rules: ContactRules): Region[] => {
+  const out: Region[] = [];
+  for (let i = 0; i < members.length; i++) out.push(contactRegion(members, i, rules));
+  return out;
+};
+
+/** The contact region of member i (plain loops: this runs for every member of every joint). */
+const contactRegion = (members: LocalMember[], i: number, rules: ContactRules): Region => {
+  const m = members[i];
+  const half = m.halfDepth - rules.edgeExclusion;
+  if (half <= 0 || rules.reach <= rules.endExclusion) return [];
+  let ring: Ring = stripRing(m.direction, rules.endExclusion, rules.reach, half);
+  const cutters: Ring[] = [];
+  for (let j = 0; j < members.length; j++) {
+    if (j === i) continue;
+    const o = members[j];
+    const du = m.direction[0] - o.direction[0];
+    const dv = m.direction[1] - o.direction[1];
+    const len2 = du * du + dv * dv;
+    if (RANK[o.role] === RANK[m.role]) {
+      if (len2 < SAME_DIRECTION || ring.length < 3) continue;
+      const len = Math.sqrt(len2);
+      // Half-plane on this member's side of the bisector, moved back by the end exclusion.
+      ring = clipHalfPlane(ring, du / len, dv / len, rules.endExclusion);
+    } else if (RANK[o.role] < RANK[m.role]) {
+      const grown = o.halfDepth + rules.endExclusion;
+      cutters.push(stripRing(o.direction, -rules.endExclusion, rules.reach, grown));
+    }
+  }
+  if (ring.length < 3) return [];
+  let region: Region = [ring];
+  for (const cut of cutters) region = subtractConvex(region, cut);
+  return region;
+};
 
 // Pieces thinner than this (mm²) are rounding slivers of a cut along a shared edge.
 const SLIVER_AREA = 1e-9;
@@ -77,20 +87,19 @@ const SLIVER_AREA = 1e-9;
  */
 export const subtractConvex = (pieces: Region, cut: Ring): Region => {
   const ccw = signedArea(cut) >= 0 ? cut : [...cut].reverse();
-  const edges = ccw.map((p, i) => {
-    const q = ccw[(i + 1) % ccw.length];
-    const a = p[1] - q[1];
-    const b = q[0] - p[0];
-    // Inside the cut: a·u + b·v ≥ c.
-    return { a, b, c: a * p[0] + b * p[1] };
-  });
   const out: Region = [];
   for (const piece of pieces) {
     let inside: Ring = piece;
-    for (const e of edges) {
-      const outside = clipHalfPlane(inside, -e.a, -e.b, -e.c);
+    for (let i = 0; i < ccw.length; i++) {
+      const p = ccw[i];
+      const q = ccw[(i + 1) % ccw.length];
+      // Inside the cut: a·u + b·v ≥ c.
+      const a = p[1] - q[1];
+      const b = q[0] - p[0];
+      const c = a * p[0] + b * p[1];
+      const outside = clipHalfPlane(inside, -a, -b, -c);
       if (outside.length > 2 && Math.abs(signedArea(outside)) > SLIVER_AREA) out.push(outside);
-      inside = clipHalfPlane(inside, e.a, e.b, e.c);
+      inside = clipHalfPlane(inside, a, b, c);
       if (inside.length < 3) break;
     }
   }

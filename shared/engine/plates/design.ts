@@ -120,11 +120,32 @@ const steelChecks = (
  * plate reaches further onto webs that leave the chord on one side (common practice). Heels and
  * splices stay centred, since their steel checks assume the joint line through the centre.
  */
-const plateOffsets = (kind: PlateJoint['kind'], local: LocalMember[], halfWidth: number) => {
-  if (kind === 'heel' || kind === 'splice') return [0];
-  const chordHalf = Math.max(0, ...local.filter((m) => m.role !== 'web').map((m) => m.halfDepth));
+const plateOffsets = (kind: PlateJoint['kind'], chordHalf: number, halfWidth: number) => {
+  if (kind === 'heel' || kind === 'splice') return CENTRED;
   const slide = halfWidth - chordHalf;
-  return chordHalf > 0 && slide > 0 ? [0, slide, -slide] : [0];
+  return chordHalf > 0 && slide > 0 ? [0, slide, -slide] : CENTRED;
+};
+const CENTRED = [0];
+
+/** Largest half depth of the chords at a joint, mm (0 when only webs meet). */
+const chordHalfDepth = (local: LocalMember[]) => {
+  let half = 0;
+  for (const m of local) if (m.role !== 'web' && m.halfDepth > half) half = m.halfDepth;
+  return half;
+};
+
+// Each catalog sorted once (catalogs are immutable values), with the reach its largest plate needs.
+const sortedCatalogs = new WeakMap<PlateCatalog, { plates: PlateSpec[]; reach: number }>();
+const sortedPlates = (catalog: PlateCatalog) => {
+  let entry = sortedCatalogs.get(catalog);
+  if (!entry) {
+    const plates = [...catalog.plates].sort(byAreaThenGauge);
+    const reach =
+      Math.max(...plates.map((p) => Math.hypot(p.width, p.length))) * (MM_PER_INCH / 2) + 1;
+    entry = { plates, reach };
+    sortedCatalogs.set(catalog, entry);
+  }
+  return entry;
 };
 
 /** Catalog order to try: smallest area first, then the lighter steel (higher gauge number). */
@@ -178,14 +199,11 @@ export const designJointPlate = (
       halfDepth: m.depth / 2,
     };
   });
-  const plates = [...catalog.plates].sort(byAreaThenGauge);
-  const reach =
-    Math.max(...plates.map((p) => Math.hypot(p.width, p.length))) * (MM_PER_INCH / 2) + 1;
-  const regions = memberContactRegions(local, {
-    endExclusion: options.endExclusion ?? END_EXCLUSION_MM,
-    edgeExclusion: options.edgeExclusion ?? EDGE_EXCLUSION_MM,
-    reach,
-  });
+  const { plates, reach } = sortedPlates(catalog);
+  const chordHalf = chordHalfDepth(local);
+  const endExclusion = options.endExclusion ?? END_EXCLUSION_MM;
+  const edgeExclusion = options.edgeExclusion ?? EDGE_EXCLUSION_MM;
+  const regions = memberContactRegions(local, { endExclusion, edgeExclusion, reach });
   // Most loaded members first: they fail soonest, so a too-small plate is dropped early.
   const order = joint.members
     .map((_, i) => i)
@@ -205,15 +223,21 @@ export const designJointPlate = (
       continue;
     }
     let placed: { offset: number; checks: MemberPlateCheck[] } | undefined;
-    for (const offset of plateOffsets(joint.kind, local, halfWidth)) {
+    for (const offset of plateOffsets(joint.kind, chordHalf, halfWidth)) {
       const checks: MemberPlateCheck[] = [];
       let fits = true;
       for (const i of order) {
         const m = joint.members[i];
         const lateral = lateralValueAtAngle(plate, m.loadToGrain ?? 0) / MM2_PER_IN2; // lbf/mm²
         const demand = Math.abs(m.force);
-        // Cheap bound first: even the whole plate area could not hold this member.
-        if (demand > PLATES_PER_JOINT * halfLength * halfWidth * 4 * lateral * cd * N_PER_LBF) {
+        // Cheap bound first: the member's band (its depth less the edge margins) cannot reach
+        // past the plate's far corner, nor hold more than the whole plate.
+        const reachInPlate = Math.hypot(halfLength, halfWidth + Math.abs(offset)) - endExclusion;
+        const bound = Math.min(
+          4 * halfLength * halfWidth,
+          2 * Math.max(0, local[i].halfDepth - edgeExclusion) * Math.max(0, reachInPlate),
+        );
+        if (demand > PLATES_PER_JOINT * bound * lateral * cd * N_PER_LBF) {
           failure = { member: m.id, ratio: Infinity };
           fits = false;
           break;

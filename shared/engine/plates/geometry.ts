@@ -37,18 +37,78 @@ export const clipHalfPlane = (ring: Ring, a: number, b: number, c: number): Ring
   return out;
 };
 
-/** Area of `ring` inside the rectangle |u| ≤ halfLength, |v − offset| ≤ halfWidth. */
+// Scratch for `areaInRectangle`: two ping-pong vertex buffers (u and v interleaved). Sized for
+// the small convex pieces of contact regions; a larger ring takes the allocating path.
+const SCRATCH_VERTICES = 64;
+const bufferA = new Float64Array(2 * SCRATCH_VERTICES);
+const bufferB = new Float64Array(2 * SCRATCH_VERTICES);
+
+/** Clips n vertices in `src` by a·u + b·v ≥ c into `dst`; returns the new count. */
+const clipInto = (
+  src: Float64Array,
+  n: number,
+  dst: Float64Array,
+  a: number,
+  b: number,
+  c: number,
+): number => {
+  let out = 0;
+  for (let i = 0; i < n; i++) {
+    const j = i + 1 === n ? 0 : i + 1;
+    const pu = src[2 * i];
+    const pv = src[2 * i + 1];
+    const qu = src[2 * j];
+    const qv = src[2 * j + 1];
+    const fp = a * pu + b * pv - c;
+    const fq = a * qu + b * qv - c;
+    if (fp >= 0) {
+      dst[2 * out] = pu;
+      dst[2 * out + 1] = pv;
+      out++;
+    }
+    if (fp >= 0 !== fq >= 0) {
+      const t = fp / (fp - fq);
+      dst[2 * out] = pu + t * (qu - pu);
+      dst[2 * out + 1] = pv + t * (qv - pv);
+      out++;
+    }
+  }
+  return out;
+};
+
+/**
+ * Area of `ring` inside the rectangle |u| ≤ halfLength, |v − offset| ≤ halfWidth (signed like
+ * the ring). Allocation-free for rings of up to 60 vertices: this is the innermost step of the
+ * plate search, run for every member, plate size and placement.
+ */
 export const areaInRectangle = (
   ring: Ring,
   halfLength: number,
   halfWidth: number,
   offset = 0,
 ): number => {
-  let r = clipHalfPlane(ring, 1, 0, -halfLength);
-  if (r.length > 2) r = clipHalfPlane(r, -1, 0, -halfLength);
-  if (r.length > 2) r = clipHalfPlane(r, 0, 1, offset - halfWidth);
-  if (r.length > 2) r = clipHalfPlane(r, 0, -1, -offset - halfWidth);
-  return r.length > 2 ? signedArea(r) : 0;
+  let n = ring.length;
+  if (n + 4 > SCRATCH_VERTICES) {
+    let r = clipHalfPlane(ring, 1, 0, -halfLength);
+    if (r.length > 2) r = clipHalfPlane(r, -1, 0, -halfLength);
+    if (r.length > 2) r = clipHalfPlane(r, 0, 1, offset - halfWidth);
+    if (r.length > 2) r = clipHalfPlane(r, 0, -1, -offset - halfWidth);
+    return r.length > 2 ? signedArea(r) : 0;
+  }
+  for (let i = 0; i < n; i++) {
+    bufferA[2 * i] = ring[i][0];
+    bufferA[2 * i + 1] = ring[i][1];
+  }
+  n = clipInto(bufferA, n, bufferB, 1, 0, -halfLength);
+  if (n > 2) n = clipInto(bufferB, n, bufferA, -1, 0, -halfLength);
+  if (n > 2) n = clipInto(bufferA, n, bufferB, 0, 1, offset - halfWidth);
+  if (n > 2) n = clipInto(bufferB, n, bufferA, 0, -1, -offset - halfWidth);
+  if (n < 3) return 0;
+  let twice = 0;
+  for (let i = 0, j = n - 1; i < n; j = i++) {
+    twice += bufferA[2 * j] * bufferA[2 * i + 1] - bufferA[2 * i] * bufferA[2 * j + 1];
+  }
+  return twice / 2;
 };
 
 /**
@@ -56,9 +116,15 @@ export const areaInRectangle = (
  * counter-clockwise ring.
  */
 export const stripRing = (d: Point, s0: number, s1: number, half: number): Ring => {
-  const n: Point = [-d[1], d[0]];
-  const at = (s: number, t: number): Point => [s * d[0] + t * n[0], s * d[1] + t * n[1]];
-  return [at(s0, -half), at(s1, -half), at(s1, half), at(s0, half)];
+  // n = d turned +90°: (−d.v, d.u). Written out: this runs for every member of every joint.
+  const nx = -d[1];
+  const ny = d[0];
+  return [
+    [s0 * d[0] - half * nx, s0 * d[1] - half * ny],
+    [s1 * d[0] - half * nx, s1 * d[1] - half * ny],
+    [s1 * d[0] + half * nx, s1 * d[1] + half * ny],
+    [s0 * d[0] + half * nx, s0 * d[1] + half * ny],
+  ];
 };
 
 /**
