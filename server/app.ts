@@ -17,6 +17,9 @@ import { usersRouter } from './routes/users/router';
 import { customersRouter } from './routes/customers/router';
 import { jobsRouter } from './routes/jobs/router';
 import { plantRouter } from './routes/plant/router';
+import { ordersRouter } from './routes/orders/router';
+import { reviewsRouter } from './routes/reviews/router';
+import { designsRouter } from './routes/designs/router';
 
 export interface AppOptions {
   sequelize: Sequelize;
@@ -88,6 +91,9 @@ export function createApp(opts: AppOptions) {
   app.use('/api/customers', customersRouter());
   app.use('/api/jobs', jobsRouter());
   app.use('/api/plant', plantRouter());
+  app.use('/api/orders', ordersRouter());
+  app.use('/api/reviews', reviewsRouter());
+  app.use('/api/designs', designsRouter());
   app.use('/api', apiNotFound);
 
   const clientDir = opts.clientDir ? resolve(opts.clientDir) : null;

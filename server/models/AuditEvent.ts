@@ -4,8 +4,11 @@ import {
   type CreationOptional,
   type InferAttributes,
   type InferCreationAttributes,
+  type NonAttribute,
   type Sequelize,
 } from 'sequelize';
+
+import type { User } from './User';
 
 /** Who did what to which record, written by every command inside its transaction. */
 export class AuditEvent extends Model<
@@ -20,6 +23,7 @@ export class AuditEvent extends Model<
   declare subjectId: number | null;
   declare data: Record<string, unknown>;
   declare createdAt: CreationOptional<Date>;
+  declare actor?: NonAttribute<User | null>;
 
   static initModel(sequelize: Sequelize) {
     AuditEvent.init(

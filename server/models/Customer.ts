@@ -8,6 +8,7 @@ import {
   type Sequelize,
 } from 'sequelize';
 import type { Plant } from './Plant';
+import type { Contact } from '../../shared/api/customers';
 
 /** A builder's company, customer of one plant. */
 export class Customer extends Model<InferAttributes<Customer>, InferCreationAttributes<Customer>> {
@@ -19,6 +20,7 @@ export class Customer extends Model<InferAttributes<Customer>, InferCreationAttr
   declare terms: 'account' | 'deposit';
   declare billingAddress: string | null;
   declare city: string | null;
+  declare contacts: CreationOptional<Contact[]>;
   declare createdAt: CreationOptional<Date>;
   declare updatedAt: CreationOptional<Date>;
 
@@ -32,6 +34,7 @@ export class Customer extends Model<InferAttributes<Customer>, InferCreationAttr
         terms: { type: DataTypes.STRING(10), allowNull: false, defaultValue: 'deposit' },
         billingAddress: { type: DataTypes.TEXT, allowNull: true },
         city: { type: DataTypes.STRING(120), allowNull: true },
+        contacts: { type: DataTypes.JSONB, allowNull: false, defaultValue: [] },
         createdAt: DataTypes.DATE,
         updatedAt: DataTypes.DATE,
       },

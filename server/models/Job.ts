@@ -10,6 +10,7 @@ import {
 } from 'sequelize';
 import type { Plant } from './Plant';
 import type { Customer } from './Customer';
+import type { DesignCriteria } from '../../shared/api/jobs';
 
 /** A building site of one builder. */
 export class Job extends Model<InferAttributes<Job>, InferCreationAttributes<Job>> {
@@ -19,6 +20,7 @@ export class Job extends Model<InferAttributes<Job>, InferCreationAttributes<Job
   declare name: string;
   declare address: string;
   declare planRevision: string | null;
+  declare criteria: CreationOptional<DesignCriteria>;
   declare createdAt: CreationOptional<Date>;
   declare updatedAt: CreationOptional<Date>;
   declare customer?: NonAttribute<Customer>;
@@ -30,6 +32,7 @@ export class Job extends Model<InferAttributes<Job>, InferCreationAttributes<Job
         name: { type: DataTypes.STRING(160), allowNull: false },
         address: { type: DataTypes.TEXT, allowNull: false },
         planRevision: { type: DataTypes.STRING(40), allowNull: true },
+        criteria: { type: DataTypes.JSONB, allowNull: false, defaultValue: {} },
         createdAt: DataTypes.DATE,
         updatedAt: DataTypes.DATE,
       },

@@ -2,12 +2,16 @@ import type { WhereOptions } from 'sequelize';
 import type { User } from '../models';
 import { all, hasRole, ownCompany } from './predicates';
 
-/** Builder companies: the sales desk and the plant manager work with them. */
+const ownRecord = (actor: User, c: { id: number; plantId: number }) =>
+  ownCompany(actor, { plantId: c.plantId, customerId: c.id });
+
+/** Builder companies: the sales desk and the plant manager work with them; a builder sees their own. */
 export const customerPolicy = {
   list: hasRole('admin', 'sales'),
-  show: all(hasRole('admin', 'sales', 'builder'), (actor, c: { id: number; plantId: number }) =>
-    ownCompany(actor, { plantId: c.plantId, customerId: c.id }),
-  ),
+  create: hasRole('admin', 'sales'),
+  show: all(hasRole('admin', 'sales', 'builder'), ownRecord),
+  update: all(hasRole('admin', 'sales'), ownRecord),
+  addJob: all(hasRole('admin', 'sales'), ownRecord),
   scope: (actor: User): WhereOptions =>
     actor.role === 'builder'
       ? { plantId: actor.plantId, id: actor.customerId! }

@@ -24,20 +24,25 @@ export const contactSchema = z.object({
 });
 export type Contact = z.infer<typeof contactSchema>;
 
-/** Body of `POST /api/customers` — a builder company. */
-export const createCustomerSchema = z.object({
+const customerFields = z.object({
   name: z.string().trim().min(1, 'Enter the company name').max(160),
   email: z.string().trim().toLowerCase().email('Enter a valid e-mail address'),
   phone: optionalText(40),
   terms: z.enum(['account', 'deposit'], { message: 'Pick credit account or deposit required' }),
   billingAddress: optionalText(400),
   city: optionalText(120),
-  contacts: z.array(contactSchema).max(20, 'At most 20 contacts').default([]),
+  contacts: z.array(contactSchema).max(20, 'At most 20 contacts'),
+});
+
+/** Body of `POST /api/customers` — a builder company. */
+export const createCustomerSchema = customerFields.extend({
+  contacts: customerFields.shape.contacts.default([]),
 });
 export type CreateCustomerInput = z.infer<typeof createCustomerSchema>;
 
 /** Body of `PATCH /api/customers/:id`: any of the create fields. */
-export const updateCustomerSchema = createCustomerSchema
+// No defaults here: a field left out of a PATCH stays as it is.
+export const updateCustomerSchema = customerFields
   .partial()
   .refine((v) => Object.keys(v).length > 0, { message: 'Nothing to change' });
 export type UpdateCustomerInput = z.infer<typeof updateCustomerSchema>;

@@ -25,17 +25,20 @@ export const designCriteriaSchema = z.object({
 });
 export type DesignCriteria = z.infer<typeof designCriteriaSchema>;
 
-/** Body of `POST /api/customers/:id/jobs`. */
-export const createJobSchema = z.object({
+const jobFields = z.object({
   name: z.string().trim().min(1, 'Enter a job name').max(160),
   address: z.string().trim().min(1, 'Enter the site address').max(400),
   planRevision: z.string().trim().max(40).nullable().optional(),
-  criteria: designCriteriaSchema.default({}),
+  criteria: designCriteriaSchema,
 });
+
+/** Body of `POST /api/customers/:id/jobs`. */
+export const createJobSchema = jobFields.extend({ criteria: designCriteriaSchema.default({}) });
 export type CreateJobInput = z.infer<typeof createJobSchema>;
 
 /** Body of `PATCH /api/jobs/:id`. */
-export const updateJobSchema = createJobSchema
+// No defaults here: a field left out of a PATCH stays as it is.
+export const updateJobSchema = jobFields
   .partial()
   .refine((v) => Object.keys(v).length > 0, { message: 'Nothing to change' });
 export type UpdateJobInput = z.infer<typeof updateJobSchema>;

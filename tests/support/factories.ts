@@ -1,7 +1,8 @@
 import bcrypt from 'bcryptjs';
 import { randomUUID } from 'node:crypto';
 import type { Role } from '../../shared/api/roles';
-import { Customer, Job, Plant, User } from '../../server/models';
+import { Customer, Job, Order, OrderLine, Plant, User } from '../../server/models';
+import { computeDesign } from '../../server/services/design';
 import { testSequelize } from './db';
 
 export const TEST_PASSWORD = 'correct horse battery';
@@ -63,5 +64,59 @@ export async function createJob(attrs: { customer?: Customer; plant?: Plant; nam
     name: attrs.name ?? `Job ${uid()}`,
     address: '1 Test Road',
     planRevision: null,
+  });
+}
+
+/** A light 24 ft 4/12 Fink at 20/10/0/10 psf, 24 in o.c. (common practice residential loads). */
+export const FINK_24 = {
+  units: 'imperial',
+  profile: 'fink',
+  span: 288,
+  pitch: 4,
+  heelHeight: 0,
+  overhang: 12,
+  spacing: 24,
+  loads: { tcll: 20, tcdl: 10, bcll: 0, bcdl: 10 },
+} as const;
+
+export async function createOrder(attrs: { job?: Job; customer?: Customer; plant?: Plant } = {}) {
+  const job = attrs.job ?? (await createJob({ customer: attrs.customer, plant: attrs.plant }));
+  return Order.create({
+    plantId: job.plantId,
+    customerId: job.customerId,
+    jobId: job.id,
+    number: `T-${uid()}`,
+    createdBy: null,
+  });
+}
+
+/** A stored line whose design the server computed (as the API would). */
+export async function createLine(
+  attrs: {
+    order?: Order;
+    mark?: string;
+    design?: object;
+    reviewState?: 'pending' | 'approved' | 'returned';
+  } = {},
+) {
+  const order = attrs.order ?? (await createOrder());
+  const d = computeDesign(attrs.design ?? FINK_24, { plies: 1 });
+  const position =
+    ((await OrderLine.max('position', { where: { orderId: order.id } })) as number | null) ?? 0;
+  return OrderLine.create({
+    orderId: order.id,
+    position: position + 1,
+    mark: attrs.mark ?? `T${position + 1}`,
+    quantity: 4,
+    plies: 1,
+    profile: d.profile,
+    designInput: d.input as unknown as Record<string, unknown>,
+    designResult: d.result as unknown as Record<string, unknown>,
+    engineVersion: d.engineVersion,
+    designOk: d.ok,
+    maxCsi: d.maxCsi,
+    warningCount: d.warningCount,
+    description: d.description,
+    reviewState: attrs.reviewState ?? 'pending',
   });
 }

@@ -1,1 +1,11 @@
-export { listQuerySchema } from '../../../shared/api/list';
+import { z } from 'zod';
+import { listQuerySchema } from '../../../shared/api/list';
+
+export { createCustomerSchema, updateCustomerSchema } from '../../../shared/api/customers';
+export { createJobSchema } from '../../../shared/api/jobs';
+
+/** Builders table: paging, search, sort, and a terms filter. */
+export const customerListQuerySchema = listQuerySchema.extend({
+  terms: z.enum(['account', 'deposit']).optional(),
+});
+export type CustomerListQuery = z.infer<typeof customerListQuerySchema>;

@@ -1,0 +1,271 @@
+import { Op, type Transaction } from 'sequelize';
+import type { CreateLineInput, ReviewInput, UpdateLineInput } from '../../shared/api/orders';
+import { Order, OrderLine, Plant, type Job, type User } from '../models';
+import { AppError, badRequest, conflict } from '../errors';
+import { computeDesign, type ComputedDesign } from '../services/design';
+import { audit } from './audit';
+
+/** Every change to an order lands in its history, and marks the order as touched. */
+async function orderEvent(
+  t: Transaction,
+  actor: User,
+  order: Order,
+  action: string,
+  data: Record<string, unknown>,
+) {
+  await Order.sequelize!.query('UPDATE orders SET updated_at = now() WHERE id = :id', {
+    replacements: { id: order.id },
+    transaction: t,
+  });
+  await audit(t, {
+    plantId: order.plantId,
+    actorId: actor.id,
+    action,
+    subjectType: 'order',
+    subjectId: order.id,
+    data,
+  });
+}
+
+/** Lock the order row so concurrent line writes keep positions and numbers consistent. */
+const lockOrder = (order: Order, t: Transaction) =>
+  Order.findByPk(order.id, { transaction: t, lock: t.LOCK.UPDATE }).then((o) => {
+    if (!o) throw conflict('The order no longer exists.');
+    if (o.status !== 'draft')
+      throw conflict('Only a draft order’s lines can change; start a new quote revision.');
+    return o;
+  });
+
+const designColumns = (d: ComputedDesign) => ({
+  profile: d.profile,
+  designInput: d.input as unknown as Record<string, unknown>,
+  designResult: d.result as unknown as Record<string, unknown>,
+  engineVersion: d.engineVersion,
+  designOk: d.ok,
+  maxCsi: d.maxCsi,
+  warningCount: d.warningCount,
+  description: d.description,
+});
+
+/** Open a draft order for a job, numbered per plant ("2026-0001"). */
+export async function createOrder(actor: User, job: Job) {
+  return Order.sequelize!.transaction(async (t) => {
+    const plant = await Plant.findByPk(job.plantId, { transaction: t, lock: t.LOCK.UPDATE });
+    const n = plant!.nextOrderNumber;
+    await plant!.update({ nextOrderNumber: n + 1 }, { transaction: t });
+    const order = await Order.create(
+      {
+        plantId: job.plantId,
+        customerId: job.customerId,
+        jobId: job.id,
+        number: `${new Date().getFullYear()}-${String(n).padStart(4, '0')}`,
+        createdBy: actor.id,
+      },
+      { transaction: t },
+    );
+    await orderEvent(t, actor, order, 'order.created', { number: order.number, jobId: job.id });
+    return order;
+  });
+}
+
+/** Add a truss line; the server computes and stores the design snapshot. */
+export async function addLine(actor: User, order: Order, input: CreateLineInput) {
+  const design = computeDesign(input.design, { plies: input.plies });
+  return Order.sequelize!.transaction(async (t) => {
+    await lockOrder(order, t);
+    const max = (await OrderLine.max('position', {
+      where: { orderId: order.id },
+      transaction: t,
+    })) as number | null;
+    const line = await OrderLine.create(
+      {
+        orderId: order.id,
+        position: (max ?? 0) + 1,
+        mark: input.mark,
+        quantity: input.quantity,
+        plies: input.plies,
+        ...designColumns(design),
+      },
+      { transaction: t },
+    );
+    await orderEvent(t, actor, order, 'line.added', {
+      lineId: line.id,
+      mark: line.mark,
+      quantity: line.quantity,
+      description: line.description,
+      ok: line.designOk,
+    });
+    return line;
+  });
+}
+
+/** Change a line. A new design resets its review; an approved design is locked. */
+export async function updateLine(
+  actor: User,
+  order: Order,
+  line: OrderLine,
+  input: UpdateLineInput,
+) {
+  const redesign =
+    input.design !== undefined || (input.plies !== undefined && input.plies !== line.plies);
+  if (redesign && line.reviewState === 'approved') {
+    throw conflictLocked();
+  }
+  const plies = input.plies ?? line.plies;
+  const design = redesign ? computeDesign(input.design ?? line.designInput, { plies }) : null;
+  return Order.sequelize!.transaction(async (t) => {
+    await lockOrder(order, t);
+    const changes: Partial<OrderLine> = {};
+    if (input.mark !== undefined) changes.mark = input.mark;
+    if (input.quantity !== undefined) changes.quantity = input.quantity;
+    if (design) {
+      Object.assign(changes, designColumns(design), {
+        plies,
+        reviewState: 'pending',
+        reviewComment: null,
+        reviewedBy: null,
+        reviewedAt: null,
+      });
+    }
+    const before = {
+      mark: line.mark,
+      quantity: line.quantity,
+      plies: line.plies,
+      description: line.description,
+    };
+    await line.update(changes, { transaction: t });
+    await orderEvent(t, actor, order, 'line.updated', {
+      lineId: line.id,
+      mark: line.mark,
+      before,
+      after: {
+        mark: line.mark,
+        quantity: line.quantity,
+        plies: line.plies,
+        description: line.description,
+      },
+      redesigned: !!design,
+    });
+    return line;
+  });
+}
+
+const conflictLocked = () =>
+  new AppError(
+    409,
+    'locked',
+    'This design is approved and locked. Copy the line to make a new design; it will need a new review.',
+  );
+
+/** Remove a line from a draft order. */
+export async function deleteLine(actor: User, order: Order, line: OrderLine) {
+  return Order.sequelize!.transaction(async (t) => {
+    await lockOrder(order, t);
+    await line.destroy({ transaction: t });
+    await orderEvent(t, actor, order, 'line.deleted', {
+      lineId: line.id,
+      mark: line.mark,
+      description: line.description,
+    });
+  });
+}
+
+/** Next free mark "T<n>" of the order. */
+async function nextMark(orderId: number, t: Transaction) {
+  const marks = (
+    await OrderLine.findAll({ where: { orderId }, attributes: ['mark'], transaction: t })
+  ).map((l) => l.mark);
+  const n = Math.max(0, ...marks.map((m) => Number(/^T(\d+)$/i.exec(m)?.[1] ?? 0)));
+  return `T${n + 1}`;
+}
+
+/** Copy a line (design recomputed by the current engine) under the next free mark; it needs its own review. */
+export async function copyLine(actor: User, order: Order, line: OrderLine) {
+  const design = computeDesign(line.designInput, { plies: line.plies });
+  return Order.sequelize!.transaction(async (t) => {
+    await lockOrder(order, t);
+    const max = (await OrderLine.max('position', {
+      where: { orderId: order.id },
+      transaction: t,
+    })) as number | null;
+    const copy = await OrderLine.create(
+      {
+        orderId: order.id,
+        position: (max ?? 0) + 1,
+        mark: await nextMark(order.id, t),
+        quantity: line.quantity,
+        plies: line.plies,
+        ...designColumns(design),
+      },
+      { transaction: t },
+    );
+    await orderEvent(t, actor, order, 'line.copied', {
+      lineId: copy.id,
+      from: line.mark,
+      mark: copy.mark,
+    });
+    return copy;
+  });
+}
+
+/** Put the order's lines in the given order (every line id exactly once). */
+export async function reorderLines(actor: User, order: Order, lineIds: number[]) {
+  return Order.sequelize!.transaction(async (t) => {
+    await lockOrder(order, t);
+    const lines = await OrderLine.findAll({ where: { orderId: order.id }, transaction: t });
+    const ids = new Set(lines.map((l) => l.id));
+    if (
+      lineIds.length !== ids.size ||
+      new Set(lineIds).size !== ids.size ||
+      !lineIds.every((id) => ids.has(id))
+    ) {
+      throw badRequest('Send every line of this order exactly once.', {
+        lineIds: 'Must list each line of the order once',
+      });
+    }
+    for (const [i, id] of lineIds.entries()) {
+      await OrderLine.update(
+        { position: i + 1 },
+        { where: { id, orderId: order.id, position: { [Op.ne]: i + 1 } }, transaction: t },
+      );
+    }
+    const byId = new Map(lines.map((l) => [l.id, l.mark]));
+    await orderEvent(t, actor, order, 'lines.reordered', {
+      marks: lineIds.map((id) => byId.get(id)),
+    });
+  });
+}
+
+/** The design reviewer approves (locks) or sends back a line's design. */
+export async function reviewLine(actor: User, order: Order, line: OrderLine, input: ReviewInput) {
+  if (input.decision === 'approve' && !line.designOk) {
+    throw conflict(
+      'A design that fails its checks cannot be approved; send it back with a comment.',
+    );
+  }
+  if (line.reviewState === 'approved') throw conflictLocked();
+  return Order.sequelize!.transaction(async (t) => {
+    await line.update(
+      {
+        reviewState: input.decision === 'approve' ? 'approved' : 'returned',
+        reviewComment: input.comment || null,
+        reviewedBy: actor.id,
+        reviewedAt: new Date(),
+      },
+      { transaction: t },
+    );
+    await orderEvent(
+      t,
+      actor,
+      order,
+      input.decision === 'approve' ? 'line.approved' : 'line.returned',
+      {
+        lineId: line.id,
+        mark: line.mark,
+        comment: input.comment || undefined,
+        engineVersion: line.engineVersion,
+      },
+    );
+    return line;
+  });
+}

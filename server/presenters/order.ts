@@ -1,0 +1,118 @@
+import type {
+  HistoryEntry,
+  LineDetail,
+  LineSummary,
+  OrderDetail,
+  OrderSummary,
+  ReviewQueueItem,
+} from '../../shared/api/orders';
+import type { AuditEvent, Order, OrderLine, User } from '../models';
+
+type Counted = Order & { get(k: 'lineCount' | 'trussCount'): unknown };
+
+export function presentOrderSummary(o: Counted): OrderSummary {
+  return {
+    id: o.id,
+    number: o.number,
+    status: o.status,
+    job: { id: o.job!.id, name: o.job!.name },
+    customer: { id: o.customer!.id, name: o.customer!.name },
+    lineCount: Number(o.get('lineCount') ?? 0),
+    trussCount: Number(o.get('trussCount') ?? 0),
+    createdAt: o.createdAt.toISOString(),
+    updatedAt: o.updatedAt.toISOString(),
+  };
+}
+
+export function presentLineSummary(l: OrderLine): LineSummary {
+  return {
+    id: l.id,
+    position: l.position,
+    mark: l.mark,
+    quantity: l.quantity,
+    plies: l.plies,
+    profile: l.profile,
+    description: l.description,
+    designOk: l.designOk,
+    maxCsi: l.maxCsi,
+    warningCount: l.warningCount,
+    reviewState: l.reviewState,
+    reviewComment: l.reviewComment,
+    reviewedBy: l.reviewer?.name ?? null,
+    reviewedAt: l.reviewedAt?.toISOString() ?? null,
+    engineVersion: l.engineVersion,
+    updatedAt: l.updatedAt.toISOString(),
+  };
+}
+
+export function presentLine(l: OrderLine): LineDetail {
+  return {
+    ...presentLineSummary(l),
+    orderId: l.orderId,
+    design: l.designInput,
+    result: l.designResult,
+  };
+}
+
+const d = (e: AuditEvent, k: string) => e.data[k] as string | number | undefined;
+
+/** One sentence per change, in the desk's words. */
+export function summarizeEvent(e: AuditEvent): string {
+  switch (e.action) {
+    case 'order.created':
+      return `Opened order ${d(e, 'number')}`;
+    case 'line.added':
+      return `Added ${d(e, 'mark')} × ${d(e, 'quantity')}: ${d(e, 'description')}${e.data.ok === false ? ' (design fails its checks)' : ''}`;
+    case 'line.updated': {
+      const before = (e.data.before ?? {}) as Record<string, unknown>;
+      const after = (e.data.after ?? {}) as Record<string, unknown>;
+      const parts = ['mark', 'quantity', 'plies', 'description']
+        .filter((k) => before[k] !== after[k])
+        .map((k) => `${k} ${String(before[k])} → ${String(after[k])}`);
+      if (e.data.redesigned && !parts.some((p) => p.startsWith('description')))
+        parts.push('design recomputed');
+      return `Changed ${d(e, 'mark')}${parts.length ? ': ' + parts.join(', ') : ''}`;
+    }
+    case 'line.deleted':
+      return `Deleted ${d(e, 'mark')} (${d(e, 'description')})`;
+    case 'line.copied':
+      return `Copied ${d(e, 'from')} as ${d(e, 'mark')}`;
+    case 'lines.reordered':
+      return `Reordered lines: ${((e.data.marks as string[]) ?? []).join(', ')}`;
+    case 'line.approved':
+      return `Approved the design of ${d(e, 'mark')}${e.data.comment ? `: ${d(e, 'comment')}` : ''}`;
+    case 'line.returned':
+      return `Sent ${d(e, 'mark')} back: ${d(e, 'comment')}`;
+    default:
+      return e.action;
+  }
+}
+
+export function presentHistory(events: (AuditEvent & { actor?: User | null })[]): HistoryEntry[] {
+  return events.map((e) => ({
+    id: Number(e.id),
+    at: e.createdAt.toISOString(),
+    actor: e.actor?.name ?? null,
+    action: e.action,
+    summary: summarizeEvent(e),
+  }));
+}
+
+export function presentOrder(
+  o: Counted,
+  lines: OrderLine[],
+  history: HistoryEntry[],
+  units: 'imperial' | 'metric',
+): OrderDetail {
+  return { ...presentOrderSummary(o), lines: lines.map(presentLineSummary), history, units };
+}
+
+export function presentQueueItem(l: OrderLine): ReviewQueueItem {
+  const o = l.order!;
+  return {
+    ...presentLineSummary(l),
+    order: { id: o.id, number: o.number },
+    job: { id: o.job!.id, name: o.job!.name },
+    customer: { id: o.customer!.id, name: o.customer!.name },
+  };
+}

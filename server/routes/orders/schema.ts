@@ -1,0 +1,9 @@
+export {
+  createLineSchema,
+  createOrderSchema,
+  orderListQuerySchema,
+  reorderLinesSchema,
+  reviewSchema,
+  updateLineSchema,
+  type OrderListQuery,
+} from '../../../shared/api/orders';
