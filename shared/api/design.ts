@@ -1,4 +1,5 @@
 import { z } from 'zod';
+import { LUMBER_GRADES, LUMBER_SIZES } from '../engine/lumber';
 import type { ProfileKind, ProfileParams } from '../engine/profiles/types';
 import { inch, inchToMm, KPA_PER_PSF, type MPa, type Mm, mm } from '../engine/units';
 
@@ -25,20 +26,8 @@ export const PROFILE_KINDS = [
   'flat',
 ] as const satisfies readonly ProfileKind[];
 
-/** Dressed lumber sizes a design may name (NDS 2018 Supplement Table 1A sizes). */
-export const LUMBER_SIZES = ['2x3', '2x4', '2x6', '2x8', '2x10', '2x12'] as const;
-/** Species/grade ids of the lumber table. */
-export const LUMBER_GRADES = [
-  'SPF-1/2',
-  'DFL-1',
-  'DFL-2',
-  'HF-1',
-  'HF-2',
-  'SP-1',
-  'SP-2',
-  'MSR-1650-1.5E',
-  'MSR-2100-1.8E',
-] as const;
+// Sizes and grades come from the lumber table itself, so the contract cannot drift from it.
+export { LUMBER_GRADES, LUMBER_SIZES };
 
 const LUMBER_IDS = new Set(LUMBER_SIZES.flatMap((s) => LUMBER_GRADES.map((g) => `${s} ${g}`)));
 

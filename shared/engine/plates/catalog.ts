@@ -32,6 +32,10 @@ const DEMO_SIZES: [number, number, number[]][] = [
   [7, 10, [20, 18]],
   [8, 10, [20, 18]],
   [8, 12, [20, 18]],
+  // Heel plates of long spans run larger (common practice).
+  [10, 12, [18]],
+  [10, 16, [18]],
+  [12, 16, [18]],
 ];
 
 /** The demo catalog (`demo: true`): common sizes, INVENTED design values. */
