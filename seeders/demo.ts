@@ -5,6 +5,7 @@
 import bcrypt from 'bcryptjs';
 import { Customer, Job, Plant, User } from '../server/models';
 import type { Role } from '../shared/api/roles';
+import { seedOrders } from './orders';
 
 export const DEMO_PASSWORD = 'spanwise-demo';
 
@@ -167,5 +168,6 @@ export async function seedDemo() {
       },
     });
   }
+  await seedOrders(plant);
   return plant;
 }
