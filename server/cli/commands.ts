@@ -1,0 +1,46 @@
+import { ZodError } from 'zod';
+import { designInputSchema, toEngineInput } from '../../shared/api/design';
+import { analyzeTruss, designTruss, isEngineError, presentDesign } from '../../shared/engine';
+import { trussModelSchema } from './modelSchema';
+
+/** The CLI's error body: an engine error code (or `invalid`), a message and optional details. */
+export interface CliError {
+  error: { code: string; message: string; details?: Record<string, unknown> };
+}
+
+/** `analyze`: a TrussModel (any consistent units) → member forces, reactions, residual. */
+export function analyzeCommand(json: unknown) {
+  const result = analyzeTruss(trussModelSchema.parse(json));
+  return {
+    members: result.members.map((m) => ({ id: m.id, force: m.force })),
+    reactions: result.reactions.map((r) => ({ joint: r.joint, rx: r.rx, ry: r.ry })),
+    classification: result.classification,
+    ...(result.displacements && { displacements: result.displacements }),
+    residual: result.residual,
+  };
+}
+
+/** `design`: a design request (the API's preview body) → the design in the request's units. */
+export function designCommand(json: unknown) {
+  const input = designInputSchema.parse(json);
+  return presentDesign(designTruss(toEngineInput(input)), input.units);
+}
+
+/**
+ * Any failure as the CLI's error body: engine errors keep their code and details, zod errors
+ * become `invalid` with one line per field. Anything else is a fault of the program, not of the
+ * input: code `internal`.
+ */
+export function toCliError(e: unknown): CliError {
+  if (isEngineError(e)) {
+    return {
+      error: { code: e.code, message: e.message, ...(e.details && { details: e.details }) },
+    };
+  }
+  if (e instanceof ZodError) {
+    const issues = e.issues.map((i) => ({ path: i.path.join('.'), message: i.message }));
+    const lines = issues.map((i) => (i.path ? `${i.path}: ${i.message}` : i.message));
+    return { error: { code: 'invalid', message: lines.join('; '), details: { issues } } };
+  }
+  return { error: { code: 'internal', message: e instanceof Error ? e.message : String(e) } };
+}
