@@ -180,6 +180,7 @@ function designBearings(
     });
     return {
       joint: r.joint,
+      lumber: sized.lumberOf[k],
       width: input.bearingWidth,
       reaction: r.maxDown,
       stress: result.stress,
@@ -263,7 +264,7 @@ export function designTruss(input: EngineDesignInput, options: DesignOptions = {
   const bearing = designBearings(profile, reactions, sized, input);
   for (const b of bearing.filter((x) => !x.pass)) {
     warnings.push(
-      `Bearing at ${b.joint}: ratio ${b.ratio.toFixed(2)} on a ${lumberLabelSafe(sized.lumberOf[0])} ` +
+      `Bearing at ${b.joint}: ratio ${b.ratio.toFixed(2)} on a ${lumberLabelSafe(b.lumber)} ` +
         'bottom chord; use a wider bearing or a bearing block.',
     );
   }

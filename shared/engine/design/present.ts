@@ -93,6 +93,7 @@ export interface PresentedDesign {
   }[];
   bearing: {
     joint: string;
+    lumber: string;
     width: PresentedLength;
     reaction: number;
     stress: number;
@@ -213,6 +214,7 @@ export function presentDesign(design: TrussDesign, units: PresentUnits): Present
     })),
     bearing: design.bearing.map((b) => ({
       joint: b.joint,
+      lumber: b.lumber,
       width: length(b.width),
       reaction: force(b.reaction),
       stress: stress(b.stress),

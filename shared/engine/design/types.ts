@@ -130,6 +130,8 @@ export interface DesignPlate {
 /** Bearing check at one support: reaction on the bottom chord's narrow face. */
 export interface DesignBearing {
   joint: string;
+  /** Bottom-chord lumber id bearing on the support. */
+  lumber: string;
   /** Bearing length along the chord, mm. */
   width: number;
   /** Envelope down reaction, N. */

@@ -1,0 +1,196 @@
+import { describe, expect, it } from 'vitest';
+import { isEngineError } from '../../../../shared/engine/errors';
+import { DESIGN_CAUTIONS, designTruss } from '../../../../shared/engine/design';
+import { KPA_PER_PSF, MM_PER_INCH } from '../../../../shared/engine/units';
+import { ENGINE_VERSION } from '../../../../shared/engine/version';
+import { engineInput, lightFink, TYPICAL_LOADS } from './support/inputs';
+
+describe('a light truss', () => {
+  // Common practice: a 24 ft 4/12 Fink at 20/10/0/10 psf, 24 in o.c. is built of 2x4 chords.
+  const d = designTruss(engineInput(lightFink()));
+
+  it('passes with 2x4 chords and 2x4 webs', () => {
+    expect(d.ok).toBe(true);
+    expect(d.warnings).toEqual([]);
+    for (const p of d.pieces) {
+      expect(p.lumber.startsWith('2x4 ')).toBe(true);
+      expect(p.failing).toBe(false);
+    }
+    for (const m of d.members) expect(m.csi).toBeLessThanOrEqual(1);
+  });
+
+  it('gives both top chords one lumber and every member the lumber of its piece', () => {
+    const top = new Set(d.pieces.filter((p) => p.role === 'topChord').map((p) => p.lumber));
+    expect(top.size).toBe(1);
+    const byMark = new Map(d.pieces.map((p) => [p.mark, p]));
+    for (const m of d.members) expect(m.lumber).toBe(byMark.get(m.piece)!.lumber);
+  });
+
+  it('analyses the 4 in standard heel as the pointed heel and says so', () => {
+    expect(d.heelHeight.requested).toBeWithin(4 * MM_PER_INCH, { rel: 1e-12 });
+    expect(d.heelHeight.analysed).toBe(0);
+    expect(d.notes.some((n) => n.startsWith('Standard heel'))).toBe(true);
+  });
+
+  it('reports force envelopes as positive magnitudes and the governing combination', () => {
+    for (const m of d.members) {
+      expect(m.maxTension).toBe(Math.max(0, ...m.forces));
+      expect(m.maxCompression).toBe(Math.max(0, ...m.forces.map((f) => -f)));
+      expect(d.combinations.map((c) => c.name)).toContain(m.governingCombination);
+    }
+    // Top chords of a gable truss under gravity are in compression (common practice).
+    for (const m of d.members.filter((x) => x.role === 'topChord')) {
+      expect(m.maxCompression).toBeGreaterThan(0);
+    }
+  });
+
+  it('plates every joint and bears on both supports', () => {
+    expect(d.plates).toHaveLength(d.joints.length);
+    expect(d.plates.every((p) => p.ok && p.design!.count === 2)).toBe(true);
+    expect(d.plates.filter((p) => p.kind === 'heel').map((p) => p.joint)).toEqual(
+      d.reactions.map((r) => r.joint),
+    );
+    expect(d.bearing.map((b) => b.pass)).toEqual([true, true]);
+  });
+
+  it('carries every caution of DESIGN.md §4.6 and the engine version', () => {
+    expect(d.cautions).toEqual([...DESIGN_CAUTIONS]);
+    const text = d.cautions.join(' ');
+    for (const phrase of [
+      /preliminary until the design is reviewed/,
+      /sealed by a registered design professional/,
+      /confirmed by the building designer/,
+      /temporary and permanent bracing/,
+      /bracing guide/,
+      /cut or altered in the field without a written repair/,
+      /Local codes govern/,
+    ]) {
+      expect(text).toMatch(phrase);
+    }
+    expect(d.engineVersion).toBe(ENGINE_VERSION);
+  });
+});
+
+describe('a long truss under heavy snow', () => {
+  // 40 ft 6/12 Fink, pg = 70 psf: the W's long compression webs (about 6 ft) buckle out of
+  // plane over their full length (NDS 2018 3.7.1, le/b near 50), and the chords must be
+  // deeper than 2x4 (common practice for such a truss).
+  const d = designTruss(
+    engineInput({
+      units: 'imperial',
+      profile: 'fink',
+      span: 40 * 12,
+      pitch: 6,
+      heelHeight: 5,
+      overhang: 18,
+      spacing: 24,
+      loads: { ...TYPICAL_LOADS, snow: { pg: 70 } },
+    }),
+  );
+
+  it('upsizes the chords and braces the long webs', () => {
+    const chords = d.pieces.filter((p) => p.role !== 'web');
+    expect(chords.every((p) => !p.lumber.startsWith('2x4 '))).toBe(true);
+    const braced = d.members.filter((m) => m.braced);
+    expect(braced.length).toBeGreaterThan(0);
+    for (const m of braced) {
+      expect(m.role).toBe('web');
+      expect(m.maxCompression).toBeGreaterThan(0);
+      expect(m.length).toBeGreaterThan(60 * MM_PER_INCH);
+      expect(m.bracing).toMatch(/mid-length/);
+    }
+    expect(d.combinations.map((c) => c.name)).toContain('D + S');
+  });
+
+  it('prefers a 2x4 web with a brace over a deeper web', () => {
+    for (const m of d.members.filter((x) => x.braced)) expect(m.lumber).toBe('2x4 SPF-1/2');
+  });
+});
+
+describe('a fixed lumber that cannot pass', () => {
+  const d = designTruss(
+    engineInput({
+      ...lightFink({ span: 32 * 12 }),
+      loads: { ...TYPICAL_LOADS, snow: { pg: 60 } },
+      lumber: { topChord: '2x3 SPF-1/2' },
+    }),
+  );
+
+  it('returns ok = false with a readable warning instead of throwing', () => {
+    expect(d.ok).toBe(false);
+    const top = d.pieces.filter((p) => p.role === 'topChord');
+    expect(top.every((p) => p.failing && p.lumber === '2x3 SPF-1/2')).toBe(true);
+    expect(d.warnings.join('\n')).toMatch(
+      /^Top chord: the required 2x3 SPF No\.1\/No\.2 does not pass at CSI \d+\.\d\d \([a-z+]+, D \+ [^)]+\)\.$/m,
+    );
+  });
+
+  it('keeps the strongest candidate when a list has none that passes', () => {
+    const list = designTruss(
+      engineInput({
+        ...lightFink({ span: 32 * 12 }),
+        loads: { ...TYPICAL_LOADS, snow: { pg: 60 } },
+        lumber: { topChord: ['2x3 SPF-1/2', '2x3 DFL-2'] },
+      }),
+    );
+    expect(list.warnings.join('\n')).toMatch(
+      /Top chord: no allowed lumber passes; best is 2x3 DF-L No\.2 at CSI/,
+    );
+    expect(list.pieces.find((p) => p.role === 'topChord')!.lumber).toBe('2x3 DFL-2');
+  });
+});
+
+describe('units', () => {
+  it('an imperial and a metric request of one truss give the same design', () => {
+    const imperial = designTruss(
+      engineInput(lightFink({ loads: { ...TYPICAL_LOADS, snow: { pg: 25 } } })),
+    );
+    // The same truss in exact metric values: 1 in = 25.4 mm, 1 psf = KPA_PER_PSF kPa.
+    const kpa = (v: number) => v * KPA_PER_PSF;
+    const metric = designTruss(
+      engineInput({
+        units: 'metric',
+        profile: 'fink',
+        span: 288 * 25.4,
+        pitch: 4,
+        heelHeight: 4 * 25.4,
+        overhang: 12 * 25.4,
+        spacing: 24 * 25.4,
+        bearingWidth: 3.5 * 25.4,
+        loads: { tcll: kpa(20), tcdl: kpa(10), bcll: 0, bcdl: kpa(10), snow: { pg: kpa(25) } },
+      }),
+    );
+    expect(metric.pieces.map((p) => p.lumber)).toEqual(imperial.pieces.map((p) => p.lumber));
+    expect(metric.combinations).toEqual(imperial.combinations);
+    metric.members.forEach((m, k) => {
+      m.forces.forEach((f, i) =>
+        expect(f).toBeWithin(imperial.members[k].forces[i], { rel: 1e-9, abs: 1e-6 }),
+      );
+      expect(m.csi).toBeWithin(imperial.members[k].csi, { rel: 1e-9 });
+    });
+    expect(metric.deflection.total.max).toBeWithin(imperial.deflection.total.max, { rel: 1e-9 });
+    expect(metric.plates.map((p) => p.design?.plate.id)).toEqual(
+      imperial.plates.map((p) => p.design?.plate.id),
+    );
+  });
+});
+
+describe('raised heels', () => {
+  it('a heel over 8 in gets the heel post and heel diagonal', () => {
+    const d = designTruss(engineInput(lightFink({ heelHeight: 12 })));
+    expect(d.heelHeight.analysed).toBeWithin(12 * MM_PER_INCH, { rel: 1e-12 });
+    // Fink with raised heels: 4 W webs + 2 posts + 2 heel diagonals.
+    expect(d.members.filter((m) => m.role === 'web')).toHaveLength(8);
+    expect(d.notes.some((n) => n.startsWith('Standard heel'))).toBe(false);
+  });
+
+  it('an unbuildable request throws the generator’s EngineError', () => {
+    let error: unknown;
+    try {
+      designTruss(engineInput(lightFink({ span: 60 * 12, maxStockLength: 96 })));
+    } catch (e) {
+      error = e;
+    }
+    expect(isEngineError(error) && error.code).toBe('geometry');
+  });
+});

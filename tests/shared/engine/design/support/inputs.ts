@@ -1,0 +1,26 @@
+import {
+  designInputSchema,
+  toEngineInput,
+  type DesignInputDraft,
+  type EngineDesignInput,
+} from '../../../../../shared/api/design';
+
+/** The checked engine input of a draft request (defaults applied, SI). */
+export const engineInput = (draft: DesignInputDraft): EngineDesignInput =>
+  toEngineInput(designInputSchema.parse(draft));
+
+/** Typical residential loads "20/10/0/10" psf (DESIGN.md §1, common practice). */
+export const TYPICAL_LOADS = { tcll: 20, tcdl: 10, bcll: 0, bcdl: 10 };
+
+/** A 24 ft 4/12 Fink at 24 in o.c., standard 4 in heel, 12 in overhangs (common practice). */
+export const lightFink = (extra: Partial<DesignInputDraft> = {}): DesignInputDraft => ({
+  units: 'imperial',
+  profile: 'fink',
+  span: 24 * 12,
+  pitch: 4,
+  heelHeight: 4,
+  overhang: 12,
+  spacing: 24,
+  loads: TYPICAL_LOADS,
+  ...extra,
+});
