@@ -37,3 +37,14 @@ export function formatPitch(risePer12: number): string {
   const r = Math.round(risePer12 * 100) / 100;
   return `${r}/12`;
 }
+
+/** A force already in presented units (lbf or kN), as a magnitude with its unit. */
+export function formatPresentedForce(value: number, unit: 'lbf' | 'kN'): string {
+  const v = Math.abs(value);
+  return unit === 'lbf' ? `${Math.round(v).toLocaleString('en-US')} lbf` : `${v.toFixed(2)} kN`;
+}
+
+/** A presented deflection (in or mm) with its unit: `0.412 in` or `10.5 mm`. */
+export function formatPresentedDeflection(value: number, unit: 'in' | 'mm'): string {
+  return unit === 'in' ? `${value.toFixed(3)} in` : `${value.toFixed(1)} mm`;
+}

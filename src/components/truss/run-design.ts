@@ -2,7 +2,7 @@ import { designInputSchema, toEngineInput, type DesignInput } from '../../../sha
 import { designTruss, presentDesign, type PresentedDesign } from '../../../shared/engine/design';
 import { generateProfile } from '../../../shared/engine/profiles';
 import type { ProfileParams } from '../../../shared/engine/profiles/types';
-import { drawingFromDesign } from './from-design';
+import { drawingFromDesign, presentedToMm } from './from-design';
 import type { DrawingModel, DrawingOverhang } from './model';
 
 /** A design run in the browser: the presented result and its drawing. */
@@ -52,10 +52,7 @@ export function drawingOfStoredLine(
   const parsed = designInputSchema.safeParse(designInput);
   if (!parsed.success) return drawingFromDesign(result, { overhangs: [] });
   const engine = toEngineInput(parsed.data);
-  const analysed =
-    result.units.length === 'in'
-      ? result.heelHeight.analysed.value * 25.4
-      : result.heelHeight.analysed.value;
+  const analysed = presentedToMm(result, result.heelHeight.analysed.value);
   return drawingFromDesign(result, {
     overhangs: overhangsOf(engine.profile, analysed),
     pitch: parsed.data.profile === 'flat' ? undefined : parsed.data.pitch,

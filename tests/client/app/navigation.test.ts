@@ -1,16 +1,30 @@
 import { describe, expect, it } from 'vitest';
 import { ROLES } from '../../../shared/api/roles';
-import { HOME_TITLES, navForRole } from '../../../src/app/navigation';
+import { HOME_TITLES, SECTION_ROLES, navForRole } from '../../../src/app/navigation';
 
 const labels = (role: (typeof ROLES)[number]) => navForRole(role).map((item) => item.label);
 
-describe('role navigation (product brief for the client shell)', () => {
+describe('role navigation (product brief for the client shell and the sales desk screens)', () => {
   it('shows each role its own sections', () => {
-    expect(labels('admin')).toEqual(['Overview', 'Users', 'Builders', 'Jobs']);
-    expect(labels('sales')).toEqual(['Sales desk', 'Builders', 'Jobs']);
-    expect(labels('engineer')).toEqual(['Design review', 'Jobs']);
-    expect(labels('foreman')).toEqual(['Shop floor', 'Jobs']);
-    expect(labels('builder')).toEqual(['Your jobs']);
+    expect(labels('admin')).toEqual(['Overview', 'Orders', 'Users', 'Builders', 'Jobs']);
+    expect(labels('sales')).toEqual(['Sales desk', 'Orders', 'Builders', 'Jobs']);
+    expect(labels('engineer')).toEqual(['Design review', 'Review queue', 'Orders', 'Jobs']);
+    expect(labels('foreman')).toEqual(['Shop floor', 'Orders', 'Jobs']);
+    expect(labels('builder')).toEqual(['Your jobs', 'Your orders']);
+  });
+
+  it('links the review queue and the orders list where the routes live', () => {
+    expect(navForRole('engineer').find((i) => i.label === 'Review queue')?.to).toBe('/reviews');
+    expect(navForRole('builder').find((i) => i.label === 'Your orders')?.to).toBe('/orders');
+  });
+
+  it('only lists sections the role may open', () => {
+    for (const role of ROLES) {
+      for (const item of navForRole(role).slice(1)) {
+        const section = item.to.slice(1) as keyof typeof SECTION_ROLES;
+        expect(SECTION_ROLES[section] as readonly string[]).toContain(role);
+      }
+    }
   });
 
   it('starts every role at /', () => {

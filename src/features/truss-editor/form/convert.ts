@@ -26,10 +26,15 @@ export interface LineRequest {
   design: DesignInputDraft;
 }
 
-/** The outcome of reading the form: the checked design and request, or messages per field. */
-export type FormReading =
-  | { ok: true; input: DesignInput; request: LineRequest }
-  | { ok: false; errors: TrussFormErrors; designErrors: boolean };
+/**
+ * The outcome of reading the form. `input` is the checked design whenever the design fields are
+ * valid (so the drawing updates while the mark is still empty); `request` only when everything is.
+ */
+export interface FormReading {
+  input: DesignInput | null;
+  request: LineRequest | null;
+  errors: TrussFormErrors;
+}
 
 const LENGTH_FIELDS = new Set<TrussFormField>([
   'span',
@@ -138,13 +143,11 @@ export function formToRequest(values: TrussFormValues, units: FormUnits): FormRe
       .map((s) => s.trim().toUpperCase())
       .filter(Boolean),
   };
-  const line = createLineSchema
-    .omit({ design: true })
-    .safeParse({
-      mark: values.mark,
-      quantity: number('quantity', 'a quantity', false),
-      plies: draft.plies,
-    });
+  const line = createLineSchema.omit({ design: true }).safeParse({
+    mark: values.mark,
+    quantity: number('quantity', 'a quantity', false),
+    plies: draft.plies,
+  });
   if (!line.success) {
     for (const issue of line.error.issues) {
       const field = fieldForPath(issue.path);
@@ -159,20 +162,20 @@ export function formToRequest(values: TrussFormValues, units: FormUnits): FormRe
       if (!errors[field] && !designIssues[field]) designIssues[field] = issue.message;
     }
   }
-  const designErrors = Object.keys(designIssues).length > 0 || hasDesignError(errors);
   Object.assign(errors, designIssues);
-  if (!parsed.success || !line.success || Object.keys(errors).length > 0) {
-    return { ok: false, errors, designErrors };
+  const input = parsed.success && !hasDesignError(errors) ? parsed.data : null;
+  if (!input || !line.success || Object.keys(errors).length > 0) {
+    return { input, request: null, errors };
   }
   return {
-    ok: true,
-    input: parsed.data,
+    input,
     request: {
       mark: line.data.mark,
       quantity: line.data.quantity,
       plies: line.data.plies,
       design: stripUndefined(draft),
     },
+    errors,
   };
 }
 

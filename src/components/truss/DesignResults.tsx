@@ -1,0 +1,205 @@
+import type { ReactNode } from 'react';
+import type { PresentedDesign, PresentedDeflection } from '../../../shared/engine/design';
+import { Alert, Badge, Card } from '../ui';
+import { csiBand, formatCsi } from './csi';
+import { MemberTable } from './MemberTable';
+import { formatPresentedDeflection, formatPresentedForce } from './quantities';
+
+const cell = 'px-4 py-2 align-top text-sand-800';
+const head = 'px-4 py-2 text-left text-xs font-semibold tracking-wide text-sand-700 uppercase';
+
+function SimpleTable({
+  caption,
+  headers,
+  children,
+}: {
+  caption: string;
+  headers: string[];
+  children: ReactNode;
+}) {
+  return (
+    <div className="overflow-x-auto">
+      <table className="w-full border-collapse text-sm">
+        <caption className="sr-only">{caption}</caption>
+        <thead className="bg-sand-100">
+          <tr>
+            {headers.map((h) => (
+              <th key={h} scope="col" className={head}>
+                {h}
+              </th>
+            ))}
+          </tr>
+        </thead>
+        <tbody className="divide-y divide-sand-200">{children}</tbody>
+      </table>
+    </div>
+  );
+}
+
+const passBadge = (pass: boolean) => (
+  <Badge tone={pass ? 'success' : 'danger'}>{pass ? 'Passes' : 'Fails'}</Badge>
+);
+
+/** Why a design fails, in one box: the count of failing members and each warning. */
+export function DesignVerdict({ design }: { design: PresentedDesign }) {
+  const failing = design.members.filter((m) => csiBand(m.csi).fails);
+  const worst = Math.max(...design.members.map((m) => m.csi));
+  if (design.ok) {
+    return (
+      <Alert tone="success" title="The design passes every check">
+        Highest member CSI {formatCsi(worst)}; deflection, bearings and plates are within limits.
+      </Alert>
+    );
+  }
+  return (
+    <Alert tone="danger" title="The design fails">
+      {failing.length > 0 ? (
+        <p>
+          {failing.length} member{failing.length === 1 ? '' : 's'} over CSI 1.00:{' '}
+          {failing.map((m) => `${m.id} (${formatCsi(m.csi)})`).join(', ')}.
+        </p>
+      ) : null}
+      <ul className="mt-1 list-disc pl-5">
+        {design.warnings.map((w) => (
+          <li key={w}>{w}</li>
+        ))}
+      </ul>
+    </Alert>
+  );
+}
+
+function DeflectionRow({
+  label,
+  d,
+  unit,
+}: {
+  label: string;
+  d: PresentedDeflection;
+  unit: 'in' | 'mm';
+}) {
+  return (
+    <tr>
+      <td className={cell}>
+        {label} <span className="text-xs text-sand-600">({d.load})</span>
+      </td>
+      <td className={cell}>
+        {formatPresentedDeflection(d.max, unit)} at {d.joint}
+      </td>
+      <td className={cell}>{d.ratio === null ? 'no deflection' : `L/${d.ratio}`}</td>
+      <td className={cell}>L/{d.limit}</td>
+      <td className={cell}>{passBadge(d.pass)}</td>
+    </tr>
+  );
+}
+
+/** Reactions per support (max down, max up), bearing checks and deflection against limits. */
+export function SupportsAndDeflection({ design }: { design: PresentedDesign }) {
+  const f = design.units.force;
+  const bearingOf = new Map(design.bearing.map((b) => [b.joint, b]));
+  return (
+    <div className="grid gap-4 lg:grid-cols-2">
+      <Card title="Reactions" flush>
+        <SimpleTable caption="Reactions" headers={['Support', 'Max down', 'Max up', 'Bearing']}>
+          {design.reactions.map((r) => {
+            const b = bearingOf.get(r.joint);
+            return (
+              <tr key={r.joint}>
+                <td className={`${cell} font-semibold`}>{r.joint}</td>
+                <td className={cell}>{formatPresentedForce(r.maxDown, f)}</td>
+                <td className={cell}>{r.maxUp > 0 ? formatPresentedForce(r.maxUp, f) : '—'}</td>
+                <td className={cell}>
+                  {b ? (
+                    <span className="flex items-center gap-2">
+                      {b.width.text}, ratio {formatCsi(b.ratio)} {passBadge(b.pass)}
+                    </span>
+                  ) : (
+                    '—'
+                  )}
+                </td>
+              </tr>
+            );
+          })}
+        </SimpleTable>
+      </Card>
+      <Card title="Deflection" flush>
+        <SimpleTable caption="Deflection" headers={['Load', 'Largest', 'Span / Δ', 'Limit', '']}>
+          {design.deflection.live ? (
+            <DeflectionRow label="Live" d={design.deflection.live} unit={design.units.length} />
+          ) : null}
+          <DeflectionRow label="Total" d={design.deflection.total} unit={design.units.length} />
+        </SimpleTable>
+      </Card>
+    </div>
+  );
+}
+
+/** The plate chosen at each joint, with its worst ratio; demo catalogs say so. */
+export function PlatesTable({ design }: { design: PresentedDesign }) {
+  return (
+    <Card title="Plates (both faces of each joint)" flush>
+      {design.demoPlates ? (
+        <p className="border-b border-sand-200 bg-warning-50 px-4 py-2 text-xs text-warning-800">
+          Demo plate catalog: its design values are invented and are not for construction.
+        </p>
+      ) : null}
+      <SimpleTable caption="Plates" headers={['Joint', 'Kind', 'Plate', 'Ratio', '']}>
+        {design.plates.map((p) => (
+          <tr key={p.joint}>
+            <td className={`${cell} font-semibold`}>{p.joint}</td>
+            <td className={cell}>{p.kind}</td>
+            <td className={cell}>{p.plate ?? p.message ?? '—'}</td>
+            <td className={cell}>{formatCsi(p.ratio)}</td>
+            <td className={cell}>{passBadge(p.ok)}</td>
+          </tr>
+        ))}
+      </SimpleTable>
+    </Card>
+  );
+}
+
+/** The standing cautions (DESIGN.md §4.6) as the design carries them. */
+export function DesignCautions({ cautions }: { cautions: readonly string[] }) {
+  return (
+    <aside
+      aria-labelledby="design-cautions-title"
+      className="rounded-md border border-warning-200 bg-warning-50 px-4 py-3 text-warning-800"
+    >
+      <h2 id="design-cautions-title" className="text-sm font-semibold">
+        Before anything is built
+      </h2>
+      <ul className="mt-1.5 list-disc space-y-1 pl-5 text-sm">
+        {cautions.map((c) => (
+          <li key={c}>{c}</li>
+        ))}
+      </ul>
+    </aside>
+  );
+}
+
+/**
+ * Everything below the drawing: verdict, members, reactions and bearings, deflection, plates,
+ * warnings, assumptions and the cautions.
+ */
+export function DesignResults({ design }: { design: PresentedDesign }) {
+  return (
+    <div className="flex flex-col gap-4">
+      <DesignVerdict design={design} />
+      <Card title="Members" flush>
+        <MemberTable design={design} />
+      </Card>
+      <SupportsAndDeflection design={design} />
+      <PlatesTable design={design} />
+      {design.notes.length > 0 ? (
+        <Card title="Assumptions">
+          <ul className="list-disc space-y-1 pl-5 text-sm text-sand-700">
+            {design.notes.map((n) => (
+              <li key={n}>{n}</li>
+            ))}
+          </ul>
+          <p className="mt-2 text-xs text-sand-600">Engine version {design.engineVersion}</p>
+        </Card>
+      ) : null}
+      <DesignCautions cautions={design.cautions} />
+    </div>
+  );
+}

@@ -1,0 +1,110 @@
+import clsx from 'clsx';
+import { useMemo } from 'react';
+import type { PresentedDesign } from '../../../shared/engine/design';
+import { DataTable, tableColumnHelper, type TableColumn } from '../ui';
+import { csiBand, formatCsi } from './csi';
+import { forceSense, formatPresentedForce } from './quantities';
+
+type Row = PresentedDesign['members'][number] & { governingForce: number | undefined };
+
+const column = tableColumnHelper<Row>();
+
+/** CSI as a small badge in the ramp's colour; failing members also say "fails". */
+export function CsiBadge({ csi }: { csi: number }) {
+  const band = csiBand(csi);
+  return (
+    <span className="inline-flex items-center gap-1.5 font-medium tabular-nums">
+      <svg width="12" height="12" aria-hidden="true">
+        <rect width="12" height="12" rx="2" className={clsx(band.fill, 'stroke-sand-800')} />
+      </svg>
+      {formatCsi(csi)}
+      {band.fails ? <span className="text-danger-700">fails</span> : null}
+    </span>
+  );
+}
+
+const ROLE_NAMES: Record<string, string> = {
+  topChord: 'Top chord',
+  bottomChord: 'Bottom chord',
+  web: 'Web',
+};
+
+function columnsFor(unit: 'lbf' | 'kN'): TableColumn<Row>[] {
+  return column.columns([
+    column.accessor('id', {
+      header: 'Member',
+      cell: (info) => <span className="font-semibold text-sand-900">{info.getValue()}</span>,
+    }),
+    column.accessor('piece', {
+      header: 'Piece',
+      cell: (info) => (
+        <span>
+          {info.getValue()}{' '}
+          <span className="text-xs text-sand-600">{ROLE_NAMES[info.row.original.role] ?? ''}</span>
+        </span>
+      ),
+    }),
+    column.accessor('lumber', { header: 'Lumber' }),
+    column.accessor('governingForce', {
+      header: 'Force',
+      cell: (info) => {
+        const f = info.getValue();
+        if (f === undefined) return '—';
+        const sense = forceSense(f);
+        return (
+          <span className="whitespace-nowrap tabular-nums">
+            {formatPresentedForce(f, unit)}{' '}
+            <span className="font-semibold">{sense === 'T' ? 'T' : sense === 'C' ? 'C' : ''}</span>
+          </span>
+        );
+      },
+    }),
+    column.accessor('csi', { header: 'CSI', cell: (info) => <CsiBadge csi={info.getValue()} /> }),
+    column.accessor('governingCheck', {
+      header: 'Governs',
+      cell: (info) => (
+        <span>
+          {info.getValue()}
+          <span className="block text-xs text-sand-600">
+            {info.row.original.governingCombination}
+          </span>
+        </span>
+      ),
+    }),
+    column.accessor('bracing', {
+      header: 'Bracing',
+      cell: (info) => (
+        <span
+          className={clsx('text-xs', info.row.original.braced && 'font-semibold text-sand-900')}
+        >
+          {info.getValue()}
+        </span>
+      ),
+    }),
+  ]);
+}
+
+/**
+ * Every member of a design: piece, lumber, governing force with T/C (tension positive in the
+ * engine), CSI, governing check and combination, bracing.
+ */
+export function MemberTable({ design }: { design: PresentedDesign }) {
+  const unit = design.units.force;
+  const columns = useMemo(() => columnsFor(unit), [unit]);
+  const rows = useMemo<Row[]>(() => {
+    const names = design.combinations.map((c) => c.name);
+    return design.members.map((m) => {
+      const k = names.indexOf(m.governingCombination);
+      return { ...m, governingForce: k >= 0 ? m.forces[k] : undefined };
+    });
+  }, [design]);
+  return (
+    <DataTable
+      caption="Members"
+      columns={columns}
+      data={rows}
+      rowKey={(m) => m.id}
+      rowClassName={(m) => (csiBand(m.csi).fails ? 'bg-danger-50' : 'hover:bg-sand-50')}
+    />
+  );
+}
