@@ -20,19 +20,24 @@ export const SECTION_ROLES = {
   users: ['admin'],
   builders: ['admin', 'sales'],
   jobs: ['admin', 'sales', 'engineer', 'foreman'],
+  /** A job's own page: builders read their company's jobs too (server/policies/job.ts). */
+  job: ['admin', 'sales', 'engineer', 'foreman', 'builder'],
+  orders: ['admin', 'sales', 'engineer', 'foreman', 'builder'],
+  reviews: ['engineer'],
 } as const satisfies Record<string, readonly Role[]>;
+
+const may = (section: keyof typeof SECTION_ROLES, role: Role) =>
+  (SECTION_ROLES[section] as readonly Role[]).includes(role);
 
 /** The navigation a role sees: its landing page first, then the sections it may open. */
 export function navForRole(role: Role): NavItem[] {
   const items: NavItem[] = [{ to: '/', label: role === 'admin' ? 'Overview' : HOME_TITLES[role] }];
-  if ((SECTION_ROLES.users as readonly Role[]).includes(role)) {
-    items.push({ to: '/users', label: 'Users' });
+  if (may('reviews', role)) items.push({ to: '/reviews', label: 'Review queue' });
+  if (may('orders', role)) {
+    items.push({ to: '/orders', label: role === 'builder' ? 'Your orders' : 'Orders' });
   }
-  if ((SECTION_ROLES.builders as readonly Role[]).includes(role)) {
-    items.push({ to: '/builders', label: 'Builders' });
-  }
-  if ((SECTION_ROLES.jobs as readonly Role[]).includes(role)) {
-    items.push({ to: '/jobs', label: 'Jobs' });
-  }
+  if (may('users', role)) items.push({ to: '/users', label: 'Users' });
+  if (may('builders', role)) items.push({ to: '/builders', label: 'Builders' });
+  if (may('jobs', role)) items.push({ to: '/jobs', label: 'Jobs' });
   return items;
 }

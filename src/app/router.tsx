@@ -1,7 +1,14 @@
 import type { QueryClient } from '@tanstack/react-query';
-import { createBrowserRouter, type LoaderFunctionArgs } from 'react-router';
+import type { ReactNode } from 'react';
+import { createBrowserRouter, useParams, type LoaderFunctionArgs } from 'react-router';
+import type { Me } from '../../shared/api/auth';
+import { customerQueryOptions } from '../features/builders/api/customer';
+import {
+  customerListParamsFromSearch,
+  customersQueryOptions,
+} from '../features/builders/api/list-customers';
+import { BuilderPage } from '../features/builders/components/BuilderPage';
 import { BuildersPage } from '../features/builders/components/BuildersPage';
-import { customersQueryOptions } from '../features/builders/api/list-customers';
 import { useMe } from '../features/auth/api/me';
 import { SignInPage } from '../features/auth/components/SignInPage';
 import { healthQueryOptions } from '../features/auth/api/health';
@@ -11,12 +18,23 @@ import {
   usersOverviewQueryOptions,
 } from '../features/dashboard/api/dashboard-queries';
 import { DashboardPage } from '../features/dashboard/components/DashboardPage';
-import { jobsQueryOptions } from '../features/jobs/api/list-jobs';
+import { jobQueryOptions, plantQueryOptions } from '../features/jobs/api/job';
+import { jobListParamsFromSearch, jobsQueryOptions } from '../features/jobs/api/list-jobs';
+import { BuilderJobs } from '../features/jobs/components/BuilderJobs';
+import { JobPage } from '../features/jobs/components/JobPage';
 import { JobsPage } from '../features/jobs/components/JobsPage';
+import { orderListParamsFromSearch, ordersQueryOptions } from '../features/orders/api/list-orders';
+import { orderQueryOptions } from '../features/orders/api/order';
+import { JobOrders } from '../features/orders/components/JobOrders';
+import { OrderPage } from '../features/orders/components/OrderPage';
+import { OrdersPage } from '../features/orders/components/OrdersPage';
+import { reviewRoutes } from '../features/reviews/routes';
+import { trussEditorRoutes } from '../features/truss-editor/routes';
 import { usersQueryOptions } from '../features/users/api/list-users';
 import { UsersPage } from '../features/users/components/UsersPage';
 import { Spinner } from '../components/ui';
 import { listParamsFromSearch } from '../lib/list-params';
+import { canManageSales } from '../lib/permissions';
 import { AppFrame } from './AppFrame';
 import { ErrorPage, NotFoundPage } from './ErrorPages';
 import { redirectIfSignedIn, requireRole, requireSession } from './guards';
@@ -46,7 +64,22 @@ function StartupSpinner() {
   );
 }
 
-const paramsOf = (request: Request) => listParamsFromSearch(new URL(request.url).searchParams);
+const searchOf = (request: Request) => new URL(request.url).searchParams;
+const paramsOf = (request: Request) => listParamsFromSearch(searchOf(request));
+
+/** The numeric `:id` of a detail route; junk answers 404 instead of a failed request. */
+function idParam(value: string | undefined): number {
+  const id = Number(value);
+  if (!Number.isInteger(id) || id < 1) throw new Response('No such record.', { status: 404 });
+  return id;
+}
+
+/** Renders a page with the signed-in session and the route's `:id` (the loaders checked both). */
+function WithMe({ render }: { render: (me: Me, id: number) => ReactNode }) {
+  const me = useMe().data;
+  const { id } = useParams();
+  return me ? <>{render(me, id === undefined ? 0 : idParam(id))}</> : null;
+}
 
 function HomeRoute() {
   const me = useMe().data;
@@ -115,17 +148,111 @@ export function createAppRouter(queryClient: QueryClient) {
             {
               path: 'builders',
               loader: section(SECTION_ROLES.builders, ({ request }) =>
-                prefetch(queryClient.ensureQueryData(customersQueryOptions(paramsOf(request)))),
+                prefetch(
+                  queryClient.ensureQueryData(
+                    customersQueryOptions(customerListParamsFromSearch(searchOf(request))),
+                  ),
+                ),
               ),
               element: <BuildersPage />,
             },
             {
+              path: 'builders/:id',
+              loader: section(SECTION_ROLES.builders, ({ params }) =>
+                prefetch(
+                  Promise.all([
+                    queryClient.ensureQueryData(customerQueryOptions(idParam(params.id))),
+                    queryClient.ensureQueryData(plantQueryOptions()),
+                  ]),
+                ),
+              ),
+              element: (
+                <WithMe
+                  render={(me, id) => (
+                    <BuilderPage
+                      id={id}
+                      canEdit={canManageSales(me.user.role)}
+                      jobs={(customer) => (
+                        <BuilderJobs
+                          customerId={customer.id}
+                          customerName={customer.name}
+                          canEdit={canManageSales(me.user.role)}
+                        />
+                      )}
+                    />
+                  )}
+                />
+              ),
+            },
+            {
               path: 'jobs',
               loader: section(SECTION_ROLES.jobs, ({ request }) =>
-                prefetch(queryClient.ensureQueryData(jobsQueryOptions(paramsOf(request)))),
+                prefetch(
+                  queryClient.ensureQueryData(
+                    jobsQueryOptions(jobListParamsFromSearch(searchOf(request))),
+                  ),
+                ),
               ),
-              element: <JobsPage />,
+              element: <WithMe render={(me) => <JobsPage role={me.user.role} />} />,
             },
+            {
+              path: 'jobs/:id',
+              loader: section(SECTION_ROLES.job, ({ params }) =>
+                prefetch(
+                  Promise.all([
+                    queryClient.ensureQueryData(jobQueryOptions(idParam(params.id))),
+                    queryClient.ensureQueryData(plantQueryOptions()),
+                  ]),
+                ),
+              ),
+              element: (
+                <WithMe
+                  render={(me, id) => (
+                    <JobPage
+                      id={id}
+                      canEdit={canManageSales(me.user.role)}
+                      canOpenBuilder={(SECTION_ROLES.builders as readonly string[]).includes(
+                        me.user.role,
+                      )}
+                      canListJobs={(SECTION_ROLES.jobs as readonly string[]).includes(me.user.role)}
+                      orders={(job) => (
+                        <JobOrders job={job} canEdit={canManageSales(me.user.role)} />
+                      )}
+                    />
+                  )}
+                />
+              ),
+            },
+            {
+              path: 'orders',
+              loader: section(SECTION_ROLES.orders, ({ request }) =>
+                prefetch(
+                  queryClient.ensureQueryData(
+                    ordersQueryOptions(orderListParamsFromSearch(searchOf(request))),
+                  ),
+                ),
+              ),
+              element: <WithMe render={(me) => <OrdersPage role={me.user.role} />} />,
+            },
+            {
+              path: 'orders/:id',
+              loader: section(SECTION_ROLES.orders, ({ params }) =>
+                prefetch(queryClient.ensureQueryData(orderQueryOptions(idParam(params.id)))),
+              ),
+              element: (
+                <WithMe
+                  render={(me, id) => (
+                    <OrderPage
+                      id={id}
+                      canEdit={canManageSales(me.user.role)}
+                      canOpenJob={(SECTION_ROLES.job as readonly string[]).includes(me.user.role)}
+                    />
+                  )}
+                />
+              ),
+            },
+            ...trussEditorRoutes(queryClient),
+            ...reviewRoutes(queryClient),
             { path: '*', element: <NotFoundPage /> },
           ],
         },

@@ -3,6 +3,9 @@ import type { ListParams } from './query-keys';
 /** Rows per page of every list screen unless the URL says otherwise. */
 export const DEFAULT_PAGE_SIZE = 25;
 
+/** URL keys owned by paging, search and sort; every other key is a list's own filter. */
+const LIST_KEYS = ['q', 'page', 'pageSize', 'sort'] as const;
+
 const positiveInt = (text: string | null, fallback: number, max = Number.MAX_SAFE_INTEGER) => {
   const n = Number(text);
   return Number.isInteger(n) && n >= 1 ? Math.min(n, max) : fallback;
@@ -41,6 +44,54 @@ export function searchFromListParams(params: ListParams): URLSearchParams {
   }
   if (params.sort) search.set('sort', params.sort);
   return search;
+}
+
+/** A change to a list's URL: paging/search/sort fields, and filters (empty or undefined removes one). */
+export interface ListSearchChange extends ListParams {
+  filters?: Record<string, string | undefined>;
+}
+
+/**
+ * Applies `change` to the current URL search, keeping the list's filters (which
+ * {@link searchFromListParams} does not know about). Changing a filter goes back to page 1,
+ * because the old page number may not exist in the filtered list.
+ */
+export function mergeListSearch(
+  previous: URLSearchParams,
+  change: ListSearchChange,
+): URLSearchParams {
+  const { filters, ...listChange } = change;
+  const next = searchFromListParams({
+    ...listParamsFromSearch(previous),
+    ...listChange,
+    ...(filters ? { page: 1 } : {}),
+  });
+  for (const [key, value] of previous) {
+    if (!(LIST_KEYS as readonly string[]).includes(key) && !next.has(key)) next.set(key, value);
+  }
+  for (const [key, value] of Object.entries(filters ?? {})) {
+    if (value) next.set(key, value);
+    else next.delete(key);
+  }
+  return next;
+}
+
+/** Reads one filter from the URL if it is one of `allowed`, else `undefined` (junk is ignored). */
+export function filterFromSearch<const T extends string>(
+  search: URLSearchParams,
+  key: string,
+  allowed: readonly T[],
+): T | undefined {
+  const value = search.get(key);
+  return value !== null && (allowed as readonly string[]).includes(value)
+    ? (value as T)
+    : undefined;
+}
+
+/** Reads a positive whole-number id filter (e.g. `customerId`) from the URL, else `undefined`. */
+export function idFilterFromSearch(search: URLSearchParams, key: string): number | undefined {
+  const n = Number(search.get(key));
+  return Number.isInteger(n) && n >= 1 ? n : undefined;
 }
 
 /** Number of pages for `total` rows (at least 1, so "page 1 of 1" shows for an empty list). */

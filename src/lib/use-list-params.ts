@@ -1,18 +1,17 @@
 import { useCallback } from 'react';
 import { useSearchParams } from 'react-router';
-import { listParamsFromSearch, searchFromListParams } from './list-params';
-import type { ListParams } from './query-keys';
+import { listParamsFromSearch, mergeListSearch, type ListSearchChange } from './list-params';
 
-/** A list screen's search/page/sort, read from and written to the URL (so Back and links work). */
+/**
+ * A list screen's search/page/sort and filters, read from and written to the URL (so Back,
+ * bookmarks and shared links show the same view). `search` is the raw URL search for filters.
+ */
 export function useListParams() {
   const [search, setSearch] = useSearchParams();
   const params = listParamsFromSearch(search);
   const update = useCallback(
-    (change: ListParams) =>
-      setSearch((previous) =>
-        searchFromListParams({ ...listParamsFromSearch(previous), ...change }),
-      ),
+    (change: ListSearchChange) => setSearch((previous) => mergeListSearch(previous, change)),
     [setSearch],
   );
-  return { params, update };
+  return { params, search, update };
 }

@@ -1,3 +1,4 @@
+import clsx from 'clsx';
 import { useEffect, useRef, type ReactNode } from 'react';
 
 /** Props of {@link Dialog}. */
@@ -8,13 +9,15 @@ export interface DialogProps {
   children: ReactNode;
   /** Buttons row at the bottom. */
   footer?: ReactNode;
+  /** A wider dialog for two-column forms. */
+  wide?: boolean;
 }
 
 /**
  * A modal dialog on the native `<dialog>` element: the browser traps focus, closes on Escape and
  * returns focus to the opener, which is more robust than a hand-rolled overlay.
  */
-export function Dialog({ open, title, onClose, children, footer }: DialogProps) {
+export function Dialog({ open, title, onClose, children, footer, wide }: DialogProps) {
   const ref = useRef<HTMLDialogElement>(null);
 
   useEffect(() => {
@@ -33,7 +36,11 @@ export function Dialog({ open, title, onClose, children, footer }: DialogProps) 
         event.preventDefault();
         onClose();
       }}
-      className="m-auto w-[min(32rem,calc(100vw-2rem))] rounded-md border border-sand-200 bg-white p-0 text-sand-900 shadow-dialog backdrop:bg-sand-900/40"
+      className={clsx(
+        'm-auto rounded-md',
+        wide ? 'w-[min(44rem,calc(100vw-2rem))]' : 'w-[min(32rem,calc(100vw-2rem))]',
+        ' border border-sand-200 bg-white p-0 text-sand-900 shadow-dialog backdrop:bg-sand-900/40',
+      )}
     >
       {open ? (
         <div className="flex flex-col gap-4 p-5">

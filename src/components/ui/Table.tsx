@@ -1,18 +1,25 @@
 import {
   createColumnHelper,
+  rowPaginationFeature,
+  rowSortingFeature,
   tableFeatures,
   useTable,
   type ColumnDef,
   type ColumnHelper,
   type RowData,
+  type SortingState,
+  type Updater,
 } from '@tanstack/react-table';
 import type { ReactNode } from 'react';
+import { sortingFromParam, sortParamFromSorting } from '../../lib/sorting';
+import { SortHeader } from './SortHeader';
 
 /**
- * Core-only table features: paging, search and sort happen on the server, so the table only
- * lays out the rows it is given.
+ * Table features: sorting and paging state only. No sorted or paginated row model is registered
+ * and both run in manual mode, because the server sorts and pages; the table lays out the rows
+ * it is given and turns header clicks into a new sort.
  */
-export const coreTableFeatures = tableFeatures({});
+export const coreTableFeatures = tableFeatures({ rowSortingFeature, rowPaginationFeature });
 /** Feature set type of {@link coreTableFeatures}. */
 export type CoreTableFeatures = typeof coreTableFeatures;
 /** A column of a {@link DataTable}. */
@@ -24,6 +31,15 @@ export function tableColumnHelper<T extends RowData>(): ColumnHelper<CoreTableFe
   return createColumnHelper<CoreTableFeatures, T>();
 }
 
+/** Server-side sorting of a {@link DataTable}: the API's `sort` value and which columns sort. */
+export interface TableSorting {
+  /** The current `sort` parameter, e.g. `name` or `-createdAt`. */
+  sort: string | undefined;
+  onSort: (sort: string | undefined) => void;
+  /** Column ids the server can sort by (ids equal the API's sort keys). */
+  columns: readonly string[];
+}
+
 /** Props of {@link DataTable}. Keep `columns` stable (module scope or memo). */
 export interface DataTableProps<T extends RowData> {
   columns: TableColumn<T>[];
@@ -33,7 +49,13 @@ export interface DataTableProps<T extends RowData> {
   /** Shown in place of the rows when `data` is empty. */
   empty?: ReactNode;
   rowKey?: (row: T) => string | number;
+  /** Makes the listed column headers sort buttons; the parent refetches with the new sort. */
+  sorting?: TableSorting;
+  /** Extra classes of each body row (e.g. to mark a locked line). */
+  rowClassName?: (row: T) => string | undefined;
 }
+
+const NO_SORTING: SortingState = [];
 
 /** A plain, readable data table; scrolls sideways on narrow screens instead of squashing. */
 export function DataTable<T extends RowData>({
@@ -42,14 +64,30 @@ export function DataTable<T extends RowData>({
   caption,
   empty,
   rowKey,
+  sorting,
+  rowClassName,
 }: DataTableProps<T>) {
+  const sortingState = sorting ? sortingFromParam(sorting.sort) : NO_SORTING;
   const table = useTable({
     features: coreTableFeatures,
     columns,
     data,
     getRowId: rowKey ? (row) => String(rowKey(row)) : undefined,
+    manualSorting: true,
+    manualPagination: true,
+    enableMultiSort: false,
+    // Clicking a sorted column flips it rather than clearing it: a list always has an order.
+    enableSortingRemoval: false,
+    enableSorting: !!sorting,
+    state: { sorting: sortingState },
+    onSortingChange: (updater: Updater<SortingState>) => {
+      if (!sorting) return;
+      const next = typeof updater === 'function' ? updater(sortingState) : updater;
+      sorting.onSort(sortParamFromSorting(next));
+    },
   });
   const rows = table.getRowModel().rows;
+  const sortable = new Set(sorting?.columns ?? []);
 
   return (
     <div className="relative overflow-x-auto">
@@ -58,17 +96,41 @@ export function DataTable<T extends RowData>({
         <thead className="bg-sand-100 text-xs font-semibold tracking-wide text-sand-700 uppercase">
           {table.getHeaderGroups().map((group) => (
             <tr key={group.id}>
-              {group.headers.map((header) => (
-                <th key={header.id} scope="col" className="px-4 py-2.5 whitespace-nowrap">
-                  {header.isPlaceholder ? null : <table.FlexRender header={header} />}
-                </th>
-              ))}
+              {group.headers.map((header) => {
+                const canSort = sortable.has(header.column.id);
+                const direction = canSort ? header.column.getIsSorted() : false;
+                return (
+                  <th
+                    key={header.id}
+                    scope="col"
+                    aria-sort={
+                      direction === 'asc'
+                        ? 'ascending'
+                        : direction === 'desc'
+                          ? 'descending'
+                          : undefined
+                    }
+                    className="px-4 py-2.5 whitespace-nowrap"
+                  >
+                    {header.isPlaceholder ? null : canSort ? (
+                      <SortHeader
+                        direction={direction}
+                        onClick={() => header.column.toggleSorting(direction === 'asc')}
+                      >
+                        <table.FlexRender header={header} />
+                      </SortHeader>
+                    ) : (
+                      <table.FlexRender header={header} />
+                    )}
+                  </th>
+                );
+              })}
             </tr>
           ))}
         </thead>
         <tbody className="divide-y divide-sand-200">
           {rows.map((row) => (
-            <tr key={row.id} className="hover:bg-sand-50">
+            <tr key={row.id} className={rowClassName?.(row.original) ?? 'hover:bg-sand-50'}>
               {row.getAllCells().map((cell) => (
                 <td key={cell.id} className="px-4 py-2.5 align-middle text-sand-800">
                   <table.FlexRender cell={cell} />

@@ -1,75 +1,89 @@
-import type { CustomerSummary } from '../../../../shared/api/list';
+import { useState } from 'react';
+import { useNavigate } from 'react-router';
 import {
-  Badge,
+  Button,
   Card,
   DataTable,
+  Dialog,
   EmptyState,
+  FilterSelect,
+  ListToolbar,
   PageHeader,
   Pager,
   QueryState,
   SearchBox,
-  tableColumnHelper,
 } from '../../../components/ui';
 import { useListParams } from '../../../lib/use-list-params';
-import { useCustomers } from '../api/list-customers';
+import { useCreateCustomer } from '../api/customer';
+import { customerListParamsFromSearch, useCustomers } from '../api/list-customers';
+import { BUILDER_SORT_COLUMNS, builderColumns } from './builder-columns';
+import { BuilderForm, EMPTY_BUILDER } from './BuilderForm';
 
-const column = tableColumnHelper<CustomerSummary>();
-const columns = column.columns([
-  column.accessor('name', {
-    header: 'Builder company',
-    cell: (info) => <span className="font-medium text-sand-900">{info.getValue()}</span>,
-  }),
-  column.accessor('email', { header: 'E-mail' }),
-  column.accessor('phone', { header: 'Phone', cell: (info) => info.getValue() ?? '—' }),
-  column.accessor('city', { header: 'City', cell: (info) => info.getValue() ?? '—' }),
-  column.accessor('terms', {
-    header: 'Terms',
-    cell: (info) =>
-      info.getValue() === 'account' ? (
-        <Badge tone="success">Account</Badge>
-      ) : (
-        <Badge tone="warning">Deposit</Badge>
-      ),
-  }),
-  column.accessor('jobCount', {
-    header: 'Jobs',
-    cell: (info) => <span className="tabular-nums">{info.getValue()}</span>,
-  }),
-]);
-
-/** `/builders`: the plant's builder companies, searchable and paged through the URL. */
+/** `/builders`: the plant's builder companies; sort, filter, search and page through the URL. */
 export function BuildersPage() {
-  const { params, update } = useListParams();
-  const customers = useCustomers(params);
+  const { params, search, update } = useListParams();
+  const query = customerListParamsFromSearch(search);
+  const customers = useCustomers(query);
+  const create = useCreateCustomer();
+  const navigate = useNavigate();
+  const [adding, setAdding] = useState(false);
+
+  const close = () => {
+    setAdding(false);
+    create.reset();
+  };
+
   return (
     <>
       <PageHeader
         title="Builders"
         description="Builder companies the plant supplies, with their payment terms."
+        actions={<Button onClick={() => setAdding(true)}>New builder</Button>}
       />
-      <div className="mb-4">
+      <ListToolbar>
         <SearchBox
           label="Search builders"
           placeholder="Company, e-mail or city"
           value={params.q}
           onSearch={(q) => update({ q, page: 1 })}
         />
-      </div>
+        <FilterSelect
+          id="filter-terms"
+          label="Account type"
+          allLabel="All builders"
+          value={query.terms ?? ''}
+          onChange={(terms) => update({ filters: { terms } })}
+        >
+          <option value="account">Credit account</option>
+          <option value="deposit">Deposit required</option>
+        </FilterSelect>
+      </ListToolbar>
       <Card flush>
         <QueryState query={customers} what="builder companies">
           {(page) => (
             <>
               <DataTable
                 caption="Builder companies"
-                columns={columns}
+                columns={builderColumns}
                 data={page.items}
                 rowKey={(c) => c.id}
+                sorting={{
+                  sort: query.sort,
+                  onSort: (sort) => update({ sort, page: 1 }),
+                  columns: BUILDER_SORT_COLUMNS,
+                }}
                 empty={
                   <EmptyState
                     title={
-                      params.q ? `No builders match “${params.q}”` : 'No builder companies yet'
+                      params.q || query.terms
+                        ? 'No builders match this search'
+                        : 'No builder companies yet'
                     }
-                  />
+                  >
+                    {params.q || query.terms
+                      ? 'Try other words, or show all builders.'
+                      : 'Add the first builder company with “New builder”.'}
+                  </EmptyState>
                 }
               />
               <Pager
@@ -82,6 +96,20 @@ export function BuildersPage() {
           )}
         </QueryState>
       </Card>
+      <Dialog open={adding} title="New builder" onClose={close} wide>
+        <BuilderForm
+          mode="create"
+          defaultValues={EMPTY_BUILDER}
+          busy={create.isPending}
+          error={create.error}
+          onCancel={close}
+          onSubmit={(values) =>
+            create.mutate(values, {
+              onSuccess: (customer) => void navigate(`/builders/${customer.id}`),
+            })
+          }
+        />
+      </Dialog>
     </>
   );
 }

@@ -1,56 +1,79 @@
-import type { JobSummary } from '../../../../shared/api/list';
+import type { Role } from '../../../../shared/api/roles';
 import {
   Card,
   DataTable,
   EmptyState,
+  FilterSelect,
+  ListToolbar,
   PageHeader,
   Pager,
   QueryState,
   SearchBox,
-  tableColumnHelper,
 } from '../../../components/ui';
-import { formatDate } from '../../../lib/format';
+import { useBuilderChoices } from '../../../lib/builder-choices';
+import { canListBuilders } from '../../../lib/permissions';
 import { useListParams } from '../../../lib/use-list-params';
-import { useJobs } from '../api/list-jobs';
+import { jobListParamsFromSearch, useJobs } from '../api/list-jobs';
+import { JOB_SORT_COLUMNS, jobColumns } from './job-columns';
 
-const column = tableColumnHelper<JobSummary>();
-const columns = column.columns([
-  column.accessor('name', {
-    header: 'Job',
-    cell: (info) => <span className="font-medium text-sand-900">{info.getValue()}</span>,
-  }),
-  column.accessor('customerName', { header: 'Builder' }),
-  column.accessor('address', { header: 'Site address' }),
-  column.accessor('planRevision', { header: 'Plan rev.', cell: (info) => info.getValue() ?? '—' }),
-  column.accessor('createdAt', { header: 'Created', cell: (info) => formatDate(info.getValue()) }),
-]);
-
-/** `/jobs`: every job of the plant, searchable and paged through the URL. */
-export function JobsPage() {
-  const { params, update } = useListParams();
-  const jobs = useJobs(params);
+/** `/jobs`: every job of the plant; sort, filter by builder, search and page through the URL. */
+export function JobsPage({ role }: { role: Role }) {
+  const { params, search, update } = useListParams();
+  const query = jobListParamsFromSearch(search);
+  const jobs = useJobs(query);
+  const showBuilders = canListBuilders(role);
+  const builders = useBuilderChoices(showBuilders);
+  const filtered = !!(params.q || query.customerId);
   return (
     <>
-      <PageHeader title="Jobs" description="Every job of the plant, newest first." />
-      <div className="mb-4">
+      <PageHeader
+        title="Jobs"
+        description="Every job of the plant. Open a job for its site, loads and orders."
+      />
+      <ListToolbar>
         <SearchBox
           label="Search jobs"
           placeholder="Job, builder or address"
           value={params.q}
           onSearch={(q) => update({ q, page: 1 })}
         />
-      </div>
+        {showBuilders ? (
+          <FilterSelect
+            id="filter-builder"
+            label="Builder"
+            allLabel={builders.isPending ? 'Loading builders…' : 'All builders'}
+            value={query.customerId ? String(query.customerId) : ''}
+            disabled={builders.isPending}
+            onChange={(customerId) => update({ filters: { customerId } })}
+          >
+            {builders.data?.items.map((c) => (
+              <option key={c.id} value={c.id}>
+                {c.name}
+              </option>
+            ))}
+          </FilterSelect>
+        ) : null}
+      </ListToolbar>
       <Card flush>
         <QueryState query={jobs} what="jobs">
           {(page) => (
             <>
               <DataTable
                 caption="Jobs"
-                columns={columns}
+                columns={jobColumns}
                 data={page.items}
                 rowKey={(job) => job.id}
+                sorting={{
+                  sort: query.sort,
+                  onSort: (sort) => update({ sort, page: 1 }),
+                  columns: JOB_SORT_COLUMNS,
+                }}
                 empty={
-                  <EmptyState title={params.q ? `No jobs match “${params.q}”` : 'No jobs yet'} />
+                  <EmptyState title={filtered ? 'No jobs match this search' : 'No jobs yet'}>
+                    {filtered
+                      ? 'Try other words, or show all builders.'
+                      : 'Jobs are added from a builder’s page.'}
+                  </EmptyState>
                 }
               />
               <Pager

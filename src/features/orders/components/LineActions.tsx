@@ -1,0 +1,78 @@
+import type { LineSummary } from '../../../../shared/api/orders';
+import { Button, LinkButton } from '../../../components/ui';
+
+/** Props of {@link LineActions}. */
+export interface LineActionsProps {
+  orderId: number;
+  line: LineSummary;
+  first: boolean;
+  last: boolean;
+  /** The line whose action is running, so only that row shows busy. */
+  busy: boolean;
+  onCopy: (line: LineSummary) => void;
+  onDelete: (line: LineSummary) => void;
+  onMove: (line: LineSummary, step: -1 | 1) => void;
+}
+
+/** The actions of one truss line; names carry the mark so each button is unique for a screen reader. */
+export function LineActions({
+  orderId,
+  line,
+  first,
+  last,
+  busy,
+  onCopy,
+  onDelete,
+  onMove,
+}: LineActionsProps) {
+  return (
+    <div className="flex flex-wrap items-center gap-1">
+      <LinkButton
+        size="sm"
+        variant="secondary"
+        to={`/orders/${orderId}/lines/${line.id}`}
+        aria-label={`Edit ${line.mark}`}
+      >
+        Edit
+      </LinkButton>
+      <Button
+        size="sm"
+        variant="ghost"
+        disabled={busy}
+        onClick={() => onCopy(line)}
+        aria-label={`Copy ${line.mark}`}
+      >
+        Copy
+      </Button>
+      <Button
+        size="sm"
+        variant="ghost"
+        disabled={busy}
+        onClick={() => onDelete(line)}
+        aria-label={`Delete ${line.mark}`}
+      >
+        Delete
+      </Button>
+      <Button
+        size="sm"
+        variant="ghost"
+        disabled={busy || first}
+        onClick={() => onMove(line, -1)}
+        aria-label={`Move ${line.mark} up`}
+        title="Move up"
+      >
+        <span aria-hidden="true">↑</span>
+      </Button>
+      <Button
+        size="sm"
+        variant="ghost"
+        disabled={busy || last}
+        onClick={() => onMove(line, 1)}
+        aria-label={`Move ${line.mark} down`}
+        title="Move down"
+      >
+        <span aria-hidden="true">↓</span>
+      </Button>
+    </div>
+  );
+}

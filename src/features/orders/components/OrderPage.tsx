@@ -1,0 +1,178 @@
+import { useState } from 'react';
+import type { LineSummary, OrderDetail } from '../../../../shared/api/orders';
+import {
+  Alert,
+  Button,
+  Card,
+  Dialog,
+  EmptyState,
+  ErrorMessage,
+  LinkButton,
+  QueryState,
+  TextLink,
+} from '../../../components/ui';
+import { formatDateTime } from '../../../lib/format';
+import { useCopyLine, useDeleteLine, useOrder, useReorderLines } from '../api/order';
+import { movedLineIds } from '../line-order';
+import { LineTable } from './LineTable';
+import { OrderHistory } from './OrderHistory';
+import { OrderStatusBadge } from './StatusBadge';
+
+/** Props of {@link OrderPage}. */
+export interface OrderPageProps {
+  id: number;
+  /** Sales and admin add, change, copy, delete and reorder lines. */
+  canEdit: boolean;
+  /** Staff who may open the job's page (builders see the job name only). */
+  canOpenJob: boolean;
+}
+
+function Header({
+  order,
+  canEdit,
+  canOpenJob,
+}: { order: OrderDetail } & Omit<OrderPageProps, 'id'>) {
+  return (
+    <div className="mb-6 flex flex-wrap items-end justify-between gap-4">
+      <div className="min-w-0">
+        <div className="flex flex-wrap items-center gap-3">
+          <h1 className="text-2xl font-semibold tracking-tight text-sand-900">
+            Order {order.number}
+          </h1>
+          <OrderStatusBadge status={order.status} />
+        </div>
+        <p className="mt-1 text-base text-sand-600">
+          {order.customer.name} ·{' '}
+          {canOpenJob ? (
+            <TextLink to={`/jobs/${order.job.id}`}>{order.job.name}</TextLink>
+          ) : (
+            order.job.name
+          )}{' '}
+          · {order.lineCount} line{order.lineCount === 1 ? '' : 's'}, {order.trussCount} truss
+          {order.trussCount === 1 ? '' : 'es'} · updated {formatDateTime(order.updatedAt)}
+        </p>
+      </div>
+      {canEdit ? <LinkButton to={`/orders/${order.id}/lines/new`}>Add truss</LinkButton> : null}
+    </div>
+  );
+}
+
+function Lines({ order, canEdit }: { order: OrderDetail; canEdit: boolean }) {
+  const copy = useCopyLine(order.id);
+  const remove = useDeleteLine(order.id);
+  const reorder = useReorderLines(order.id);
+  const [deleting, setDeleting] = useState<LineSummary | null>(null);
+  const [notice, setNotice] = useState<string | null>(null);
+  const failed = copy.error ?? reorder.error;
+  const busyLineId = copy.isPending
+    ? copy.variables
+    : reorder.isPending
+      ? (reorder.variables[0] ?? null)
+      : null;
+
+  const onMove = (line: LineSummary, step: -1 | 1) => {
+    const lineIds = movedLineIds(order.lines, line.id, step);
+    if (lineIds) reorder.mutate(lineIds);
+  };
+  const confirmDelete = () => {
+    if (!deleting) return;
+    remove.mutate(deleting.id, {
+      onSuccess: () => {
+        setNotice(`Truss ${deleting.mark} was deleted.`);
+        setDeleting(null);
+      },
+    });
+  };
+
+  return (
+    <Card title="Truss lines" flush>
+      {notice ? (
+        <Alert tone="success" className="m-4">
+          {notice}
+        </Alert>
+      ) : null}
+      {failed ? <ErrorMessage className="m-4" title="That did not work" error={failed} /> : null}
+      {order.lines.length === 0 ? (
+        <EmptyState
+          title="No trusses on this order yet"
+          action={
+            canEdit ? <LinkButton to={`/orders/${order.id}/lines/new`}>Add truss</LinkButton> : null
+          }
+        >
+          {canEdit ? 'Each truss line is one design, built the quantity you set.' : null}
+        </EmptyState>
+      ) : (
+        <LineTable
+          orderId={order.id}
+          lines={order.lines}
+          actions={
+            canEdit
+              ? {
+                  busyLineId,
+                  onCopy: (line) =>
+                    copy.mutate(line.id, {
+                      onSuccess: (copied) =>
+                        setNotice(`Truss ${line.mark} was copied as ${copied.mark}.`),
+                    }),
+                  onDelete: (line) => {
+                    remove.reset();
+                    setDeleting(line);
+                  },
+                  onMove,
+                }
+              : undefined
+          }
+        />
+      )}
+      <Dialog
+        open={deleting !== null}
+        title={`Delete truss ${deleting?.mark ?? ''}?`}
+        onClose={() => setDeleting(null)}
+        footer={
+          <>
+            <Button variant="secondary" onClick={() => setDeleting(null)}>
+              Keep it
+            </Button>
+            <Button variant="danger" busy={remove.isPending} onClick={confirmDelete}>
+              Delete truss
+            </Button>
+          </>
+        }
+      >
+        <p>The line and its design are removed from order {order.number}. This cannot be undone.</p>
+        {deleting?.reviewState === 'approved' ? (
+          <p className="mt-2">Its design review approval goes with it.</p>
+        ) : null}
+        {remove.error ? (
+          <ErrorMessage className="mt-3" title="The truss was not deleted" error={remove.error} />
+        ) : null}
+      </Dialog>
+    </Card>
+  );
+}
+
+/** `/orders/:id`: the order's header, its truss lines and their actions, and its history. */
+export function OrderPage({ id, canEdit, canOpenJob }: OrderPageProps) {
+  const order = useOrder(id);
+  return (
+    <QueryState query={order} what="the order">
+      {(o) => (
+        <>
+          <p className="mb-2 text-sm">
+            <TextLink to="/orders">← Orders</TextLink>
+          </p>
+          <Header order={o} canEdit={canEdit} canOpenJob={canOpenJob} />
+          {!canEdit ? (
+            <Alert className="mb-4">
+              You can follow this order here; the plant’s sales desk makes the changes.
+            </Alert>
+          ) : null}
+          <div className="grid gap-6">
+            <Lines order={o} canEdit={canEdit} />
+            <OrderHistory entries={o.history} />
+          </div>
+        </>
+      )}
+    </QueryState>
+  );
+}
