@@ -6,6 +6,9 @@ import { Job } from './Job';
 import { AuditEvent } from './AuditEvent';
 import { Order } from './Order';
 import { OrderLine } from './OrderLine';
+import { PriceBook } from './PriceBook';
+import { Quote } from './Quote';
+import { StoredFile } from './StoredFile';
 
 let initialised: Sequelize | null = null;
 
@@ -13,7 +16,18 @@ let initialised: Sequelize | null = null;
 export function initModels(sequelize: Sequelize) {
   if (initialised === sequelize) return;
   initialised = sequelize;
-  for (const m of [Plant, Customer, User, Job, AuditEvent, Order, OrderLine])
+  for (const m of [
+    Plant,
+    Customer,
+    User,
+    Job,
+    AuditEvent,
+    Order,
+    OrderLine,
+    PriceBook,
+    Quote,
+    StoredFile,
+  ])
     m.initModel(sequelize);
   Plant.hasMany(Customer, { foreignKey: 'plantId' });
   Customer.belongsTo(Plant, { foreignKey: 'plantId', as: 'plant' });
@@ -31,6 +45,11 @@ export function initModels(sequelize: Sequelize) {
   OrderLine.belongsTo(Order, { foreignKey: 'orderId', as: 'order' });
   OrderLine.belongsTo(User, { foreignKey: 'reviewedBy', as: 'reviewer', constraints: false });
   AuditEvent.belongsTo(User, { foreignKey: 'actorId', as: 'actor', constraints: false });
+  PriceBook.belongsTo(User, { foreignKey: 'updatedBy', as: 'editor', constraints: false });
+  Order.hasMany(Quote, { foreignKey: 'orderId', as: 'quotes' });
+  Quote.belongsTo(Order, { foreignKey: 'orderId', as: 'order' });
+  Quote.belongsTo(User, { foreignKey: 'createdBy', as: 'creator', constraints: false });
+  StoredFile.belongsTo(User, { foreignKey: 'uploadedBy', as: 'uploader', constraints: false });
 }
 
-export { Plant, Customer, User, Job, AuditEvent, Order, OrderLine };
+export { Plant, Customer, User, Job, AuditEvent, Order, OrderLine, PriceBook, Quote, StoredFile };

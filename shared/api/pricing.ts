@@ -1,0 +1,126 @@
+import { z } from 'zod';
+
+const money = (label: string) =>
+  z
+    .number({ message: `${label} must be a number` })
+    .min(0, `${label} cannot be negative`)
+    .max(1_000_000, `${label} looks too large`);
+const fraction = (label: string, max = 1) =>
+  z
+    .number({ message: `${label} must be a number` })
+    .min(0, `${label} cannot be negative`)
+    .max(max, `${label} must be at most ${max * 100} %`);
+
+/**
+ * The plant's price book (admin writes, sales reads). Money in the plant's currency; fractions as
+ * 0–1 (0.25 = 25 %). `margin` is a share of the selling price: price = cost / (1 − margin).
+ */
+export const priceBookSchema = z.object({
+  currency: z
+    .string()
+    .trim()
+    .length(3, 'Use a 3-letter currency code, e.g. USD')
+    .toUpperCase()
+    .default('USD'),
+  /** Cost per board foot by lumber id ("2x4 SPF-1/2"); `defaultPerBoardFoot` covers any other. */
+  lumber: z.object({
+    defaultPerBoardFoot: money('Default lumber cost'),
+    byLumber: z.record(z.string(), money('Lumber cost')).default({}),
+  }),
+  /** Cost per plate by catalog id ("4x6-20"); `defaultPerSquareInch` prices any other plate by area. */
+  plates: z.object({
+    defaultPerSquareInch: money('Default plate cost'),
+    byPlate: z.record(z.string(), money('Plate cost')).default({}),
+  }),
+  /** Labour minutes per truss = perTruss + perPiece × pieces + perJoint × joints, at ratePerHour. */
+  labour: z.object({
+    perTruss: money('Minutes per truss'),
+    perPiece: money('Minutes per piece'),
+    perJoint: money('Minutes per joint'),
+    ratePerHour: money('Labour rate'),
+  }),
+  deliveryCharge: money('Delivery charge'),
+  margin: fraction('Margin', 0.9),
+  taxRate: fraction('Tax rate', 0.5),
+  /** Deposit asked of builders without a credit account. */
+  depositRate: fraction('Deposit', 1),
+  quoteValidityDays: z
+    .number()
+    .int('Whole days')
+    .min(1, 'At least 1 day')
+    .max(365, 'At most 365 days')
+    .default(30),
+  terms: z.string().trim().max(4000).default(''),
+});
+export type PriceBook = z.infer<typeof priceBookSchema>;
+
+export const quoteLineSchema = z.object({
+  mark: z.string(),
+  description: z.string(),
+  quantity: z.number().int(),
+  plies: z.number().int(),
+  boardFeet: z.number(),
+  lumberCost: z.number(),
+  plates: z.array(z.object({ plate: z.string(), count: z.number().int(), cost: z.number() })),
+  plateCost: z.number(),
+  labourMinutes: z.number(),
+  labourCost: z.number(),
+  unitCost: z.number(),
+  unitPrice: z.number(),
+  lineTotal: z.number(),
+});
+export type QuoteLine = z.infer<typeof quoteLineSchema>;
+
+/** A quote revision: an immutable snapshot (`POST /api/orders/:id/quotes` answers this). */
+export const quoteSchema = z.object({
+  id: z.number().int(),
+  orderId: z.number().int(),
+  /** Revision number within the order: 1, 2, … */
+  number: z.number().int(),
+  /** Printed reference, e.g. "2026-0001-Q2". */
+  reference: z.string(),
+  currency: z.string(),
+  lines: z.array(quoteLineSchema),
+  subtotal: z.number(),
+  delivery: z.number(),
+  tax: z.number(),
+  total: z.number(),
+  depositRate: z.number(),
+  depositDue: z.number(),
+  validUntil: z.string(),
+  terms: z.string(),
+  cautions: z.array(z.string()),
+  createdAt: z.string(),
+  createdBy: z.string().nullable(),
+  sentAt: z.string().nullable(),
+  sentTo: z.string().nullable(),
+  superseded: z.boolean(),
+});
+export type Quote = z.infer<typeof quoteSchema>;
+
+/** `GET /api/dev/mail`: what the local SMTP fake holds. */
+export const mailMessageSchema = z.object({
+  id: z.string(),
+  receivedAt: z.string(),
+  from: z.string(),
+  to: z.array(z.string()),
+  subject: z.string(),
+  text: z.string(),
+  attachments: z.array(
+    z.object({ filename: z.string(), contentType: z.string(), size: z.number() }),
+  ),
+});
+export type MailMessage = z.infer<typeof mailMessageSchema>;
+
+/** `GET /api/jobs/:id/files` rows. */
+export const storedFileSchema = z.object({
+  id: z.number().int(),
+  jobId: z.number().int(),
+  name: z.string(),
+  contentType: z.enum(['application/pdf', 'image/png', 'image/jpeg']),
+  size: z.number().int(),
+  uploadedBy: z.string().nullable(),
+  createdAt: z.string(),
+});
+export type StoredFile = z.infer<typeof storedFileSchema>;
+export const MAX_UPLOAD_BYTES = 25 * 1024 * 1024;
