@@ -11,6 +11,7 @@ import { readConfig } from '../server/config';
 import { User } from '../server/models';
 import { DEMO_PASSWORD, DEMO_SIGN_INS, seedDemo } from '../seeders/demo';
 import { APP_PG_PORT, provideDatabase } from './database';
+import { provideMailer } from '../server/services/provideMailer';
 
 const config = readConfig();
 const db = await provideDatabase({ dir: '.data/postgres', port: APP_PG_PORT, name: 'spanwise' });
@@ -30,7 +31,19 @@ if (process.env.SKIP_BUILD !== '1') {
   console.log('Building the client…');
   await build({ logLevel: 'warn' });
 }
-const app = createApp({ sequelize, databaseUrl: db.url, config, clientDir: 'dist/client' });
+const mail = await provideMailer();
+console.log(
+  mail.fake
+    ? `Mail: local SMTP fake on ${mail.fake.url} (inbox at /inbox for the plant manager)`
+    : 'Mail: SMTP_URL',
+);
+const app = createApp({
+  sequelize,
+  databaseUrl: db.url,
+  config,
+  clientDir: 'dist/client',
+  mailer: mail,
+});
 const server = app.listen(config.port, config.host, () => {
   console.log(`\nSpanwise is running at http://${config.host}:${config.port}`);
   if (config.demo) {
@@ -48,6 +61,7 @@ async function stop() {
   server.close();
   server.closeAllConnections();
   await app.locals.close();
+  await mail.fake?.close();
   await sequelize.close();
   db.stop();
   console.log('Stopped app and database.');

@@ -20,6 +20,8 @@ import { plantRouter } from './routes/plant/router';
 import { ordersRouter } from './routes/orders/router';
 import { reviewsRouter } from './routes/reviews/router';
 import { designsRouter } from './routes/designs/router';
+import { devRouter } from './routes/dev/router';
+import type { Mailer } from './services/mail';
 
 export interface AppOptions {
   sequelize: Sequelize;
@@ -27,6 +29,8 @@ export interface AppOptions {
   config?: Partial<Config>;
   /** Folder of the built client (served with an SPA fallback) — omitted in API-only tests. */
   clientDir?: string;
+  /** Outgoing mail (SMTP_URL or the local fake); without it, sending answers 503. */
+  mailer?: Mailer;
 }
 
 /** The whole HTTP app, without a listener, so tests drive it with supertest. */
@@ -51,6 +55,7 @@ export function createApp(opts: AppOptions) {
   const pool = new pg.Pool({ connectionString: opts.databaseUrl, max: 5 });
   const PgStore = connectPgSimple(session);
   const store = new PgStore({ pool, tableName: 'session', pruneSessionInterval: 15 * 60 });
+  app.locals.mailer = opts.mailer ?? null;
   app.locals.close = async () => {
     store.close();
     await pool.end().catch(() => undefined);
@@ -94,6 +99,7 @@ export function createApp(opts: AppOptions) {
   app.use('/api/orders', ordersRouter());
   app.use('/api/reviews', reviewsRouter());
   app.use('/api/designs', designsRouter());
+  app.use('/api/dev', devRouter(opts.mailer ?? null));
   app.use('/api', apiNotFound);
 
   const clientDir = opts.clientDir ? resolve(opts.clientDir) : null;

@@ -1,6 +1,8 @@
 import type { Sequelize } from 'sequelize';
 import { connect } from '../../server/db/sequelize';
 import { createApp } from '../../server/app';
+import { createMailer, type Mailer } from '../../server/services/mail';
+import { startSmtpFake } from '../../server/services/smtpFake';
 
 /** The database `npm test` started (scripts/test.ts sets TEST_DATABASE_URL). */
 export function testDatabaseUrl() {
@@ -18,16 +20,28 @@ export function testSequelize() {
   return shared;
 }
 
+let mailer: Mailer | null = null;
+
+/** The test worker's local SMTP fake (started on a free port on first use) and its mailer. */
+export async function testMailer() {
+  if (!mailer) {
+    const fake = await startSmtpFake(0);
+    mailer = createMailer({ url: fake.url, fake });
+  }
+  return mailer;
+}
+
 /** A fresh app on the test database; options override config (e.g. the sign-in limit). */
 export function testApp(
   config: Parameters<typeof createApp>[0]['config'] = {},
   clientDir?: string,
+  mail?: Mailer,
 ) {
-  const sequelize = testSequelize();
   return createApp({
-    sequelize,
+    sequelize: testSequelize(),
     databaseUrl: testDatabaseUrl(),
     config: { demo: false, loginAttemptsPer15Min: 1000, ...config },
     clientDir,
+    mailer: mail,
   });
 }
