@@ -129,7 +129,8 @@ export interface PresentedDesign {
 
 const round = (v: number, digits: number) => {
   const f = 10 ** digits;
-  return Math.round(v * f) / f;
+  // + 0 turns −0 (a support's zero drop, a tiny negative) into 0 for JSON.
+  return Math.round(v * f) / f + 0;
 };
 
 /**
