@@ -45,3 +45,34 @@ export function FilterSelect({
 export function ListToolbar({ children }: { children: ReactNode }) {
   return <div className="mb-4 flex flex-wrap items-end gap-3">{children}</div>;
 }
+
+/** Props of {@link RecordFilter}. `choices` is undefined while they load. */
+export interface RecordFilterProps {
+  id: string;
+  label: string;
+  allLabel: string;
+  choices: readonly { id: number; name: string }[] | undefined;
+  value: number | undefined;
+  /** The record id as URL text, or '' for "all". */
+  onChange: (value: string) => void;
+}
+
+/** A {@link FilterSelect} over named records (e.g. builder companies), keyed by id. */
+export function RecordFilter({ id, label, allLabel, choices, value, onChange }: RecordFilterProps) {
+  return (
+    <FilterSelect
+      id={id}
+      label={label}
+      allLabel={choices ? allLabel : 'Loading…'}
+      value={value ? String(value) : ''}
+      disabled={!choices}
+      onChange={onChange}
+    >
+      {choices?.map((c) => (
+        <option key={c.id} value={c.id}>
+          {c.name}
+        </option>
+      ))}
+    </FilterSelect>
+  );
+}

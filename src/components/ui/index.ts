@@ -26,5 +26,5 @@ export type { TextLinkProps, LinkButtonProps } from './TextLink';
 export { Textarea } from './Textarea';
 export { DetailList } from './DetailList';
 export type { DetailItem } from './DetailList';
-export { FilterSelect, ListToolbar } from './FilterSelect';
-export type { FilterSelectProps } from './FilterSelect';
+export { FilterSelect, ListToolbar, RecordFilter } from './FilterSelect';
+export type { FilterSelectProps, RecordFilterProps } from './FilterSelect';

@@ -3,11 +3,11 @@ import {
   Card,
   DataTable,
   EmptyState,
-  FilterSelect,
   ListToolbar,
   PageHeader,
   Pager,
   QueryState,
+  RecordFilter,
   SearchBox,
 } from '../../../components/ui';
 import { useBuilderChoices } from '../../../lib/builder-choices';
@@ -38,20 +38,14 @@ export function JobsPage({ role }: { role: Role }) {
           onSearch={(q) => update({ q, page: 1 })}
         />
         {showBuilders ? (
-          <FilterSelect
+          <RecordFilter
             id="filter-builder"
             label="Builder"
-            allLabel={builders.isPending ? 'Loading builders…' : 'All builders'}
-            value={query.customerId ? String(query.customerId) : ''}
-            disabled={builders.isPending}
+            allLabel="All builders"
+            choices={builders.data?.items}
+            value={query.customerId}
             onChange={(customerId) => update({ filters: { customerId } })}
-          >
-            {builders.data?.items.map((c) => (
-              <option key={c.id} value={c.id}>
-                {c.name}
-              </option>
-            ))}
-          </FilterSelect>
+          />
         ) : null}
       </ListToolbar>
       <Card flush>

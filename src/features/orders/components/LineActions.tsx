@@ -26,7 +26,7 @@ export function LineActions({
   onMove,
 }: LineActionsProps) {
   return (
-    <div className="flex flex-wrap items-center gap-1">
+    <div className="flex flex-nowrap items-center gap-0.5">
       <LinkButton
         size="sm"
         variant="secondary"

@@ -53,7 +53,10 @@ const baseColumns = [
     header: 'Plies',
     cell: (info) => <span className="tabular-nums">{info.getValue()}</span>,
   }),
-  column.accessor('description', { header: 'Description' }),
+  column.accessor('description', {
+    header: 'Description',
+    cell: (info) => <span className="whitespace-nowrap">{info.getValue()}</span>,
+  }),
   column.display({
     id: 'design',
     header: 'Design',

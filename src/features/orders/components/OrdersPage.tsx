@@ -9,6 +9,7 @@ import {
   PageHeader,
   Pager,
   QueryState,
+  RecordFilter,
   SearchBox,
 } from '../../../components/ui';
 import { useBuilderChoices } from '../../../lib/builder-choices';
@@ -57,20 +58,14 @@ export function OrdersPage({ role }: { role: Role }) {
           ))}
         </FilterSelect>
         {showBuilders ? (
-          <FilterSelect
+          <RecordFilter
             id="filter-builder"
             label="Builder"
-            allLabel={builders.isPending ? 'Loading builders…' : 'All builders'}
-            value={query.customerId ? String(query.customerId) : ''}
-            disabled={builders.isPending}
+            allLabel="All builders"
+            choices={builders.data?.items}
+            value={query.customerId}
             onChange={(customerId) => update({ filters: { customerId } })}
-          >
-            {builders.data?.items.map((c) => (
-              <option key={c.id} value={c.id}>
-                {c.name}
-              </option>
-            ))}
-          </FilterSelect>
+          />
         ) : null}
       </ListToolbar>
       <Card flush>

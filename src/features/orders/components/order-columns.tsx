@@ -12,7 +12,11 @@ export const ORDER_SORT_COLUMNS = ['number', 'createdAt', 'updatedAt'] as const;
 export const orderColumns = column.columns([
   column.accessor('number', {
     header: 'Order',
-    cell: (info) => <TextLink to={`/orders/${info.row.original.id}`}>{info.getValue()}</TextLink>,
+    cell: (info) => (
+      <TextLink className="whitespace-nowrap" to={`/orders/${info.row.original.id}`}>
+        {info.getValue()}
+      </TextLink>
+    ),
   }),
   column.accessor('status', {
     header: 'Status',
