@@ -82,7 +82,7 @@ function DeflectionRow({
       <td className={cell}>
         {label} <span className="text-xs text-sand-600">({d.load})</span>
       </td>
-      <td className={cell}>
+      <td className={`${cell} whitespace-nowrap`}>
         {formatPresentedDeflection(d.max, unit)} at {d.joint}
       </td>
       <td className={cell}>{d.ratio === null ? 'no deflection' : `L/${d.ratio}`}</td>
@@ -99,23 +99,24 @@ export function SupportsAndDeflection({ design }: { design: PresentedDesign }) {
   return (
     <div className="grid gap-4 lg:grid-cols-2">
       <Card title="Reactions" flush>
-        <SimpleTable caption="Reactions" headers={['Support', 'Max down', 'Max up', 'Bearing']}>
+        <SimpleTable
+          caption="Reactions"
+          headers={['Support', 'Max down', 'Max up', 'Bearing', 'Ratio', '']}
+        >
           {design.reactions.map((r) => {
             const b = bearingOf.get(r.joint);
             return (
               <tr key={r.joint}>
                 <td className={`${cell} font-semibold`}>{r.joint}</td>
-                <td className={cell}>{formatPresentedForce(r.maxDown, f)}</td>
-                <td className={cell}>{r.maxUp > 0 ? formatPresentedForce(r.maxUp, f) : '—'}</td>
-                <td className={cell}>
-                  {b ? (
-                    <span className="flex items-center gap-2">
-                      {b.width.text}, ratio {formatCsi(b.ratio)} {passBadge(b.pass)}
-                    </span>
-                  ) : (
-                    '—'
-                  )}
+                <td className={`${cell} whitespace-nowrap`}>
+                  {formatPresentedForce(r.maxDown, f)}
                 </td>
+                <td className={`${cell} whitespace-nowrap`}>
+                  {r.maxUp > 0 ? formatPresentedForce(r.maxUp, f) : '—'}
+                </td>
+                <td className={`${cell} whitespace-nowrap`}>{b ? b.width.text : '—'}</td>
+                <td className={cell}>{b ? formatCsi(b.ratio) : '—'}</td>
+                <td className={cell}>{b ? passBadge(b.pass) : null}</td>
               </tr>
             );
           })}

@@ -52,11 +52,23 @@ export function DrawingDimensions({ model, units, transform: t, tips }: DrawingD
               strokeDasharray="3 3"
             />
             <text
-              x={(x1 + x2) / 2}
+              x={
+                seg.key === 'overhangLeft'
+                  ? x2 - 4
+                  : seg.key === 'overhangRight'
+                    ? x1 + 4
+                    : (x1 + x2) / 2
+              }
               y={lineY + 18}
-              textAnchor="middle"
+              textAnchor={
+                seg.key === 'overhangLeft'
+                  ? 'end'
+                  : seg.key === 'overhangRight'
+                    ? 'start'
+                    : 'middle'
+              }
               stroke="none"
-              className="font-medium"
+              className={seg.key === 'span' ? 'font-semibold' : undefined}
             >
               {seg.label}
             </text>
@@ -99,7 +111,7 @@ function PitchMark(props: { t: ScreenTransform; a: Point; b: Point; rise: string
   const run24 = 30;
   // A small right triangle above the chord: run along x, rise up, hypotenuse parallel to it.
   const x0 = p.x;
-  const y0 = p.y - 26;
+  const y0 = p.y - 34;
   const x1 = x0 + run24;
   const y1 = y0 + slope * run24;
   return (

@@ -64,16 +64,20 @@ export const CSI_BANDS: readonly CsiBand[] = [
 ];
 
 /**
- * The band of a combined stress index. Rounded to two decimals first so a member shown as
- * "1.00" in the table is never drawn as failing; NaN (no result) counts as failing, never as safe.
+ * The band of a combined stress index. A member fails above 1.00 exactly, as the engine
+ * decides; NaN (no result) counts as failing, never as safe.
  */
 export function csiBand(csi: number): CsiBand {
   if (!Number.isFinite(csi)) return CSI_BANDS[CSI_BANDS.length - 1];
-  const shown = Math.round(csi * 100) / 100;
-  return CSI_BANDS.find((b) => shown <= b.upTo) ?? CSI_BANDS[CSI_BANDS.length - 1];
+  return CSI_BANDS.find((b) => csi <= b.upTo) ?? CSI_BANDS[CSI_BANDS.length - 1];
 }
 
-/** CSI as the tables show it: two decimals ("0.87"); "—" when there is no result. */
+/**
+ * CSI as the tables show it: two decimals ("0.87"); "—" when there is no result. A failing
+ * index that would round to "1.00" shows as "> 1.00", so the text never contradicts the verdict.
+ */
 export function formatCsi(csi: number | undefined | null): string {
-  return csi === undefined || csi === null || !Number.isFinite(csi) ? '—' : csi.toFixed(2);
+  if (csi === undefined || csi === null || !Number.isFinite(csi)) return '—';
+  const text = csi.toFixed(2);
+  return csi > 1 && Number(text) <= 1 ? '> 1.00' : text;
 }

@@ -1,3 +1,4 @@
+import { csiBand } from './csi';
 import type { DrawingModel } from './model';
 import { formatLength, formatPitch, type PlantUnits } from './quantities';
 
@@ -38,14 +39,20 @@ export function pitchSymbol(model: DrawingModel): { rise: string; run: string } 
   return { rise: formatPitch(model.pitch).replace('/12', ''), run: '12' };
 }
 
-/** A one-line description for the drawing's accessible name. */
+/**
+ * A one-line description for the drawing's accessible name, e.g. `Fink (W) truss drawing,
+ * 28'-0" out to out, 6/12, all members pass`. It avoids the words of the form's field labels
+ * ("Span", "Pitch", "Mark") so a label lookup finds the field, not the drawing.
+ */
 export function drawingTitle(kindLabel: string, model: DrawingModel, units: PlantUnits): string {
-  const parts = [`${kindLabel} truss`, `span ${formatLength(model.span, units)}`];
-  if (model.pitch !== undefined) parts.push(`pitch ${formatPitch(model.pitch)}`);
-  if (model.heelHeight > 0) parts.push(`heel ${formatLength(model.heelHeight, units)}`);
-  const failing = model.members.filter((m) => m.csi !== undefined && m.csi > 1).length;
+  const parts = [`${kindLabel} truss drawing`, `${formatLength(model.span, units)} out to out`];
+  if (model.pitch !== undefined) parts.push(formatPitch(model.pitch));
+  if (model.heelHeight > 0) parts.push(`${formatLength(model.heelHeight, units)} heel`);
+  const failing = model.members.filter((m) => m.csi !== undefined && csiBand(m.csi).fails).length;
   if (model.members.some((m) => m.csi !== undefined)) {
-    parts.push(failing > 0 ? `${failing} members fail` : 'all members pass');
+    parts.push(
+      failing > 0 ? `${failing} of ${model.members.length} members fail` : 'all members pass',
+    );
   }
   return parts.join(', ');
 }

@@ -203,7 +203,16 @@ export function TrussEditor({
                 )}
               </div>
             </Card>
-            {presented ? <DesignResults design={presented} /> : null}
+            {presented ? (
+              <div className={live.stale && !fallback ? 'opacity-50' : undefined}>
+                {live.stale && !fallback ? (
+                  <p role="status" className="mb-2 text-sm font-medium text-warning-800">
+                    These results belong to the last valid truss, not to the fields as they are now.
+                  </p>
+                ) : null}
+                <DesignResults design={presented} />
+              </div>
+            ) : null}
           </div>
         </div>
       </form>
