@@ -21,6 +21,7 @@ import { ordersRouter } from './routes/orders/router';
 import { reviewsRouter } from './routes/reviews/router';
 import { designsRouter } from './routes/designs/router';
 import { devRouter } from './routes/dev/router';
+import { filesRouter } from './routes/files/router';
 import type { Mailer } from './services/mail';
 
 export interface AppOptions {
@@ -100,6 +101,7 @@ export function createApp(opts: AppOptions) {
   app.use('/api/reviews', reviewsRouter());
   app.use('/api/designs', designsRouter());
   app.use('/api/dev', devRouter(opts.mailer ?? null));
+  app.use('/api', filesRouter());
   app.use('/api', apiNotFound);
 
   const clientDir = opts.clientDir ? resolve(opts.clientDir) : null;
