@@ -42,10 +42,18 @@ describe('subtractConvex', () => {
         const subject = ringOf(own);
         const cutters = cuts.map(ringOf);
         const ours = cutters.reduce(subtractConvex, [subject]);
-        const theirs = polygonClipping.difference(
-          [[close(subject)]],
-          ...cutters.map((c) => [[close(c)]]),
-        );
+        let theirs: ReturnType<typeof polygonClipping.difference>;
+        try {
+          theirs = polygonClipping.difference(
+            [[close(subject)]],
+            ...cutters.map((c) => [[close(c)]]),
+          );
+        } catch {
+          // The library itself gives up on some near-degenerate inputs (e.g. bands sharing an
+          // edge to 1e-16): there is no reference answer for those.
+          fc.pre(false);
+          return;
+        }
         const area = ours.reduce((s, p) => s + Math.abs(signedArea(p)), 0);
         expect(area).toBeWithin(libraryArea(theirs as [number, number][][][]), {
           rel: 1e-7,
@@ -54,7 +62,7 @@ describe('subtractConvex', () => {
         // Every piece is convex and counter-clockwise.
         for (const p of ours) expect(signedArea(p)).toBeGreaterThan(0);
       }),
-      { numRuns: 200 },
+      { numRuns: 300 },
     );
   });
 
