@@ -161,7 +161,7 @@ export interface TrussDesign {
   /** True when the plates come from a demo catalog with invented values. */
   demoPlates: boolean;
   bearing: DesignBearing[];
-  /** Things that fail or need attention; empty when the design passes. */
+  /** Things that fail or need attention (failing checks, ignored input); empty when all is well. */
   warnings: string[];
   /** Assumptions made, in words. */
   notes: string[];
