@@ -147,6 +147,7 @@ export interface QuotePrice {
   lines: QuoteLine[];
   subtotal: number;
   delivery: number;
+  taxRate: number;
   tax: number;
   total: number;
   depositRate: number;
@@ -169,6 +170,7 @@ export function priceQuote(
     lines: priced,
     subtotal,
     delivery,
+    taxRate: book.taxRate,
     tax,
     total,
     depositRate,

@@ -1,0 +1,221 @@
+import type { Transaction } from 'sequelize';
+import { DESIGN_CAUTIONS, type PresentedDesign } from '../../shared/engine/design';
+import { Customer, Job, Order, OrderLine, Plant, Quote, type User } from '../models';
+import { AppError, conflict } from '../errors';
+import type { Mailer } from '../services/mail';
+import { priceQuote, summarizeDesign, type QuoteSnapshot } from '../services/pricing';
+import { renderQuotePdf } from '../services/quotePdf';
+import { formatMoney, formatDate } from '../services/quotePdf/format';
+import { audit } from './audit';
+import { pricesFor } from './priceBook';
+
+/** Orders that may take a new quote revision: a draft, or one already quoted. */
+const QUOTABLE = new Set(['draft', 'quoted']);
+
+/** An order history event (and the order marked as touched), inside the command's transaction. */
+async function orderEvent(
+  t: Transaction,
+  actor: User,
+  order: Order,
+  action: string,
+  data: Record<string, unknown>,
+) {
+  await Order.sequelize!.query('UPDATE orders SET updated_at = now() WHERE id = :id', {
+    replacements: { id: order.id },
+    transaction: t,
+  });
+  await audit(t, {
+    plantId: order.plantId,
+    actorId: actor.id,
+    action,
+    subjectType: 'order',
+    subjectId: order.id,
+    data,
+  });
+}
+
+const isoDate = (d: Date) => d.toISOString().slice(0, 10);
+const addDays = (d: Date, days: number) => new Date(d.getTime() + days * 86_400_000);
+
+/** Why an order's lines cannot be quoted yet, or null when they can. */
+function quoteRefusal(lines: OrderLine[]): string | null {
+  if (lines.length === 0) return 'This order has no truss lines to quote yet.';
+  const failing = lines.filter((l) => !l.designOk).map((l) => l.mark);
+  if (failing.length === 0) return null;
+  const which = failing.length === 1 ? `the design of ${failing[0]} fails` : '';
+  const many = `the designs of ${failing.join(', ')} fail`;
+  return `Cannot quote while ${which || many} its checks. Fix or remove ${failing.join(', ')} first.`;
+}
+
+/**
+ * Write the next immutable quote revision of an order (1, 2, …; "<order number>-Q<n>") from its
+ * stored line designs and the plant's price book; the order becomes `quoted`.
+ */
+export async function createQuote(actor: User, order: Order) {
+  return Order.sequelize!.transaction(async (t) => {
+    // The order row lock serialises revision numbers and keeps lines still while they are priced.
+    const locked = await Order.findByPk(order.id, { transaction: t, lock: t.LOCK.UPDATE });
+    if (!locked) throw conflict('The order no longer exists.');
+    if (!QUOTABLE.has(locked.status))
+      throw conflict(
+        `This order is ${locked.status.replace('_', ' ')}; it cannot be quoted again.`,
+      );
+    const lines = await OrderLine.findAll({
+      where: { orderId: order.id },
+      order: [
+        ['position', 'ASC'],
+        ['id', 'ASC'],
+      ],
+      transaction: t,
+    });
+    const refusal = quoteRefusal(lines);
+    if (refusal) throw conflict(refusal);
+
+    const [customer, job, plant, prices, last] = await Promise.all([
+      Customer.findByPk(locked.customerId, { transaction: t }),
+      Job.findByPk(locked.jobId, { transaction: t }),
+      Plant.findByPk(locked.plantId, { transaction: t }),
+      pricesFor(locked.plantId, t),
+      Quote.max('number', { where: { orderId: order.id }, transaction: t }) as Promise<
+        number | null
+      >,
+    ]);
+    const designs = lines.map((l) => ({
+      line: l,
+      design: l.designResult as unknown as PresentedDesign,
+    }));
+    const price = priceQuote(
+      designs.map(({ line, design }) => ({
+        mark: line.mark,
+        description: line.description,
+        quantity: line.quantity,
+        plies: line.plies,
+        design,
+      })),
+      prices.book,
+      customer!.terms,
+    );
+    const snapshot: QuoteSnapshot = {
+      currency: prices.book.currency,
+      units: plant!.units,
+      plant: { name: plant!.name, address: plant!.address },
+      customer: {
+        id: customer!.id,
+        name: customer!.name,
+        email: customer!.email,
+        terms: customer!.terms,
+      },
+      job: { id: job!.id, name: job!.name, address: job!.address },
+      order: { id: locked.id, number: locked.number },
+      price,
+      designs: designs.map(({ line, design }) =>
+        summarizeDesign({
+          mark: line.mark,
+          description: line.description,
+          maxCsi: line.maxCsi,
+          reviewState: line.reviewState,
+          engineVersion: line.engineVersion,
+          designInput: line.designInput,
+          design,
+        }),
+      ),
+      terms: prices.book.terms,
+      cautions: [...DESIGN_CAUTIONS],
+      demoPrices: prices.demo,
+    };
+    const number = (last ?? 0) + 1;
+    const createdAt = new Date();
+    const quote = await Quote.create(
+      {
+        plantId: locked.plantId,
+        orderId: locked.id,
+        number,
+        reference: `${locked.number}-Q${number}`,
+        snapshot: snapshot as unknown as Record<string, unknown>,
+        total: price.total,
+        depositDue: price.depositDue,
+        validUntil: isoDate(addDays(createdAt, prices.book.quoteValidityDays)),
+        createdBy: actor.id,
+        createdAt,
+      },
+      { transaction: t },
+    );
+    await locked.update({ status: 'quoted' }, { transaction: t });
+    await orderEvent(t, actor, locked, 'quote.created', {
+      quoteId: quote.id,
+      number,
+      reference: quote.reference,
+      total: price.total,
+      currency: snapshot.currency,
+      demoPrices: prices.demo,
+    });
+    return quote;
+  });
+}
+
+/** The plain-text e-mail of a quote: reference, total, deposit, validity and the cautions. */
+export function quoteMessage(quote: Quote) {
+  const s = quote.snapshot as unknown as QuoteSnapshot;
+  const money = (v: number) => formatMoney(v, s.currency);
+  const deposit =
+    s.price.depositDue > 0
+      ? `Deposit due on acceptance: ${money(s.price.depositDue)}.`
+      : 'No deposit is due: your account terms apply.';
+  return {
+    subject: `Truss quote ${quote.reference} — ${s.job.name}`,
+    text: [
+      `Hello ${s.customer.name},`,
+      '',
+      `Please find attached our quote ${quote.reference} for ${s.job.name} (${s.job.address}).`,
+      '',
+      `Total: ${money(s.price.total)} (including delivery and tax).`,
+      deposit,
+      `Valid until: ${formatDate(quote.validUntil)}.`,
+      '',
+      s.cautions.join(' '),
+      '',
+      s.plant.name,
+    ].join('\n'),
+  };
+}
+
+/**
+ * E-mail the latest revision to the builder company with the PDF attached, then record when and to
+ * whom it went (the only columns a quote lets change). 503 without a mailer.
+ */
+export async function sendQuote(actor: User, order: Order, quote: Quote, mailer: Mailer | null) {
+  if (!mailer)
+    throw new AppError(
+      503,
+      'mail_unavailable',
+      'E-mail is not configured on this server; the quote was not sent.',
+    );
+  const latest = (await Quote.max('number', { where: { orderId: order.id } })) as number;
+  if (quote.number !== latest)
+    throw conflict(
+      `${quote.reference} is superseded by revision ${latest}; send the latest quote.`,
+    );
+  if (order.status === 'draft')
+    throw conflict('The order changed after this quote; make a new revision before sending it.');
+  const customer = await Customer.findByPk(order.customerId);
+  const to = customer!.email;
+  const pdf = await renderQuotePdf(quote);
+  const message = quoteMessage(quote);
+  await mailer.send({
+    to,
+    ...message,
+    attachments: [
+      { filename: `${quote.reference}.pdf`, content: pdf, contentType: 'application/pdf' },
+    ],
+  });
+  return Order.sequelize!.transaction(async (t) => {
+    await quote.update({ sentAt: new Date(), sentTo: to }, { transaction: t });
+    await orderEvent(t, actor, order, 'quote.sent', {
+      quoteId: quote.id,
+      number: quote.number,
+      reference: quote.reference,
+      to,
+    });
+    return quote;
+  });
+}
