@@ -21,6 +21,8 @@ import { ordersRouter } from './routes/orders/router';
 import { reviewsRouter } from './routes/reviews/router';
 import { designsRouter } from './routes/designs/router';
 import { devRouter } from './routes/dev/router';
+import { priceBookRouter } from './routes/priceBook/router';
+import { quotesRouter } from './routes/quotes/router';
 import { filesRouter } from './routes/files/router';
 import type { Mailer } from './services/mail';
 
@@ -97,7 +99,9 @@ export function createApp(opts: AppOptions) {
   app.use('/api/customers', customersRouter());
   app.use('/api/jobs', jobsRouter());
   app.use('/api/plant', plantRouter());
+  app.use('/api/orders/:id/quotes', quotesRouter());
   app.use('/api/orders', ordersRouter());
+  app.use('/api/price-book', priceBookRouter());
   app.use('/api/reviews', reviewsRouter());
   app.use('/api/designs', designsRouter());
   app.use('/api/dev', devRouter(opts.mailer ?? null));

@@ -27,14 +27,26 @@ async function orderEvent(
   });
 }
 
-/** Lock the order row so concurrent line writes keep positions and numbers consistent. */
-const lockOrder = (order: Order, t: Transaction) =>
-  Order.findByPk(order.id, { transaction: t, lock: t.LOCK.UPDATE }).then((o) => {
-    if (!o) throw conflict('The order no longer exists.');
-    if (o.status !== 'draft')
-      throw conflict('Only a draft order’s lines can change; start a new quote revision.');
-    return o;
-  });
+/**
+ * Lock the order row so concurrent line writes keep positions and numbers consistent. A quoted
+ * order's lines may change too: it goes back to draft (its quotes stay as written; the next quote
+ * is a new revision) and its history says so.
+ */
+const lockOrder = async (order: Order, t: Transaction, actor: User) => {
+  const o = await Order.findByPk(order.id, { transaction: t, lock: t.LOCK.UPDATE });
+  if (!o) throw conflict('The order no longer exists.');
+  if (o.status === 'quoted') {
+    await o.update({ status: 'draft' }, { transaction: t });
+    await orderEvent(t, actor, o, 'order.reopened', {
+      from: 'quoted',
+      reason: 'Lines changed after quoting; the next quote is a new revision.',
+    });
+  } else if (o.status !== 'draft') {
+    throw conflict('Only a draft or quoted order’s lines can change.');
+  }
+  order.status = o.status;
+  return o;
+};
 
 const designColumns = (d: ComputedDesign) => ({
   profile: d.profile,
@@ -72,7 +84,7 @@ export async function createOrder(actor: User, job: Job) {
 export async function addLine(actor: User, order: Order, input: CreateLineInput) {
   const design = computeDesign(input.design, { plies: input.plies });
   return Order.sequelize!.transaction(async (t) => {
-    await lockOrder(order, t);
+    await lockOrder(order, t, actor);
     const max = (await OrderLine.max('position', {
       where: { orderId: order.id },
       transaction: t,
@@ -114,7 +126,7 @@ export async function updateLine(
   const plies = input.plies ?? line.plies;
   const design = redesign ? computeDesign(input.design ?? line.designInput, { plies }) : null;
   return Order.sequelize!.transaction(async (t) => {
-    await lockOrder(order, t);
+    await lockOrder(order, t, actor);
     const changes: Partial<OrderLine> = {};
     if (input.mark !== undefined) changes.mark = input.mark;
     if (input.quantity !== undefined) changes.quantity = input.quantity;
@@ -160,7 +172,7 @@ const conflictLocked = () =>
 /** Remove a line from a draft order. */
 export async function deleteLine(actor: User, order: Order, line: OrderLine) {
   return Order.sequelize!.transaction(async (t) => {
-    await lockOrder(order, t);
+    await lockOrder(order, t, actor);
     await line.destroy({ transaction: t });
     await orderEvent(t, actor, order, 'line.deleted', {
       lineId: line.id,
@@ -183,7 +195,7 @@ async function nextMark(orderId: number, t: Transaction) {
 export async function copyLine(actor: User, order: Order, line: OrderLine) {
   const design = computeDesign(line.designInput, { plies: line.plies });
   return Order.sequelize!.transaction(async (t) => {
-    await lockOrder(order, t);
+    await lockOrder(order, t, actor);
     const max = (await OrderLine.max('position', {
       where: { orderId: order.id },
       transaction: t,
@@ -211,7 +223,7 @@ export async function copyLine(actor: User, order: Order, line: OrderLine) {
 /** Put the order's lines in the given order (every line id exactly once). */
 export async function reorderLines(actor: User, order: Order, lineIds: number[]) {
   return Order.sequelize!.transaction(async (t) => {
-    await lockOrder(order, t);
+    await lockOrder(order, t, actor);
     const lines = await OrderLine.findAll({ where: { orderId: order.id }, transaction: t });
     const ids = new Set(lines.map((l) => l.id));
     if (

@@ -42,11 +42,14 @@ const loadLine: RequestHandler = handle(async (req, res, next) => {
   next();
 });
 
-/** A draft order's lines change; any other status answers 409 with the reason. */
+/**
+ * A draft order's lines change, and a quoted one's (the command turns it back to draft for a new
+ * quote revision); any other status answers 409 with the reason.
+ */
 const requireDraft: RequestHandler = (req, res, next) =>
-  isDraft(req.user!, res.locals.record)
+  isDraft(req.user!, res.locals.record) || (res.locals.record as Order).status === 'quoted'
     ? next()
-    : next(conflict('Only a draft order’s lines can change.'));
+    : next(conflict('Only a draft or quoted order’s lines can change.'));
 
 const order = load('Order', findOrder);
 

@@ -1,0 +1,1 @@
+export { priceBookSchema, type PriceBook } from '../../../shared/api/pricing';

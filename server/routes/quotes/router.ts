@@ -1,0 +1,118 @@
+import { Router, type RequestHandler } from 'express';
+import { requireUser } from '../../middleware/auth';
+import { authorize } from '../../policies/predicates';
+import { quotePolicy } from '../../policies/quote';
+import { createQuote, sendQuote } from '../../commands/quotes';
+import { Quote, User, type Order } from '../../models';
+import { notFound } from '../../errors';
+import { presentQuote } from '../../presenters/quote';
+import { renderQuotePdf } from '../../services/quotePdf';
+import { findOrder } from '../orders/queries';
+import { handle, load } from '../load';
+
+const order = load('Order', findOrder);
+const withCreator = [{ model: User, as: 'creator' }];
+
+/** The order's revisions, newest first. */
+const revisions = (o: Order) =>
+  Quote.findAll({
+    where: { orderId: o.id, plantId: o.plantId },
+    include: withCreator,
+    order: [['number', 'DESC']],
+  });
+
+/** load (second step): the revision named by :number within the loaded (scoped) order. */
+const loadQuote: RequestHandler = handle(async (req, res, next) => {
+  const o = res.locals.record as Order;
+  const raw = req.params.number;
+  const number = typeof raw === 'string' && /^\d{1,6}$/.test(raw) ? Number(raw) : null;
+  const quote = number
+    ? await Quote.findOne({
+        where: { orderId: o.id, plantId: o.plantId, number },
+        include: withCreator,
+      })
+    : null;
+  if (!quote) return next(notFound('Quote'));
+  res.locals.quote = quote;
+  next();
+});
+
+const isSuperseded = async (q: Quote) =>
+  ((await Quote.max('number', { where: { orderId: q.orderId } })) as number) > q.number;
+
+/** Quote revisions of an order, their PDF, and sending them to the builder. */
+export function quotesRouter() {
+  const router = Router({ mergeParams: true });
+
+  router.get(
+    '/',
+    requireUser,
+    order,
+    authorize(quotePolicy.list),
+    handle(async (_req, res) => {
+      const list = await revisions(res.locals.record);
+      res.json(list.map((q, i) => presentQuote(q, i > 0)));
+    }),
+  );
+
+  router.post(
+    '/',
+    requireUser,
+    order,
+    authorize(quotePolicy.create),
+    handle(async (req, res) => {
+      const created = await createQuote(req.user!, res.locals.record);
+      const quote = await Quote.findByPk(created.id, { include: withCreator });
+      res.status(201).json(presentQuote(quote!, false));
+    }),
+  );
+
+  router.get(
+    '/:number',
+    requireUser,
+    order,
+    loadQuote,
+    authorize(quotePolicy.show),
+    handle(async (_req, res) => {
+      const quote = res.locals.quote as Quote;
+      res.json(presentQuote(quote, await isSuperseded(quote)));
+    }),
+  );
+
+  router.get(
+    '/:number/pdf',
+    requireUser,
+    order,
+    loadQuote,
+    authorize(quotePolicy.show),
+    handle(async (_req, res) => {
+      const quote = res.locals.quote as Quote;
+      const pdf = await renderQuotePdf(quote);
+      res
+        .status(200)
+        .type('application/pdf')
+        .set('Content-Disposition', `inline; filename="${quote.reference}.pdf"`)
+        .set('Cache-Control', 'private, no-store')
+        .send(pdf);
+    }),
+  );
+
+  router.post(
+    '/:number/send',
+    requireUser,
+    order,
+    loadQuote,
+    authorize(quotePolicy.send),
+    handle(async (req, res) => {
+      const sent = await sendQuote(
+        req.user!,
+        res.locals.record,
+        res.locals.quote,
+        req.app.locals.mailer ?? null,
+      );
+      res.json(presentQuote(sent, false));
+    }),
+  );
+
+  return router;
+}

@@ -1,0 +1,1 @@
+export { quoteSchema, type Quote } from '../../../shared/api/pricing';
