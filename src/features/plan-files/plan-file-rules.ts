@@ -1,0 +1,58 @@
+import { MAX_UPLOAD_BYTES, type StoredFile } from '../../../shared/api/pricing';
+
+/** The server's refusal of any other type (`415 unsupported_type`); shown before sending, too. */
+export const UNSUPPORTED_TYPE_MESSAGE = 'Upload a PDF, PNG or JPEG plan';
+/** The server's refusal of a file over 25 MB (`413 too_large`). */
+export const TOO_LARGE_MESSAGE = 'The plan is larger than 25 MB. Upload a file of at most 25 MB.';
+
+/** What the file picker offers: the three plan types by extension and by MIME type. */
+export const PLAN_FILE_ACCEPT = '.pdf,.png,.jpg,.jpeg,application/pdf,image/png,image/jpeg';
+
+const EXTENSIONS = new Set(['pdf', 'png', 'jpg', 'jpeg']);
+const MIME_TYPES = new Set(['application/pdf', 'image/png', 'image/jpeg']);
+
+/** The few fields of a browser `File` the pre-check reads. */
+export interface FileFacts {
+  name: string;
+  type: string;
+  size: number;
+}
+
+/**
+ * The same refusals as the server, before any byte is sent. Only a courtesy: the server still
+ * sniffs the real type from the content, so a wrongly named file is caught there.
+ */
+export function precheckPlanFile(file: FileFacts): string | null {
+  const ext = file.name.includes('.') ? file.name.split('.').pop()!.toLowerCase() : '';
+  if (!EXTENSIONS.has(ext) && !MIME_TYPES.has(file.type.toLowerCase()))
+    return UNSUPPORTED_TYPE_MESSAGE;
+  if (file.size > MAX_UPLOAD_BYTES) return TOO_LARGE_MESSAGE;
+  return null;
+}
+
+const TYPE_LABELS: Record<StoredFile['contentType'], string> = {
+  'application/pdf': 'PDF',
+  'image/png': 'PNG',
+  'image/jpeg': 'JPEG',
+};
+
+/** Short name of a stored plan's type ("PDF"). */
+export function planTypeLabel(contentType: StoredFile['contentType']): string {
+  return TYPE_LABELS[contentType] ?? contentType;
+}
+
+/**
+ * A size people read: bytes, then KB and MB of 1024 (common practice, and how the 25 MB limit
+ * itself is counted: 25 × 1024 × 1024 bytes).
+ */
+export function formatFileSize(bytes: number): string {
+  if (bytes < 1024) return `${bytes} B`;
+  if (bytes < 1024 * 1024) return `${(bytes / 1024).toFixed(1)} KB`;
+  return `${(bytes / (1024 * 1024)).toFixed(1)} MB`;
+}
+
+/** Whole percent sent, 0–100; an unknown total counts as nothing sent yet. */
+export function progressPercent(loaded: number, total: number): number {
+  if (!(total > 0)) return 0;
+  return Math.min(100, Math.max(0, Math.floor((loaded / total) * 100)));
+}
