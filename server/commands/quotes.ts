@@ -71,15 +71,13 @@ export async function createQuote(actor: User, order: Order) {
     const refusal = quoteRefusal(lines);
     if (refusal) throw conflict(refusal);
 
-    const [customer, job, plant, prices, last] = await Promise.all([
-      Customer.findByPk(locked.customerId, { transaction: t }),
-      Job.findByPk(locked.jobId, { transaction: t }),
-      Plant.findByPk(locked.plantId, { transaction: t }),
-      pricesFor(locked.plantId, t),
-      Quote.max('number', { where: { orderId: order.id }, transaction: t }) as Promise<
-        number | null
-      >,
-    ]);
+    // One after another: a transaction's queries share one connection.
+    const customer = await Customer.findByPk(locked.customerId, { transaction: t });
+    const job = await Job.findByPk(locked.jobId, { transaction: t });
+    const plant = await Plant.findByPk(locked.plantId, { transaction: t });
+    const prices = await pricesFor(locked.plantId, t);
+    const last = (await Quote.max('number', { where: { orderId: order.id }, transaction: t })) as
+      number | null;
     const designs = lines.map((l) => ({
       line: l,
       design: l.designResult as unknown as PresentedDesign,

@@ -1,0 +1,44 @@
+import { execFileSync, spawnSync } from 'node:child_process';
+import { mkdtempSync, writeFileSync } from 'node:fs';
+import { tmpdir } from 'node:os';
+import { join } from 'node:path';
+import type request from 'supertest';
+
+/** A price book for tests: round numbers so the hand arithmetic stays readable (invented). */
+export const TEST_BOOK = {
+  currency: 'USD',
+  lumber: { defaultPerBoardFoot: 1, byLumber: {} },
+  plates: { defaultPerSquareInch: 0.02, byPlate: {} },
+  labour: { perTruss: 10, perPiece: 1, perJoint: 2, ratePerHour: 60 },
+  deliveryCharge: 150,
+  margin: 0.2,
+  taxRate: 0.05,
+  depositRate: 0.4,
+  quoteValidityDays: 30,
+  terms: 'Balance due on delivery.',
+};
+
+/** supertest: collect a binary body (PDF) into a Buffer. */
+export const binary = (res: request.Response, done: (e: Error | null, b: Buffer) => void) => {
+  const chunks: Buffer[] = [];
+  res.on('data', (c: Buffer) => chunks.push(c));
+  res.on('end', () => done(null, Buffer.concat(chunks)));
+};
+
+/** True when poppler's pdftotext runs here; on CI its absence is a failure, locally a skip. */
+export function hasPdftotext() {
+  const ok = spawnSync('pdftotext', ['-v']).error === undefined;
+  if (!ok && process.env.CI)
+    throw new Error('pdftotext is missing (apt-get install poppler-utils)');
+  if (!ok)
+    console.warn('pdftotext is missing (apt-get install poppler-utils): PDF text not checked');
+  return ok;
+}
+
+/** The text of a PDF by poppler's pdftotext (layout kept, so table rows stay on one line). */
+export function pdfText(pdf: Buffer) {
+  const dir = mkdtempSync(join(tmpdir(), 'quote-pdf-'));
+  const file = join(dir, 'quote.pdf');
+  writeFileSync(file, pdf);
+  return execFileSync('pdftotext', ['-layout', file, '-'], { encoding: 'utf8' });
+}
