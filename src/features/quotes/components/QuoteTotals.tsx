@@ -1,0 +1,41 @@
+import clsx from 'clsx';
+import type { Quote } from '../../../../shared/api/pricing';
+import { formatMoney, formatPercent } from '../money';
+
+/** Subtotal, delivery, tax, total and the deposit due, aligned as on the printed quote. */
+export function QuoteTotals({ quote }: { quote: Quote }) {
+  const money = (amount: number) => formatMoney(amount, quote.currency);
+  const rows: { label: string; value: string; strong?: boolean }[] = [
+    { label: 'Subtotal', value: money(quote.subtotal) },
+    { label: 'Delivery', value: money(quote.delivery) },
+    { label: 'Tax', value: money(quote.tax) },
+    { label: 'Total', value: money(quote.total), strong: true },
+    {
+      label: `Deposit due (${formatPercent(quote.depositRate)})`,
+      value: money(quote.depositDue),
+      strong: true,
+    },
+  ];
+  return (
+    <dl className="ml-auto grid w-full max-w-sm grid-cols-[1fr_auto] gap-x-6 gap-y-2 text-base">
+      {rows.map((row) => (
+        <div
+          key={row.label}
+          className={clsx('contents', row.strong ? 'font-semibold text-sand-900' : 'text-sand-700')}
+        >
+          <dt className={row.label === 'Total' ? 'border-t border-sand-200 pt-2' : undefined}>
+            {row.label}
+          </dt>
+          <dd
+            className={clsx(
+              'text-right tabular-nums',
+              row.label === 'Total' && 'border-t border-sand-200 pt-2',
+            )}
+          >
+            {row.value}
+          </dd>
+        </div>
+      ))}
+    </dl>
+  );
+}
