@@ -99,7 +99,9 @@ describe('POST /api/jobs/:id/files', () => {
     const res = await upload(sales, job.id, big, 'huge.png', 'image/png');
     expect(res.status).toBe(413);
     expect(res.body.error.code).toBe('too_large');
-    expect(res.body.error.message).toMatch(/25 MB/);
+    expect(res.body.error.message).toBe(
+      'The plan is larger than 25 MB. Upload a file of at most 25 MB.',
+    );
     expect(await rowsOf(job.id)).toBe(rows);
     expect(filesOnDisk(dir)).toEqual(before);
   });
