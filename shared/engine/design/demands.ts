@@ -1,17 +1,23 @@
 import { prepareTruss, solveLoads } from '../analysis';
 import type { TrussModel } from '../analysis/types';
 import type { TrussProfile } from '../profiles/types';
+import { chordBeams, chordMoments } from './chordBending';
 import type { CombinedLoads } from './combinedLoads';
 
 /**
  * What every member carries under every combination. Row-major [combination][member]:
- * axial force N (tension +) and in-plane bending moment N·mm (≥ 0).
+ * axial force N (tension +) and in-plane bending moments N·mm (≥ 0; 0 on webs).
  */
 export interface MemberDemands {
   combinations: number;
   members: number;
   axial: Float64Array;
+  /** Design moment: the larger of `spanMoment` and `supportMoment` (what the member check uses). */
   moment: Float64Array;
+  /** Largest |M| between the member's panel points, from the continuous chord. */
+  spanMoment: Float64Array;
+  /** Largest |M| at the member's two panel points (support moments of the continuous chord). */
+  supportMoment: Float64Array;
   /** Reactions per support per combination: [combination][support] rx and ry, N. */
   rx: Float64Array;
   ry: Float64Array;
@@ -27,9 +33,10 @@ export const profileModel = (profile: TrussProfile): TrussModel => ({
 
 /**
  * Solves every combination once on one prepared truss. The profile is determinate, so member
- * forces do not depend on EA and can be found before any lumber is chosen. Chord bending between
- * panel points is wL²/8 of each member as a simple span (conservative for a continuous chord);
- * on a heel panel carrying an overhang, the cantilever moment at the heel governs when larger.
+ * forces do not depend on EA and can be found before any lumber is chosen. Chord bending comes
+ * from each chord piece as a continuous beam over its panel points (`chordMoments`), with the
+ * overhang as a cantilever beyond the heel and a hinge at the peak and at splices; it is solved
+ * for each combination's factored line loads, the same linear combination as the joint loads.
  */
 export function memberDemands(profile: TrussProfile, combos: CombinedLoads[]): MemberDemands {
   const prepared = prepareTruss(profileModel(profile));
@@ -38,15 +45,20 @@ export function memberDemands(profile: TrussProfile, combos: CombinedLoads[]): M
   const s = profile.supports.length;
   const axial = new Float64Array(n * m);
   const moment = new Float64Array(n * m);
+  const spanMoment = new Float64Array(n * m);
+  const supportMoment = new Float64Array(n * m);
+  const beams = chordBeams(profile);
+  const lengths = profile.members.map((mb) => mb.length);
   const rx = new Float64Array(n * s);
   const ry = new Float64Array(n * s);
   combos.forEach((c, i) => {
     const result = solveLoads(prepared, c.jointLoads);
+    const bending = chordMoments(beams, lengths, c.transverse, c.overhangMoment);
     for (let k = 0; k < m; k++) {
       axial[i * m + k] = result.members[k].force;
-      const l = profile.members[k].length;
-      const span = Math.abs(c.transverse[k]) * l * l * 0.125;
-      moment[i * m + k] = Math.max(span, Math.abs(c.overhangMoment[k]));
+      spanMoment[i * m + k] = bending.span[k];
+      supportMoment[i * m + k] = bending.support[k];
+      moment[i * m + k] = Math.max(bending.span[k], bending.support[k]);
     }
     result.reactions.forEach((r, j) => {
       rx[i * s + j] = r.rx;
@@ -58,6 +70,8 @@ export function memberDemands(profile: TrussProfile, combos: CombinedLoads[]): M
     members: m,
     axial,
     moment,
+    spanMoment,
+    supportMoment,
     rx,
     ry,
     supports: profile.supports.map((sp) => sp.joint),

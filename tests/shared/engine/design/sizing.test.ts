@@ -31,6 +31,8 @@ function context(axial: number[][], moment: number[][], cds: number[]): SizingCo
     members: m,
     axial: Float64Array.from(axial.flat()),
     moment: Float64Array.from(moment.flat()),
+    spanMoment: Float64Array.from(moment.flat()),
+    supportMoment: new Float64Array(moment.flat().length),
     rx: new Float64Array(2 * cds.length),
     ry: new Float64Array(2 * cds.length),
     supports: ['A', 'D'],
