@@ -6,6 +6,7 @@ import bcrypt from 'bcryptjs';
 import { Customer, Job, Plant, User } from '../server/models';
 import type { Role } from '../shared/api/roles';
 import { seedOrders } from './orders';
+import { seedPriceBook } from './priceBook';
 
 export const DEMO_PASSWORD = 'spanwise-demo';
 
@@ -169,5 +170,6 @@ export async function seedDemo() {
     });
   }
   await seedOrders(plant);
+  await seedPriceBook(plant);
   return plant;
 }
