@@ -47,8 +47,9 @@ export function planTypeLabel(contentType: StoredFile['contentType']): string {
  */
 export function formatFileSize(bytes: number): string {
   if (bytes < 1024) return `${bytes} B`;
-  if (bytes < 1024 * 1024) return `${(bytes / 1024).toFixed(1)} KB`;
-  return `${(bytes / (1024 * 1024)).toFixed(1)} MB`;
+  const [value, unit] = bytes < 1024 * 1024 ? [bytes / 1024, 'KB'] : [bytes / (1024 * 1024), 'MB'];
+  // One decimal while it still tells something ("2.4 MB"), none once it is noise ("793 KB").
+  return `${value.toFixed(value < 100 ? 1 : 0)} ${unit}`;
 }
 
 /** Whole percent sent, 0–100; an unknown total counts as nothing sent yet. */

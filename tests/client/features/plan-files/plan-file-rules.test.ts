@@ -44,6 +44,7 @@ describe('sizes and progress (common practice: KB and MB of 1024 bytes)', () => 
   it('formats sizes', () => {
     expect(formatFileSize(812)).toBe('812 B');
     expect(formatFileSize(1536)).toBe('1.5 KB');
+    expect(formatFileSize(812_000)).toBe('793 KB');
     expect(formatFileSize(MAX_UPLOAD_BYTES)).toBe('25.0 MB');
   });
 
