@@ -118,12 +118,7 @@ export function InboxPage() {
         title="Demo inbox"
         description="Mail the app has sent, kept by the local mail fake instead of being delivered."
         actions={
-          <Button
-            variant="secondary"
-            busy={mail.isFetching}
-            disabled={noFake}
-            onClick={() => void mail.refetch()}
-          >
+          <Button variant="secondary" busy={mail.isFetching} onClick={() => void mail.refetch()}>
             Refresh
           </Button>
         }
@@ -137,7 +132,8 @@ export function InboxPage() {
           <Spinner className="p-4" label="Loading messages…" />
         ) : noFake ? (
           <Alert tone="warning" className="m-4" title="No local mail fake is running">
-            This server sends mail through a real relay, so there is no demo inbox to show.
+            The server is not running its local mail fake (it sends through a real relay, or demo
+            mode is off), so there is no demo inbox to show.
           </Alert>
         ) : mail.error || !mail.data ? (
           <ErrorMessage

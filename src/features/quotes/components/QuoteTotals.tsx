@@ -17,23 +17,18 @@ export function QuoteTotals({ quote }: { quote: Quote }) {
     },
   ];
   return (
-    <dl className="ml-auto grid w-full max-w-sm grid-cols-[1fr_auto] gap-x-6 gap-y-2 text-base">
+    <dl className="ml-auto flex w-full max-w-sm flex-col gap-2 text-base">
       {rows.map((row) => (
         <div
           key={row.label}
-          className={clsx('contents', row.strong ? 'font-semibold text-sand-900' : 'text-sand-700')}
+          className={clsx(
+            'flex justify-between gap-6',
+            row.strong ? 'font-semibold text-sand-900' : 'text-sand-700',
+            row.label === 'Total' && 'border-t border-sand-200 pt-2',
+          )}
         >
-          <dt className={row.label === 'Total' ? 'border-t border-sand-200 pt-2' : undefined}>
-            {row.label}
-          </dt>
-          <dd
-            className={clsx(
-              'text-right tabular-nums',
-              row.label === 'Total' && 'border-t border-sand-200 pt-2',
-            )}
-          >
-            {row.value}
-          </dd>
+          <dt>{row.label}</dt>
+          <dd className="text-right tabular-nums">{row.value}</dd>
         </div>
       ))}
     </dl>
