@@ -30,6 +30,7 @@ import { OrderPage } from '../features/orders/components/OrderPage';
 import { OrdersPage } from '../features/orders/components/OrdersPage';
 import { reviewRoutes } from '../features/reviews/routes';
 import { trussEditorRoutes } from '../features/truss-editor/routes';
+import { planFileRoutes } from '../features/plan-files/routes';
 import { usersQueryOptions } from '../features/users/api/list-users';
 import { UsersPage } from '../features/users/components/UsersPage';
 import { Spinner } from '../components/ui';
@@ -253,6 +254,7 @@ export function createAppRouter(queryClient: QueryClient) {
             },
             ...trussEditorRoutes(queryClient),
             ...reviewRoutes(queryClient),
+            ...planFileRoutes(queryClient),
             { path: '*', element: <NotFoundPage /> },
           ],
         },

@@ -5,6 +5,7 @@ import {
   Button,
   Card,
   DetailList,
+  LinkButton,
   PageHeader,
   QueryState,
   TextLink,
@@ -165,7 +166,15 @@ export function JobPage({ id, canEdit, canOpenBuilder, canListJobs, orders }: Jo
               <TextLink to="/">← Your jobs</TextLink>
             )}
           </p>
-          <PageHeader title={j.name} description={`${j.customer.name} · ${j.address}`} />
+          <PageHeader
+            title={j.name}
+            description={`${j.customer.name} · ${j.address}`}
+            actions={
+              <LinkButton to={`/jobs/${j.id}/files`} variant="secondary">
+                Plans
+              </LinkButton>
+            }
+          />
           <div className="grid gap-6">
             <Details key={j.id} job={j} canEdit={canEdit} canOpenBuilder={canOpenBuilder} />
             {orders(j)}
