@@ -4,8 +4,15 @@ import { priceBookSchema } from '../../../../shared/api/pricing';
 import { api } from '../../../lib/api-client';
 import { priceBookKeys } from './keys';
 
-/** The answer of `GET`/`PUT /api/price-book`: the book, plus `demo` while it is invented defaults. */
-export const storedPriceBookSchema = priceBookSchema.extend({ demo: z.boolean().default(false) });
+/**
+ * The answer of `GET`/`PUT /api/price-book`: the book, `demo` while it is invented defaults, and
+ * when and by whom it was last saved (null until it is).
+ */
+export const storedPriceBookSchema = priceBookSchema.extend({
+  demo: z.boolean().default(false),
+  updatedAt: z.string().nullable().default(null),
+  updatedBy: z.string().nullable().default(null),
+});
 /** A price book as the server answers it. */
 export type StoredPriceBook = z.infer<typeof storedPriceBookSchema>;
 

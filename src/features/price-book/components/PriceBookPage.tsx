@@ -1,4 +1,5 @@
 import { Alert, PageHeader, QueryState } from '../../../components/ui';
+import { formatDateTime } from '../../../lib/format';
 import { usePriceBook } from '../api/get-price-book';
 import { PriceBookForm } from './PriceBookForm';
 
@@ -25,6 +26,12 @@ export function PriceBookPage({ canEdit }: PriceBookPageProps) {
                   ? 'These prices are invented defaults for trying Spanwise out, not real costs. Enter your plant’s prices and save to replace them.'
                   : 'These prices are invented defaults for trying Spanwise out, not real costs, until the plant manager enters the plant’s prices.'}
               </Alert>
+            ) : null}
+            {b.updatedAt ? (
+              <p className="text-sm text-sand-600">
+                Last saved {formatDateTime(b.updatedAt)}
+                {b.updatedBy ? ` by ${b.updatedBy}` : ''}.
+              </p>
             ) : null}
             {!canEdit ? (
               <Alert>You can read the price book; the plant manager changes it.</Alert>
