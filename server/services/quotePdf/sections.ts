@@ -136,6 +136,7 @@ export function linesTable(doc: Doc, s: QuoteSnapshot, y: number, newPage: () =>
         size: 9,
         width: cols[i].w - 2 * PAD,
         align: COLUMNS[i].align,
+        tabular: COLUMNS[i].align === 'right',
       }),
     );
     at += ROW;
@@ -152,7 +153,7 @@ export function totals(doc: Doc, s: QuoteSnapshot, y: number) {
   const row = (label: string, value: string, at: number, strong = false) => {
     const style = strong ? { font: 'bold' as const, size: 11.5 } : { size: 9 };
     textAt(doc, label, x + PAD, at, { ...style, color: strong ? COLORS.text : COLORS.muted });
-    textAt(doc, value, x, at, { ...style, width: w - PAD, align: 'right' });
+    textAt(doc, value, x, at, { ...style, width: w - PAD, align: 'right', tabular: true });
   };
   const p = s.price;
   row('Subtotal', money(p.subtotal), y);
@@ -170,6 +171,7 @@ export function totals(doc: Doc, s: QuoteSnapshot, y: number) {
     color: COLORS.accent,
     width: w - PAD,
     align: 'right',
+    tabular: true,
   });
   return y + 110;
 }
@@ -186,16 +188,21 @@ export function notes(doc: Doc, s: QuoteSnapshot, y: number, newPage: () => numb
   ]
     .filter(Boolean)
     .join(' ');
-  const cautionText = s.cautions.map((c) => `•  ${c}`).join('\n');
-  const need =
-    14 + paragraphHeight(doc, termsText, w) + 40 + paragraphHeight(doc, cautionText, w - 24);
+  const bulletW = w - 34;
+  const cautionsH = s.cautions.reduce((h, c) => h + paragraphHeight(doc, c, bulletW) + 2, 0);
+  const need = 14 + paragraphHeight(doc, termsText, w) + 40 + cautionsH;
   let at = y + need > contentBottom(doc) ? newPage() : y;
   textAt(doc, 'Terms', x, at, { font: 'bold', size: 9.5 });
   at = paragraph(doc, termsText, x, at + 14, w) + 14;
-  const boxH = 28 + paragraphHeight(doc, cautionText, w - 24);
+  const boxH = 30 + cautionsH;
   doc.rect(x, at, w, boxH).fill(COLORS.noteBg);
   doc.rect(x, at, 3, boxH).fill(COLORS.noteRule);
   textAt(doc, 'Before you build', x + 14, at + 9, { font: 'bold', size: 9.5 });
-  paragraph(doc, cautionText, x + 14, at + 23, w - 24, { color: COLORS.text });
+  let by = at + 24;
+  for (const c of s.cautions) {
+    // A hanging indent: wrapped lines start under the text, not under the bullet.
+    textAt(doc, '•', x + 14, by, { size: 8.5 });
+    by = paragraph(doc, c, x + 24, by, bulletW, { color: COLORS.text }) + 2;
+  }
   return at + boxH + 22;
 }

@@ -9,6 +9,8 @@ export interface TextStyle {
   /** Box width for right or centre alignment, and where a too-long text is cut with "…". */
   width?: number;
   align?: 'left' | 'right' | 'center';
+  /** Tabular figures, so money and quantities align digit under digit. */
+  tabular?: boolean;
 }
 
 /** Cut a text with "…" until it fits `width` at the current font. */
@@ -26,14 +28,15 @@ export function textAt(doc: Doc, s: string, x: number, y: number, style: TextSty
     .fontSize(style.size ?? 9)
     .fillColor(style.color ?? COLORS.text);
   const line = style.width ? fit(doc, s, style.width) : s;
-  const w = doc.widthOfString(line);
+  const features = style.tabular ? (['tnum'] as const) : [];
+  const w = doc.widthOfString(line, { features: [...features] });
   const left =
     style.align === 'right' && style.width
       ? x + style.width - w
       : style.align === 'center' && style.width
         ? x + (style.width - w) / 2
         : x;
-  doc.text(line, left, y, { lineBreak: false });
+  doc.text(line, left, y, { lineBreak: false, features: [...features] });
 }
 
 /** A wrapped paragraph; returns the y below it. */
