@@ -97,7 +97,7 @@ export function SupportsAndDeflection({ design }: { design: PresentedDesign }) {
   const f = design.units.force;
   const bearingOf = new Map(design.bearing.map((b) => [b.joint, b]));
   return (
-    <div className="grid gap-4 lg:grid-cols-2">
+    <div className="grid gap-4 2xl:grid-cols-2">
       <Card title="Reactions" flush>
         <SimpleTable
           caption="Reactions"

@@ -27,7 +27,10 @@ export interface TrussDrawingProps {
   /** True while the input is invalid: the last good drawing stays, dimmed, with `staleNote`. */
   stale?: boolean;
   staleNote?: string;
-  /** Time of the last engine run plus render, ms, exposed as `data-design-ms`. */
+  /**
+   * Time of the last engine run, ms, exposed as `data-engine-ms` and as the first value of
+   * `data-design-ms` (the editor overwrites the latter with keystroke-to-drawing time).
+   */
   designMs?: number;
 }
 
@@ -230,6 +233,7 @@ export const TrussDrawing = memo(function TrussDrawing({
         <svg
           data-testid="truss-drawing"
           data-design-ms={designMs === undefined ? undefined : designMs.toFixed(2)}
+          data-engine-ms={designMs === undefined ? undefined : designMs.toFixed(2)}
           data-stale={stale || undefined}
           viewBox={`0 0 ${WIDTH} ${HEIGHT}`}
           role="img"

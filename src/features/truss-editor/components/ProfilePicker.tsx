@@ -1,4 +1,5 @@
 import clsx from 'clsx';
+import { memo } from 'react';
 import { generateProfile, PROFILE_KINDS } from '../../../../shared/engine/profiles';
 import type { ProfileKind } from '../../../../shared/engine/profiles/types';
 import { focusRing } from '../../../components/ui';
@@ -34,7 +35,7 @@ const thumbnailOf = (kind: ProfileKind): DrawingModel | null => {
 };
 
 /** The nine truss families as cards with a small drawing each; the chosen one is pressed. */
-export function ProfilePicker(props: {
+export const ProfilePicker = memo(function ProfilePicker(props: {
   value: ProfileKind;
   onChange: (kind: ProfileKind) => void;
   disabled?: boolean;
@@ -74,4 +75,4 @@ export function ProfilePicker(props: {
       })}
     </div>
   );
-}
+});

@@ -1,4 +1,4 @@
-import { useLayoutEffect, useMemo, useRef, useState } from 'react';
+import { useCallback, useLayoutEffect, useMemo, useRef, useState } from 'react';
 import { useForm, useWatch, type FieldErrors, type Resolver } from 'react-hook-form';
 import { Link, useNavigate } from 'react-router';
 import { PROFILE_KIND_LABELS } from '../../../../shared/engine/profiles';
@@ -62,6 +62,8 @@ export function TrussEditor({
       defaultValues: initial,
       resolver,
     });
+  // Keystroke → committed drawing, measured from the input event to the layout effect.
+  const startedAt = useRef<number | null>(null);
   const watched = useWatch({ control });
   const values = useMemo(() => ({ ...initial, ...watched }) as TrussFormValues, [initial, watched]);
   const reading = useMemo(() => formToRequest(values, units), [values, units]);
@@ -81,10 +83,21 @@ export function TrussEditor({
     if (e?.type === 'server' && typeof e.message === 'string')
       errors[field as TrussFormField] = e.message;
   }
-  const ctx: FieldContext = { register, errors, readOnly };
+  // Stable while the messages are unchanged, so the memoised field groups skip re-rendering
+  // on keystrokes that change only the drawing (most of them).
+  const errorsKey = JSON.stringify(errors);
+  const ctx = useMemo<FieldContext>(
+    () => ({ register, errors: JSON.parse(errorsKey) as TrussFormErrors, readOnly }),
+    [register, errorsKey, readOnly],
+  );
+  const onProfile = useCallback(
+    (kind: TrussFormValues['profile']) => {
+      startedAt.current = performance.now();
+      setValue('profile', kind, { shouldDirty: true });
+    },
+    [setValue],
+  );
 
-  // Keystroke → committed drawing, measured from the input event to the layout effect.
-  const startedAt = useRef<number | null>(null);
   const drawingBox = useRef<HTMLDivElement>(null);
   const run = live.run;
   useLayoutEffect(() => {
@@ -152,14 +165,7 @@ export function TrussEditor({
         className="flex flex-col gap-4"
       >
         <Card title="Truss type">
-          <ProfilePicker
-            value={values.profile}
-            disabled={readOnly}
-            onChange={(kind) => {
-              startedAt.current = performance.now();
-              setValue('profile', kind, { shouldDirty: true });
-            }}
-          />
+          <ProfilePicker value={values.profile} disabled={readOnly} onChange={onProfile} />
         </Card>
         <div className="grid items-start gap-4 lg:grid-cols-[minmax(20rem,26rem)_minmax(0,1fr)]">
           <Card>

@@ -1,3 +1,4 @@
+import { memo } from 'react';
 import { LUMBER_GRADES, LUMBER_SIZES } from '../../../../shared/api/design';
 import type { ProfileKind } from '../../../../shared/engine/profiles/types';
 import { FieldGroup, SelectField, TextField, type FieldContext } from './FormFields';
@@ -9,7 +10,7 @@ const hints = (units: 'imperial' | 'metric') =>
     : { long: 'millimetres, e.g. 8687', short: 'millimetres', load: 'kPa' };
 
 /** Mark, quantity and plies of the line. */
-export function LineFields({ ctx }: { ctx: FieldContext }) {
+export const LineFields = memo(function LineFields({ ctx }: { ctx: FieldContext }) {
   return (
     <FieldGroup title="Line">
       <div className="grid grid-cols-3 gap-3">
@@ -19,10 +20,10 @@ export function LineFields({ ctx }: { ctx: FieldContext }) {
       </div>
     </FieldGroup>
   );
-}
+});
 
 /** Span, pitch, heel, overhangs, spacing and the kind-specific geometry. */
-export function GeometryFields(props: {
+export const GeometryFields = memo(function GeometryFields(props: {
   ctx: FieldContext;
   units: 'imperial' | 'metric';
   kind: ProfileKind;
@@ -62,10 +63,14 @@ export function GeometryFields(props: {
       </div>
     </FieldGroup>
   );
-}
+});
 
 /** Area loads, snow and wind uplift, in psf or kPa. */
-export function LoadFields({ ctx, units }: { ctx: FieldContext; units: 'imperial' | 'metric' }) {
+export const LoadFields = memo(function LoadFields(props: {
+  ctx: FieldContext;
+  units: 'imperial' | 'metric';
+}) {
+  const { ctx, units } = props;
   const u = hints(units).load;
   return (
     <FieldGroup title="Loads">
@@ -112,7 +117,7 @@ export function LoadFields({ ctx, units }: { ctx: FieldContext; units: 'imperial
       </div>
     </FieldGroup>
   );
-}
+});
 
 function LumberOptions() {
   return (
@@ -132,7 +137,11 @@ function LumberOptions() {
 }
 
 /** Lumber per role, braced webs, bearing width and deflection limits. */
-export function LumberFields({ ctx, units }: { ctx: FieldContext; units: 'imperial' | 'metric' }) {
+export const LumberFields = memo(function LumberFields(props: {
+  ctx: FieldContext;
+  units: 'imperial' | 'metric';
+}) {
+  const { ctx, units } = props;
   return (
     <FieldGroup title="Lumber, bracing and limits">
       <div className="grid grid-cols-1 gap-3">
@@ -170,4 +179,4 @@ export function LumberFields({ ctx, units }: { ctx: FieldContext; units: 'imperi
       </div>
     </FieldGroup>
   );
-}
+});
