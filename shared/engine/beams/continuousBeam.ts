@@ -57,7 +57,7 @@ export function supportMoments(beam: ContinuousBeam): Float64Array {
   for (let j = 0; j < inner; j++) {
     const left = spans[j];
     const right = spans[j + 1];
-    let rhs = (loads[j] * left ** 3 + loads[j + 1] * right ** 3) / 4;
+    let rhs = (loads[j] * left * left * left + loads[j + 1] * right * right * right) / 4;
     if (j === 0) rhs -= m[0] * left;
     if (j === inner - 1) rhs -= m[n] * right;
     const sub = j === 0 ? 0 : left;

@@ -8,6 +8,8 @@ import type { TrussProfile } from '../profiles/types';
 export interface ChordBeam {
   /** Member indices along the piece, one per span. */
   members: number[];
+  /** Span lengths (the members' lengths), mm. */
+  spans: Float64Array;
   /** Member indices whose overhang moment acts at the start / end support (−1: none). */
   startOverhang: number;
   endOverhang: number;
@@ -63,45 +65,52 @@ export function chordBeams(profile: TrussProfile): ChordBeam[] {
           endOverhang = k;
       }
       const simpleFallback = members.length === 1 && startOverhang >= 0 && endOverhang >= 0;
-      return { members, startOverhang, endOverhang, simpleFallback };
+      const spans = new Float64Array(members.map((k) => profile.members[k].length));
+      return { members, spans, startOverhang, endOverhang, simpleFallback };
     });
 }
 
 /**
  * Chord moments for one set of loads (a load case or a factored combination: moments are linear
- * in the loads). `transverse` is the line load across each member, N/mm (+ along its downward
+ * in the loads), per member index. `transverse` is the line load across each member, N/mm (+ along its downward
  * normal), and `overhangMoment` the cantilever moment at the heel of the member it continues,
  * N·mm (+ gravity, hogging). Each chord piece is solved as a continuous beam on rigid supports
  * at its panel points (truss joint deflection ignored, as is the axial force's P-Δ effect, which
- * the NDS 3.9.2 amplifier covers in the member check). Webs get 0.
+ * the NDS 3.9.2 amplifier covers in the member check). Webs get 0. Writes into `into` from
+ * `offset` when given (row-major demand arrays, no allocation per combination).
  */
 export function chordMoments(
   beams: readonly ChordBeam[],
-  memberLengths: ArrayLike<number>,
   transverse: ArrayLike<number>,
   overhangMoment: ArrayLike<number>,
+  into: ChordMoments = {
+    span: new Float64Array(transverse.length),
+    support: new Float64Array(transverse.length),
+  },
+  offset = 0,
 ): ChordMoments {
-  const span = new Float64Array(memberLengths.length);
-  const support = new Float64Array(memberLengths.length);
+  const { span, support } = into;
   for (const b of beams) {
+    const { spans, members } = b;
     if (b.simpleFallback) {
-      const k = b.members[0];
-      span[k] = Math.abs(transverse[k]) * memberLengths[k] ** 2 * 0.125;
-      support[k] = Math.abs(overhangMoment[k]);
+      const k = members[0];
+      span[offset + k] = Math.abs(transverse[k]) * spans[0] * spans[0] * 0.125;
+      support[offset + k] = Math.abs(overhangMoment[k]);
       continue;
     }
-    const spans = b.members.map((k) => memberLengths[k]);
-    const loads = b.members.map((k) => transverse[k]);
+    const loads = new Float64Array(members.length);
+    for (let j = 0; j < members.length; j++) loads[j] = transverse[members[j]];
     const m = supportMoments({
       spans,
       loads,
       startMoment: b.startOverhang >= 0 ? overhangMoment[b.startOverhang] : 0,
       endMoment: b.endOverhang >= 0 ? overhangMoment[b.endOverhang] : 0,
     });
-    b.members.forEach((k, j) => {
+    for (let j = 0; j < members.length; j++) {
+      const k = offset + members[j];
       span[k] = Math.abs(spanPeakMoment(spans[j], loads[j], m[j], m[j + 1]));
       support[k] = Math.max(Math.abs(m[j]), Math.abs(m[j + 1]));
-    });
+    }
   }
-  return { span, support };
+  return into;
 }

@@ -48,17 +48,16 @@ export function memberDemands(profile: TrussProfile, combos: CombinedLoads[]): M
   const spanMoment = new Float64Array(n * m);
   const supportMoment = new Float64Array(n * m);
   const beams = chordBeams(profile);
-  const lengths = profile.members.map((mb) => mb.length);
+  const bending = { span: spanMoment, support: supportMoment };
   const rx = new Float64Array(n * s);
   const ry = new Float64Array(n * s);
   combos.forEach((c, i) => {
     const result = solveLoads(prepared, c.jointLoads);
-    const bending = chordMoments(beams, lengths, c.transverse, c.overhangMoment);
+    chordMoments(beams, c.transverse, c.overhangMoment, bending, i * m);
     for (let k = 0; k < m; k++) {
-      axial[i * m + k] = result.members[k].force;
-      spanMoment[i * m + k] = bending.span[k];
-      supportMoment[i * m + k] = bending.support[k];
-      moment[i * m + k] = Math.max(bending.span[k], bending.support[k]);
+      const at = i * m + k;
+      axial[at] = result.members[k].force;
+      moment[at] = Math.max(spanMoment[at], supportMoment[at]);
     }
     result.reactions.forEach((r, j) => {
       rx[i * s + j] = r.rx;
