@@ -48,6 +48,13 @@ export function DesignVerdict({ design }: { design: PresentedDesign }) {
     return (
       <Alert tone="success" title="The design passes every check">
         Highest member CSI {formatCsi(worst)}; deflection, bearings and plates are within limits.
+        {design.warnings.length > 0 ? (
+          <ul className="mt-1 list-disc pl-5">
+            {design.warnings.map((w) => (
+              <li key={w}>{w}</li>
+            ))}
+          </ul>
+        ) : null}
       </Alert>
     );
   }

@@ -1,4 +1,5 @@
 import { csiBand } from './csi';
+import { overhangTips } from './geometry';
 import type { DrawingModel } from './model';
 import { formatLength, formatPitch, type PlantUnits } from './quantities';
 
@@ -12,11 +13,17 @@ export interface ChainSegment {
 
 /**
  * The chain of horizontal dimensions under the truss: left overhang, span (out-to-out of
- * bearings), right overhang; zero-length overhangs are left out.
+ * bearings), right overhang; zero-length and undrawn overhangs are left out.
  */
 export function chainDimensions(model: DrawingModel, units: PlantUnits): ChainSegment[] {
-  const left = model.overhangs.find((o) => o.side === 'left')?.horizontal ?? 0;
-  const right = model.overhangs.find((o) => o.side === 'right')?.horizontal ?? 0;
+  // Only overhangs that are drawn get a dimension (a mono's tall end has no sloping cantilever).
+  const drawn = overhangTips(model);
+  const width = (side: 'left' | 'right') => {
+    const t = drawn.find((o) => o.side === side);
+    return t ? Math.abs(t.tip.x - t.heel.x) : 0;
+  };
+  const left = width('left');
+  const right = width('right');
   const segments: ChainSegment[] = [];
   if (left > 0) {
     segments.push({ key: 'overhangLeft', from: -left, to: 0, label: formatLength(left, units) });

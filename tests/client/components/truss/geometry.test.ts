@@ -91,3 +91,23 @@ describe('dimensions', () => {
     expect(title).not.toMatch(/span|pitch|mark/i);
   });
 });
+
+describe('mono overhangs', () => {
+  it('dimensions only the overhangs it draws', () => {
+    const mono = drawingFromProfile(
+      generateProfile({
+        kind: 'mono',
+        span: 16 * FT,
+        pitch: 4,
+        heelHeight: 0,
+        overhangLeft: FT,
+        overhangRight: FT,
+      }),
+    );
+    const drawn = overhangTips(mono).map((t) => t.side);
+    const chain = chainDimensions(mono, 'imperial').map((s) => s.key);
+    expect(chain).toContain('span');
+    expect(chain.includes('overhangRight')).toBe(drawn.includes('right'));
+    expect(chain.includes('overhangLeft')).toBe(drawn.includes('left'));
+  });
+});
