@@ -24,6 +24,9 @@ export const SECTION_ROLES = {
   job: ['admin', 'sales', 'engineer', 'foreman', 'builder'],
   orders: ['admin', 'sales', 'engineer', 'foreman', 'builder'],
   reviews: ['engineer'],
+  quotes: ['admin', 'sales', 'builder'],
+  'price-book': ['admin', 'sales'],
+  inbox: ['admin'],
 } as const satisfies Record<string, readonly Role[]>;
 
 const may = (section: keyof typeof SECTION_ROLES, role: Role) =>
@@ -39,5 +42,7 @@ export function navForRole(role: Role): NavItem[] {
   if (may('users', role)) items.push({ to: '/users', label: 'Users' });
   if (may('builders', role)) items.push({ to: '/builders', label: 'Builders' });
   if (may('jobs', role)) items.push({ to: '/jobs', label: 'Jobs' });
+  if (may('price-book', role)) items.push({ to: '/price-book', label: 'Price book' });
+  if (may('inbox', role)) items.push({ to: '/inbox', label: 'Demo inbox' });
   return items;
 }

@@ -31,6 +31,9 @@ import { OrdersPage } from '../features/orders/components/OrdersPage';
 import { reviewRoutes } from '../features/reviews/routes';
 import { trussEditorRoutes } from '../features/truss-editor/routes';
 import { planFileRoutes } from '../features/plan-files/routes';
+import { priceBookRoutes } from '../features/price-book/routes';
+import { quoteRoutes } from '../features/quotes/routes';
+import { inboxRoutes } from '../features/inbox/routes';
 import { usersQueryOptions } from '../features/users/api/list-users';
 import { UsersPage } from '../features/users/components/UsersPage';
 import { Spinner } from '../components/ui';
@@ -247,6 +250,9 @@ export function createAppRouter(queryClient: QueryClient) {
                       id={id}
                       canEdit={canManageSales(me.user.role)}
                       canOpenJob={(SECTION_ROLES.job as readonly string[]).includes(me.user.role)}
+                      canSeeQuotes={(SECTION_ROLES.quotes as readonly string[]).includes(
+                        me.user.role,
+                      )}
                     />
                   )}
                 />
@@ -255,6 +261,9 @@ export function createAppRouter(queryClient: QueryClient) {
             ...trussEditorRoutes(queryClient),
             ...reviewRoutes(queryClient),
             ...planFileRoutes(queryClient),
+            ...priceBookRoutes(queryClient),
+            ...quoteRoutes(queryClient),
+            ...inboxRoutes(queryClient),
             { path: '*', element: <NotFoundPage /> },
           ],
         },

@@ -6,8 +6,16 @@ const labels = (role: (typeof ROLES)[number]) => navForRole(role).map((item) => 
 
 describe('role navigation (product brief for the client shell and the sales desk screens)', () => {
   it('shows each role its own sections', () => {
-    expect(labels('admin')).toEqual(['Overview', 'Orders', 'Users', 'Builders', 'Jobs']);
-    expect(labels('sales')).toEqual(['Sales desk', 'Orders', 'Builders', 'Jobs']);
+    expect(labels('admin')).toEqual([
+      'Overview',
+      'Orders',
+      'Users',
+      'Builders',
+      'Jobs',
+      'Price book',
+      'Demo inbox',
+    ]);
+    expect(labels('sales')).toEqual(['Sales desk', 'Orders', 'Builders', 'Jobs', 'Price book']);
     expect(labels('engineer')).toEqual(['Design review', 'Review queue', 'Orders', 'Jobs']);
     expect(labels('foreman')).toEqual(['Shop floor', 'Orders', 'Jobs']);
     expect(labels('builder')).toEqual(['Your jobs', 'Your orders']);

@@ -25,12 +25,15 @@ export interface OrderPageProps {
   canEdit: boolean;
   /** Staff who may open the job's page (builders see the job name only). */
   canOpenJob: boolean;
+  /** Sales, admin and the order's builder read its quotes. */
+  canSeeQuotes?: boolean;
 }
 
 function Header({
   order,
   canEdit,
   canOpenJob,
+  canSeeQuotes,
 }: { order: OrderDetail } & Omit<OrderPageProps, 'id'>) {
   return (
     <div className="mb-6 flex flex-wrap items-end justify-between gap-4">
@@ -52,7 +55,14 @@ function Header({
           {order.trussCount === 1 ? '' : 'es'} · updated {formatDateTime(order.updatedAt)}
         </p>
       </div>
-      {canEdit ? <LinkButton to={`/orders/${order.id}/lines/new`}>Add truss</LinkButton> : null}
+      <div className="flex items-center gap-2">
+        {canSeeQuotes ? (
+          <LinkButton to={`/orders/${order.id}/quotes`} variant="secondary">
+            Quotes
+          </LinkButton>
+        ) : null}
+        {canEdit ? <LinkButton to={`/orders/${order.id}/lines/new`}>Add truss</LinkButton> : null}
+      </div>
     </div>
   );
 }
@@ -152,7 +162,7 @@ function Lines({ order, canEdit }: { order: OrderDetail; canEdit: boolean }) {
 }
 
 /** `/orders/:id`: the order's header, its truss lines and their actions, and its history. */
-export function OrderPage({ id, canEdit, canOpenJob }: OrderPageProps) {
+export function OrderPage({ id, canEdit, canOpenJob, canSeeQuotes = false }: OrderPageProps) {
   const order = useOrder(id);
   return (
     <QueryState query={order} what="the order">
@@ -161,7 +171,7 @@ export function OrderPage({ id, canEdit, canOpenJob }: OrderPageProps) {
           <p className="mb-2 text-sm">
             <TextLink to="/orders">← Orders</TextLink>
           </p>
-          <Header order={o} canEdit={canEdit} canOpenJob={canOpenJob} />
+          <Header order={o} canEdit={canEdit} canOpenJob={canOpenJob} canSeeQuotes={canSeeQuotes} />
           {!canEdit ? (
             <Alert className="mb-4">
               You can follow this order here; the plant’s sales desk makes the changes.
