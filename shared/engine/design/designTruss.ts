@@ -289,7 +289,7 @@ export function designTruss(input: EngineDesignInput, options: DesignOptions = {
         ]
       : []),
     'Top chord braced out of plane by the sheathing, bottom chord by the ceiling; webs over their length unless braced.',
-    'Chord bending between panel points taken as wL²/8 per panel (a simple span: conservative for continuous chords); the heel panel also carries the overhang cantilever moment.',
+    'Chord bending from each chord piece as a continuous beam on rigid supports at its panel points, the overhang a cantilever beyond the heel; hinges at the peak and at splices (conservative: a splice plate carries no moment). Members are checked with the larger of the span and panel-point moments.',
     repetitive
       ? 'Repetitive member factor Cr = 1.15 on chord bending (spacing 24 in. o.c. or less).'
       : 'No repetitive member factor: spacing over 24 in. o.c.',

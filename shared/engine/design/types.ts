@@ -47,7 +47,7 @@ export interface DesignMember {
   maxTension: number;
   /** Largest compression, N, as a positive magnitude (≥ 0). */
   maxCompression: number;
-  /** Largest in-plane bending moment over the combinations, N·mm (≥ 0; chords only). */
+  /** Largest in-plane bending moment (in a span or at a panel point) over the combinations, N·mm (≥ 0; chords only). */
   maxMoment: number;
   /** Combined stress index of the governing combination (≤ 1 passes). */
   csi: number;

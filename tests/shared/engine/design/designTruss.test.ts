@@ -1,6 +1,14 @@
 import { describe, expect, it } from 'vitest';
 import { isEngineError } from '../../../../shared/engine/errors';
-import { DESIGN_CAUTIONS, designTruss } from '../../../../shared/engine/design';
+import {
+  DESIGN_CAUTIONS,
+  designTruss,
+  effectiveLengths,
+  type TrussDesign,
+} from '../../../../shared/engine/design';
+import { designLoads } from '../../../../shared/engine/design/combinedLoads';
+import { checkMember } from '../../../../shared/engine/members/checkMember';
+import { generateProfile } from '../../../../shared/engine/profiles';
 import { KPA_PER_PSF, MM_PER_INCH } from '../../../../shared/engine/units';
 import { ENGINE_VERSION } from '../../../../shared/engine/version';
 import { engineInput, lightFink, TYPICAL_LOADS } from './support/inputs';
@@ -193,4 +201,48 @@ describe('raised heels', () => {
     }
     expect(isEngineError(error) && error.code).toBe('geometry');
   });
+});
+
+describe('chord bending from the continuous chord', () => {
+  // The light Fink (common practice: 2x4 chords). The simple-span model it replaces took
+  // max(wL²/8, overhang moment) per top-chord panel; the continuous chord lowers the moment at
+  // the heel panel point (three-moment equation), so the top chord's CSI drops.
+  const draft = lightFink();
+  const profile = generateProfile({ ...engineInput(draft).profile, heelHeight: 0 });
+  const { combinations } = designLoads(engineInput(draft), profile, '7-16');
+
+  /** Worst CSI of a top-chord member over the combinations with the simple-span moments. */
+  const simpleSpanCsi = (d: TrussDesign, id: string) => {
+    const k = profile.members.findIndex((mb) => mb.id === id);
+    const mb = d.members[k];
+    return Math.max(
+      ...combinations.map((c, i) => {
+        const moment = Math.max(
+          (Math.abs(c.transverse[k]) * mb.length ** 2) / 8,
+          Math.abs(c.overhangMoment[k]),
+        );
+        return checkMember({
+          lumberId: mb.lumber,
+          plies: 1,
+          axial: mb.forces[i],
+          moment,
+          ...effectiveLengths(profile.members[k], false),
+          cd: c.cd,
+          repetitive: true,
+        }).csi;
+      }),
+    );
+  };
+
+  for (const lumber of [undefined, '2x4 SPF-1/2', '2x4 SP-2']) {
+    it(`lowers the top-chord CSI (${lumber ?? 'auto-sized'})`, () => {
+      const d = designTruss(
+        engineInput(lightFink(lumber ? { lumber: { topChord: [lumber] } } : {})),
+      );
+      for (const mb of d.members.filter((x) => x.role === 'topChord')) {
+        expect(mb.csi).toBeLessThan(simpleSpanCsi(d, mb.id));
+      }
+      expect(d.notes.some((n) => n.includes('continuous beam'))).toBe(true);
+    });
+  }
 });
