@@ -27,6 +27,8 @@ export interface TrussEditorProps {
   initial: TrussFormValues;
   /** Set when the line is approved: the form opens read-only with this note. */
   lockedNote?: string;
+  /** The reviewer's comment when the design was sent back. */
+  returnedNote?: string;
 }
 
 const LINE_FIELDS: TrussFormField[] = ['mark', 'quantity', 'plies'];
@@ -41,6 +43,7 @@ export function TrussEditor({
   units,
   initial,
   lockedNote,
+  returnedNote,
 }: TrussEditorProps) {
   const navigate = useNavigate();
   const [locked, setLocked] = useState<string | undefined>(lockedNote);
@@ -153,6 +156,11 @@ export function TrussEditor({
           </Link>
         }
       />
+      {returnedNote && !locked ? (
+        <Alert tone="warning" title="Sent back by the design reviewer" className="mb-4">
+          {returnedNote}
+        </Alert>
+      ) : null}
       {locked ? (
         <Alert tone="warning" title="Read only" className="mb-4">
           {locked === APPROVED_NOTE ? locked : `${locked} ${APPROVED_NOTE}`}

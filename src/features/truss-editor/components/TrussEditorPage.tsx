@@ -68,6 +68,11 @@ export function TrussEditorPage() {
       orderLabel={label}
       units={units}
       initial={initial}
+      returnedNote={
+        stored?.reviewState === 'returned'
+          ? (stored.reviewComment ?? 'No comment given.')
+          : undefined
+      }
       lockedNote={
         stored?.reviewState === 'approved'
           ? 'This design is approved and locked. A change needs a new design and a new review.'
