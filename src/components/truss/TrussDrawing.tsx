@@ -46,11 +46,22 @@ interface PlacedMember {
   width: number;
 }
 
+/** What a screen reader hears on a member: id, force with T/C, lumber and CSI. */
+function memberSummary(member: DrawingMember, units: PlantUnits): string {
+  const parts = [`Member ${member.id}`];
+  if (member.force !== undefined) parts.push(formatAxialForce(member.force, units));
+  if (member.lumber) parts.push(member.lumber);
+  if (member.csi !== undefined) parts.push(`CSI ${formatCsi(member.csi)}`);
+  return parts.join(', ');
+}
+
 function MemberBand({
   placed,
+  units,
   onHover,
 }: {
   placed: PlacedMember;
+  units: PlantUnits;
   onHover: (id: string | null) => void;
 }) {
   const { member, a, b, width } = placed;
@@ -62,7 +73,7 @@ function MemberBand({
     <g
       tabIndex={0}
       role="img"
-      aria-label={`Member ${member.id}`}
+      aria-label={memberSummary(member, units)}
       onMouseEnter={() => onHover(member.id)}
       onMouseLeave={() => onHover(null)}
       onFocus={() => onHover(member.id)}
@@ -236,7 +247,8 @@ export const TrussDrawing = memo(function TrussDrawing({
           data-engine-ms={designMs === undefined ? undefined : designMs.toFixed(2)}
           data-stale={stale || undefined}
           viewBox={`0 0 ${WIDTH} ${HEIGHT}`}
-          role="img"
+          // A group, not an image: its members are focusable and name their own results.
+          role="group"
           aria-labelledby={titleId}
           aria-label={title}
           className="h-auto w-full select-none"
@@ -305,7 +317,7 @@ export const TrussDrawing = memo(function TrussDrawing({
             </g>
           ))}
           {layout.members.map((placed) => (
-            <MemberBand key={placed.member.id} placed={placed} onHover={setHover} />
+            <MemberBand key={placed.member.id} placed={placed} units={units} onHover={setHover} />
           ))}
           {layout.members.map((placed) => (
             <ForceTag key={placed.member.id} placed={placed} />
