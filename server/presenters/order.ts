@@ -81,6 +81,12 @@ export function summarizeEvent(e: AuditEvent): string {
       return `Reordered lines: ${((e.data.marks as string[]) ?? []).join(', ')}`;
     case 'line.approved':
       return `Approved the design of ${d(e, 'mark')}${e.data.comment ? `: ${d(e, 'comment')}` : ''}`;
+    case 'quote.created':
+      return `Quoted ${d(e, 'reference')}${e.data.total !== undefined ? ` (total ${Number(e.data.total).toFixed(2)} ${d(e, 'currency') ?? ''})`.replace(' )', ')') : ''}`;
+    case 'quote.sent':
+      return `Sent ${d(e, 'reference')} to ${d(e, 'to') ?? 'the builder'}`;
+    case 'order.reopened':
+      return 'Back to draft: lines changed after quoting; the next quote is a new revision';
     case 'line.returned':
       return `Sent ${d(e, 'mark')} back: ${d(e, 'comment')}`;
     default:

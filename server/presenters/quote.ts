@@ -1,5 +1,5 @@
 import type { PriceBook as PriceBookData, Quote as QuoteBody } from '../../shared/api/pricing';
-import type { PriceBook, Quote } from '../models';
+import type { PriceBook, Quote, User } from '../models';
 import type { QuoteSnapshot } from '../services/pricing';
 
 /** `GET/PUT /api/price-book`: the book, and whether it is the invented plant default. */
@@ -20,8 +20,20 @@ export function presentPriceBook(stored: PriceBook | null, fallback: PriceBookDa
   };
 }
 
+/** What the builder sees of a line: prices, never the plant's costs (which imply its margin). */
+const builderLine = (l: QuoteBody['lines'][number]) => ({
+  mark: l.mark,
+  description: l.description,
+  quantity: l.quantity,
+  plies: l.plies,
+  boardFeet: l.boardFeet,
+  plates: l.plates.map((p) => ({ plate: p.plate, count: p.count })),
+  unitPrice: l.unitPrice,
+  lineTotal: l.lineTotal,
+});
+
 /** A quote revision as the client sees it (shared `quoteSchema`); money as numbers. */
-export function presentQuote(q: Quote, superseded: boolean): QuoteBody {
+export function presentQuote(q: Quote, superseded: boolean, viewer: User): QuoteBody {
   const s = q.snapshot as unknown as QuoteSnapshot;
   return {
     id: q.id,
@@ -29,7 +41,7 @@ export function presentQuote(q: Quote, superseded: boolean): QuoteBody {
     number: q.number,
     reference: q.reference,
     currency: s.currency,
-    lines: s.price.lines,
+    lines: viewer.role === 'builder' ? s.price.lines.map(builderLine) : s.price.lines,
     subtotal: s.price.subtotal,
     delivery: s.price.delivery,
     tax: s.price.tax,

@@ -60,12 +60,15 @@ export const quoteLineSchema = z.object({
   quantity: z.number().int(),
   plies: z.number().int(),
   boardFeet: z.number(),
-  lumberCost: z.number(),
-  plates: z.array(z.object({ plate: z.string(), count: z.number().int(), cost: z.number() })),
-  plateCost: z.number(),
-  labourMinutes: z.number(),
-  labourCost: z.number(),
-  unitCost: z.number(),
+  // Costs are the plant's own: present for staff, left out of what a builder receives.
+  lumberCost: z.number().optional(),
+  plates: z.array(
+    z.object({ plate: z.string(), count: z.number().int(), cost: z.number().optional() }),
+  ),
+  plateCost: z.number().optional(),
+  labourMinutes: z.number().optional(),
+  labourCost: z.number().optional(),
+  unitCost: z.number().optional(),
   unitPrice: z.number(),
   lineTotal: z.number(),
 });

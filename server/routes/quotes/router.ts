@@ -49,9 +49,9 @@ export function quotesRouter() {
     requireUser,
     order,
     authorize(quotePolicy.list),
-    handle(async (_req, res) => {
+    handle(async (req, res) => {
       const list = await revisions(res.locals.record);
-      res.json(list.map((q, i) => presentQuote(q, i > 0)));
+      res.json({ items: list.map((q, i) => presentQuote(q, i > 0, req.user!)) });
     }),
   );
 
@@ -63,7 +63,7 @@ export function quotesRouter() {
     handle(async (req, res) => {
       const created = await createQuote(req.user!, res.locals.record);
       const quote = await Quote.findByPk(created.id, { include: withCreator });
-      res.status(201).json(presentQuote(quote!, false));
+      res.status(201).json(presentQuote(quote!, false, req.user!));
     }),
   );
 
@@ -73,9 +73,9 @@ export function quotesRouter() {
     order,
     loadQuote,
     authorize(quotePolicy.show),
-    handle(async (_req, res) => {
+    handle(async (req, res) => {
       const quote = res.locals.quote as Quote;
-      res.json(presentQuote(quote, await isSuperseded(quote)));
+      res.json(presentQuote(quote, await isSuperseded(quote), req.user!));
     }),
   );
 
@@ -110,7 +110,7 @@ export function quotesRouter() {
         res.locals.quote,
         req.app.locals.mailer ?? null,
       );
-      res.json(presentQuote(sent, false));
+      res.json(presentQuote(sent, false, req.user!));
     }),
   );
 

@@ -147,7 +147,7 @@ describe('quote revisions', () => {
     expect(second.lines[0].quantity).toBe(10);
     expect(second.total).toBeGreaterThan(first.total);
 
-    const list = (await sales.get(`/api/orders/${order.id}/quotes`).expect(200)).body;
+    const list = (await sales.get(`/api/orders/${order.id}/quotes`).expect(200)).body.items;
     expect(
       list.map((q: { number: number; superseded: boolean }) => [q.number, q.superseded]),
     ).toEqual([
