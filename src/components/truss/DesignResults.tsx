@@ -1,4 +1,4 @@
-import type { ReactNode } from 'react';
+import { memo, type ReactNode } from 'react';
 import type { PresentedDesign, PresentedDeflection } from '../../../shared/engine/design';
 import { Alert, Badge, Card } from '../ui';
 import { csiBand, formatCsi } from './csi';
@@ -188,7 +188,7 @@ export function DesignCautions({ cautions }: { cautions: readonly string[] }) {
  * Everything below the drawing: verdict, members, reactions and bearings, deflection, plates,
  * warnings, assumptions and the cautions.
  */
-export function DesignResults({ design }: { design: PresentedDesign }) {
+export const DesignResults = memo(function DesignResults({ design }: { design: PresentedDesign }) {
   return (
     <div className="flex flex-col gap-4">
       <DesignVerdict design={design} />
@@ -210,4 +210,4 @@ export function DesignResults({ design }: { design: PresentedDesign }) {
       <DesignCautions cautions={design.cautions} />
     </div>
   );
-}
+});

@@ -1,4 +1,4 @@
-import { useCallback, useLayoutEffect, useMemo, useRef, useState } from 'react';
+import { useCallback, useDeferredValue, useLayoutEffect, useMemo, useRef, useState } from 'react';
 import { useForm, useWatch, type FieldErrors, type Resolver } from 'react-hook-form';
 import { Link, useNavigate } from 'react-router';
 import { PROFILE_KIND_LABELS } from '../../../../shared/engine/profiles';
@@ -119,7 +119,9 @@ export function TrussEditor({
     [live.crashed, server.data, reading.input],
   );
   const shown = fallback ?? run;
-  const presented = shown?.presented;
+  // The tables follow the drawing in a deferred render: the drawing commits first on every
+  // keystroke, and a newer keystroke interrupts an unfinished table render instead of waiting.
+  const presented = useDeferredValue(shown?.presented);
   const onValid = (formValues: TrussFormValues) => {
     const request = formToRequest(formValues, units).request;
     if (!request) return;
