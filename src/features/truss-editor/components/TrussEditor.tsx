@@ -220,13 +220,15 @@ export function TrussEditor({
               </div>
             </Card>
             {presented ? (
-              <div className={live.stale && !fallback ? 'opacity-50' : undefined}>
+              <div>
                 {live.stale && !fallback ? (
-                  <p role="status" className="mb-2 text-sm font-medium text-warning-800">
+                  <Alert tone="warning" className="mb-2">
                     These results belong to the last valid truss, not to the fields as they are now.
-                  </p>
+                  </Alert>
                 ) : null}
-                <DesignResults design={presented} />
+                <div className={live.stale && !fallback ? 'opacity-50' : undefined}>
+                  <DesignResults design={presented} />
+                </div>
               </div>
             ) : null}
           </div>
