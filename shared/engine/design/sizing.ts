@@ -100,7 +100,7 @@ export function checkOverCombinations(
 ): MemberVerdict {
   const member = ctx.profile.members[k];
   const { leStrong, leWeak } = effectiveLengths(member, option.braced);
-  const { axial, moment, members: m } = ctx.demands;
+  const { axial, moment, spanMoment, supportMoment, members: m } = ctx.demands;
   const repetitive = ctx.repetitive && member.role !== 'web';
   let worst: MemberVerdict = { csi: -1, combination: 0, governing: 'tension' };
   const combos = order ?? ctx.critical[k];
@@ -111,6 +111,8 @@ export function checkOverCombinations(
       plies: ctx.plies,
       axial: axial[i * m + k],
       moment: moment[i * m + k],
+      spanMoment: spanMoment[i * m + k],
+      supportMoment: supportMoment[i * m + k],
       leStrong,
       leWeak,
       cd: ctx.cds[i],

@@ -12,6 +12,14 @@ export interface MemberCheckInput {
   axial: number;
   /** Largest absolute in-plane bending moment, N·mm (strong axis). */
   moment: number;
+  /**
+   * The part of `moment` that acts at a panel point (a support of the continuous chord), N·mm.
+   * When given, the compression + bending interaction amplifies only the span moment
+   * (`moment` is then taken as the span moment unless `spanMoment` says otherwise).
+   */
+  supportMoment?: number;
+  /** The largest moment inside the span, N·mm (defaults to `moment`). */
+  spanMoment?: number;
   /** Effective lengths, mm: strong axis (in the truss plane, over d) and weak axis (over b). */
   leStrong: number;
   leWeak: number;
@@ -117,8 +125,16 @@ export function checkMember(input: MemberCheckInput): MemberCheckResult {
     }
     if (moment > 0) {
       ratios.bending = fb / dv.fb;
-      const cb = compressionBendingIndex(fa, column.fcPrime, fb, dv.fb, column.fcEStrong);
-      ratios.compressionBending = cb.index;
+      // NDS 2018 3.9.2's amplifier 1/(1 − fc/FcE1) stands for the chord bowing between its
+      // supports. At a panel point the chord is held in plane, so the support moment enters
+      // unamplified: (fc/Fc′)² + fb/Fb′ (common practice for continuous truss chords).
+      const split = input.supportMoment !== undefined;
+      const fbSpan = split ? Math.abs(input.spanMoment ?? input.moment) / section.sx : fb;
+      const cb = compressionBendingIndex(fa, column.fcPrime, fbSpan, dv.fb, column.fcEStrong);
+      const atPanelPoint = split
+        ? (fa / column.fcPrime) ** 2 + Math.abs(input.supportMoment!) / section.sx / dv.fb
+        : 0;
+      ratios.compressionBending = Math.max(cb.index, atPanelPoint);
       if (cb.buckles)
         notes.push(
           'fc ≥ FcE about the bending axis (NDS 2018 3.9.2): the member buckles in plane.',

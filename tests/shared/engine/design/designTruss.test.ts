@@ -246,3 +246,17 @@ describe('chord bending from the continuous chord', () => {
     });
   }
 });
+
+describe('panel-point moments are not amplified (NDS 2018 3.9.2 applied to the span moment)', () => {
+  // Common practice: a 24 ft 4/12 Fink at 20/10/0/10 psf, 24 in o.c., is built with 2x4 No.2-grade
+  // chords. With the amplifier on the span moment only, both of these 2x4 top chords pass.
+  for (const lumber of ['2x4 SPF-1/2', '2x4 SP-2']) {
+    it(`passes the light Fink with a ${lumber} top chord`, () => {
+      const d = designTruss(engineInput(lightFink({ lumber: { topChord: [lumber] } })));
+      const top = d.members.filter((x) => x.role === 'topChord');
+      expect(top.every((m) => m.lumber === lumber)).toBe(true);
+      expect(Math.max(...top.map((m) => m.csi))).toBeLessThan(1);
+      expect(d.ok).toBe(true);
+    });
+  }
+});

@@ -127,3 +127,33 @@ describe('combined and limits (hand calcs with NDS 2018 3.9.1 / 3.7.1.4)', () =>
     );
   });
 });
+
+describe('compression + bending with the moment split into span and panel-point parts', () => {
+  // Unamplified at the panel point: (fc/Fc′)² + fb/Fb′ (common practice for continuous chords);
+  // the span moment keeps NDS 2018 3.9.2's amplifier 1/(1 − fc/FcE1).
+  const base = {
+    lumberId: '2x4 SPF-1/2',
+    plies: 1,
+    axial: -8000,
+    leStrong: 1500,
+    leWeak: 0,
+    cd: 1.25,
+    repetitive: true,
+  };
+  it('a support moment alone is not amplified', () => {
+    const plain = checkMember({ ...base, moment: 400_000 });
+    const split = checkMember({ ...base, moment: 400_000, supportMoment: 400_000, spanMoment: 0 });
+    const expected =
+      (split.stresses.axial / -split.capacities.fcPrime) ** 2 +
+      split.stresses.bending / split.capacities.fbPrime;
+    expect(split.ratios.compressionBending!).toBeWithin(expected, { rel: 1e-9 });
+    expect(split.ratios.compressionBending!).toBeLessThan(plain.ratios.compressionBending!);
+  });
+  it('a span moment alone gives the plain NDS 3.9.2 result', () => {
+    const plain = checkMember({ ...base, moment: 300_000 });
+    const split = checkMember({ ...base, moment: 300_000, supportMoment: 0, spanMoment: 300_000 });
+    expect(split.ratios.compressionBending!).toBeWithin(plain.ratios.compressionBending!, {
+      rel: 1e-12,
+    });
+  });
+});
