@@ -1,3 +1,4 @@
+import fc from 'fast-check';
 import { expect } from 'vitest';
 
 /** Relative-or-absolute tolerance matcher: |a − b| ≤ max(abs, rel·|b|). */
@@ -25,3 +26,7 @@ declare module 'vitest' {
   // eslint-disable-next-line @typescript-eslint/no-empty-object-type, @typescript-eslint/no-explicit-any
   interface Matchers<T = any> extends ToleranceMatchers<T> {}
 }
+
+// Property tests explore new random cases on every local run; CI replays one fixed seed so a run
+// is repeatable (a failure prints its seed and counterexample either way).
+if (process.env.CI) fc.configureGlobal({ seed: 20261201 });
