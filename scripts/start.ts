@@ -1,71 +1,92 @@
 /**
  * npm start: the project's PostgreSQL (or DATABASE_URL), migrations, demo data when the database is
- * empty, a production build of the client, then app + API on http://127.0.0.1:3000. Ctrl-C stops
- * the app and the database cleanly.
+ * empty, a production build of the client, the local SMTP fake (unless SMTP_URL), then app + API on
+ * http://127.0.0.1:3000. Ctrl-C stops the app, the mail fake and the database cleanly.
  */
+import type { Server } from 'node:http';
 import { build } from 'vite';
 import { connect } from '../server/db/sequelize';
 import { migrator } from '../server/db/migrator';
 import { createApp } from '../server/app';
 import { readConfig } from '../server/config';
 import { User } from '../server/models';
+import { provideMailer } from '../server/services/provideMailer';
+import type { Mailer } from '../server/services/mail';
 import { DEMO_PASSWORD, DEMO_SIGN_INS, seedDemo } from '../seeders/demo';
 import { APP_PG_PORT, provideDatabase } from './database';
-import { provideMailer } from '../server/services/provideMailer';
 
 const config = readConfig();
 const db = await provideDatabase({ dir: '.data/postgres', port: APP_PG_PORT, name: 'spanwise' });
-console.log(
-  db.cluster
-    ? `PostgreSQL: 127.0.0.1:${APP_PG_PORT} (data in .data/postgres)`
-    : 'PostgreSQL: DATABASE_URL',
-);
 const sequelize = connect(db.url);
-const applied = await migrator(sequelize).up();
-if (applied.length) console.log(`Migrations applied: ${applied.map((m) => m.name).join(', ')}`);
-if (config.demo && (await User.count()) === 0) {
-  await seedDemo();
-  console.log('Demo data seeded.');
-}
-if (process.env.SKIP_BUILD !== '1') {
-  console.log('Building the client…');
-  await build({ logLevel: 'warn' });
-}
-const mail = await provideMailer();
-console.log(
-  mail.fake
-    ? `Mail: local SMTP fake on ${mail.fake.url} (inbox at /inbox for the plant manager)`
-    : 'Mail: SMTP_URL',
-);
-const app = createApp({
-  sequelize,
-  databaseUrl: db.url,
-  config,
-  clientDir: 'dist/client',
-  mailer: mail,
-});
-const server = app.listen(config.port, config.host, () => {
-  console.log(`\nSpanwise is running at http://${config.host}:${config.port}`);
-  if (config.demo) {
-    console.log(`Demo sign-ins (password "${DEMO_PASSWORD}"):`);
-    for (const u of DEMO_SIGN_INS) console.log(`  ${u.role.padEnd(9)} ${u.email}`);
-  }
-  console.log('Press Ctrl-C to stop.');
-});
+let server: Server | null = null;
+let mail: Mailer | null = null;
+let closeApp: () => Promise<void> = async () => undefined;
 
 let stopping = false;
-async function stop() {
+/** Stop whatever has started, in reverse order; the database last. */
+async function stop(code = 0) {
   if (stopping) return;
   stopping = true;
   console.log('\nStopping…');
-  server.close();
-  server.closeAllConnections();
-  await app.locals.close();
-  await mail.fake?.close();
-  await sequelize.close();
+  server?.close();
+  server?.closeAllConnections();
+  await closeApp().catch(() => undefined);
+  await mail?.fake?.close().catch(() => undefined);
+  await sequelize.close().catch(() => undefined);
   db.stop();
   console.log('Stopped app and database.');
-  process.exit(0);
+  process.exit(code);
 }
-process.on('SIGINT', stop);
-process.on('SIGTERM', stop);
+process.on('SIGINT', () => void stop());
+process.on('SIGTERM', () => void stop());
+
+try {
+  console.log(
+    db.cluster
+      ? `PostgreSQL: 127.0.0.1:${APP_PG_PORT} (data in .data/postgres)`
+      : 'PostgreSQL: DATABASE_URL',
+  );
+  const applied = await migrator(sequelize).up();
+  if (applied.length) console.log(`Migrations applied: ${applied.map((m) => m.name).join(', ')}`);
+  if (config.demo && (await User.count()) === 0) {
+    await seedDemo();
+    console.log('Demo data seeded.');
+  }
+  if (process.env.SKIP_BUILD !== '1') {
+    console.log('Building the client…');
+    // Vite's build sets NODE_ENV=production for itself; the app keeps the mode the user chose.
+    const nodeEnv = process.env.NODE_ENV;
+    await build({ logLevel: 'warn' });
+    if (nodeEnv === undefined) delete process.env.NODE_ENV;
+    else process.env.NODE_ENV = nodeEnv;
+  }
+  mail = await provideMailer();
+  console.log(
+    mail.fake
+      ? `Mail: local SMTP fake on ${mail.fake.url} (the plant manager's Demo inbox shows it)`
+      : 'Mail: SMTP_URL',
+  );
+  const app = createApp({
+    sequelize,
+    databaseUrl: db.url,
+    config,
+    clientDir: 'dist/client',
+    mailer: mail,
+  });
+  closeApp = app.locals.close;
+  server = app.listen(config.port, config.host, () => {
+    console.log(`\nSpanwise is running at http://${config.host}:${config.port}`);
+    if (config.demo) {
+      console.log(`Demo sign-ins (password "${DEMO_PASSWORD}"):`);
+      for (const u of DEMO_SIGN_INS) console.log(`  ${u.role.padEnd(9)} ${u.email}`);
+    }
+    console.log('Press Ctrl-C to stop.');
+  });
+  server.on('error', (e) => {
+    console.error(`Could not listen on ${config.host}:${config.port}: ${e.message}`);
+    void stop(1);
+  });
+} catch (e) {
+  console.error(e);
+  await stop(1);
+}
