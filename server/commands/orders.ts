@@ -3,29 +3,7 @@ import type { CreateLineInput, ReviewInput, UpdateLineInput } from '../../shared
 import { Order, OrderLine, Plant, type Job, type User } from '../models';
 import { AppError, badRequest, conflict } from '../errors';
 import { computeDesign, type ComputedDesign } from '../services/design';
-import { audit } from './audit';
-
-/** Every change to an order lands in its history, and marks the order as touched. */
-async function orderEvent(
-  t: Transaction,
-  actor: User,
-  order: Order,
-  action: string,
-  data: Record<string, unknown>,
-) {
-  await Order.sequelize!.query('UPDATE orders SET updated_at = now() WHERE id = :id', {
-    replacements: { id: order.id },
-    transaction: t,
-  });
-  await audit(t, {
-    plantId: order.plantId,
-    actorId: actor.id,
-    action,
-    subjectType: 'order',
-    subjectId: order.id,
-    data,
-  });
-}
+import { orderEvent } from './audit';
 
 /**
  * Lock the order row so concurrent line writes keep positions and numbers consistent. A quoted

@@ -1,4 +1,3 @@
-import type { Transaction } from 'sequelize';
 import { DESIGN_CAUTIONS, type PresentedDesign } from '../../shared/engine/design';
 import { Customer, Job, Order, OrderLine, Plant, Quote, type User } from '../models';
 import { AppError, conflict } from '../errors';
@@ -6,33 +5,11 @@ import type { Mailer } from '../services/mail';
 import { priceQuote, summarizeDesign, type QuoteSnapshot } from '../services/pricing';
 import { renderQuotePdf } from '../services/quotePdf';
 import { formatMoney, formatDate } from '../services/quotePdf/format';
-import { audit } from './audit';
+import { orderEvent } from './audit';
 import { pricesFor } from './priceBook';
 
 /** Orders that may take a new quote revision: a draft, or one already quoted. */
 const QUOTABLE = new Set(['draft', 'quoted']);
-
-/** An order history event (and the order marked as touched), inside the command's transaction. */
-async function orderEvent(
-  t: Transaction,
-  actor: User,
-  order: Order,
-  action: string,
-  data: Record<string, unknown>,
-) {
-  await Order.sequelize!.query('UPDATE orders SET updated_at = now() WHERE id = :id', {
-    replacements: { id: order.id },
-    transaction: t,
-  });
-  await audit(t, {
-    plantId: order.plantId,
-    actorId: actor.id,
-    action,
-    subjectType: 'order',
-    subjectId: order.id,
-    data,
-  });
-}
 
 const isoDate = (d: Date) => d.toISOString().slice(0, 10);
 const addDays = (d: Date, days: number) => new Date(d.getTime() + days * 86_400_000);
