@@ -28,3 +28,5 @@ export { DetailList } from './DetailList';
 export type { DetailItem } from './DetailList';
 export { FilterSelect, ListToolbar, RecordFilter } from './FilterSelect';
 export type { FilterSelectProps, RecordFilterProps } from './FilterSelect';
+export { PagedTable } from './PagedTable';
+export type { PagedTableProps, PageOf } from './PagedTable';

@@ -2,15 +2,12 @@ import { useState } from 'react';
 import { useNavigate } from 'react-router';
 import {
   Button,
-  Card,
-  DataTable,
   Dialog,
   EmptyState,
   FilterSelect,
   ListToolbar,
+  PagedTable,
   PageHeader,
-  Pager,
-  QueryState,
   SearchBox,
 } from '../../../components/ui';
 import { useListParams } from '../../../lib/use-list-params';
@@ -58,44 +55,30 @@ export function BuildersPage() {
           <option value="deposit">Deposit required</option>
         </FilterSelect>
       </ListToolbar>
-      <Card flush>
-        <QueryState query={customers} what="builder companies">
-          {(page) => (
-            <>
-              <DataTable
-                caption="Builder companies"
-                columns={builderColumns}
-                data={page.items}
-                rowKey={(c) => c.id}
-                sorting={{
-                  sort: query.sort,
-                  onSort: (sort) => update({ sort, page: 1 }),
-                  columns: BUILDER_SORT_COLUMNS,
-                }}
-                empty={
-                  <EmptyState
-                    title={
-                      params.q || query.terms
-                        ? 'No builders match this search'
-                        : 'No builder companies yet'
-                    }
-                  >
-                    {params.q || query.terms
-                      ? 'Try other words, or show all builders.'
-                      : 'Add the first builder company with “New builder”.'}
-                  </EmptyState>
-                }
-              />
-              <Pager
-                page={page.page}
-                pageSize={page.pageSize}
-                total={page.total}
-                onPage={(p) => update({ page: p })}
-              />
-            </>
-          )}
-        </QueryState>
-      </Card>
+      <PagedTable
+        query={customers}
+        what="builder companies"
+        caption="Builder companies"
+        columns={builderColumns}
+        rowKey={(c) => c.id}
+        sorting={{
+          sort: query.sort,
+          onSort: (sort) => update({ sort, page: 1 }),
+          columns: BUILDER_SORT_COLUMNS,
+        }}
+        empty={
+          <EmptyState
+            title={
+              params.q || query.terms ? 'No builders match this search' : 'No builder companies yet'
+            }
+          >
+            {params.q || query.terms
+              ? 'Try other words, or show all builders.'
+              : 'Add the first builder company with “New builder”.'}
+          </EmptyState>
+        }
+        onPage={(p) => update({ page: p })}
+      />
       <Dialog open={adding} title="New builder" onClose={close} wide>
         <BuilderForm
           mode="create"

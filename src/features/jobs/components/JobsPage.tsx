@@ -1,12 +1,9 @@
 import type { Role } from '../../../../shared/api/roles';
 import {
-  Card,
-  DataTable,
   EmptyState,
   ListToolbar,
+  PagedTable,
   PageHeader,
-  Pager,
-  QueryState,
   RecordFilter,
   SearchBox,
 } from '../../../components/ui';
@@ -48,38 +45,26 @@ export function JobsPage({ role }: { role: Role }) {
           />
         ) : null}
       </ListToolbar>
-      <Card flush>
-        <QueryState query={jobs} what="jobs">
-          {(page) => (
-            <>
-              <DataTable
-                caption="Jobs"
-                columns={jobColumns}
-                data={page.items}
-                rowKey={(job) => job.id}
-                sorting={{
-                  sort: query.sort,
-                  onSort: (sort) => update({ sort, page: 1 }),
-                  columns: JOB_SORT_COLUMNS,
-                }}
-                empty={
-                  <EmptyState title={filtered ? 'No jobs match this search' : 'No jobs yet'}>
-                    {filtered
-                      ? 'Try other words, or show all builders.'
-                      : 'Jobs are added from a builder’s page.'}
-                  </EmptyState>
-                }
-              />
-              <Pager
-                page={page.page}
-                pageSize={page.pageSize}
-                total={page.total}
-                onPage={(p) => update({ page: p })}
-              />
-            </>
-          )}
-        </QueryState>
-      </Card>
+      <PagedTable
+        query={jobs}
+        what="jobs"
+        caption="Jobs"
+        columns={jobColumns}
+        rowKey={(job) => job.id}
+        sorting={{
+          sort: query.sort,
+          onSort: (sort) => update({ sort, page: 1 }),
+          columns: JOB_SORT_COLUMNS,
+        }}
+        empty={
+          <EmptyState title={filtered ? 'No jobs match this search' : 'No jobs yet'}>
+            {filtered
+              ? 'Try other words, or show all builders.'
+              : 'Jobs are added from a builder’s page.'}
+          </EmptyState>
+        }
+        onPage={(p) => update({ page: p })}
+      />
     </>
   );
 }

@@ -1,14 +1,11 @@
 import { ORDER_STATUSES } from '../../../../shared/api/orders';
 import type { Role } from '../../../../shared/api/roles';
 import {
-  Card,
-  DataTable,
   EmptyState,
   FilterSelect,
   ListToolbar,
+  PagedTable,
   PageHeader,
-  Pager,
-  QueryState,
   RecordFilter,
   SearchBox,
 } from '../../../components/ui';
@@ -68,40 +65,28 @@ export function OrdersPage({ role }: { role: Role }) {
           />
         ) : null}
       </ListToolbar>
-      <Card flush>
-        <QueryState query={orders} what="orders">
-          {(page) => (
-            <>
-              <DataTable
-                caption="Orders"
-                columns={orderColumns}
-                data={page.items}
-                rowKey={(order) => order.id}
-                sorting={{
-                  sort: query.sort,
-                  onSort: (sort) => update({ sort, page: 1 }),
-                  columns: ORDER_SORT_COLUMNS,
-                }}
-                empty={
-                  <EmptyState title={filtered ? 'No orders match this search' : 'No orders yet'}>
-                    {filtered
-                      ? 'Try other words, or another status.'
-                      : role === 'builder'
-                        ? 'Orders appear here once the plant starts one for your jobs.'
-                        : 'Orders are started from a job’s page with “New order”.'}
-                  </EmptyState>
-                }
-              />
-              <Pager
-                page={page.page}
-                pageSize={page.pageSize}
-                total={page.total}
-                onPage={(p) => update({ page: p })}
-              />
-            </>
-          )}
-        </QueryState>
-      </Card>
+      <PagedTable
+        query={orders}
+        what="orders"
+        caption="Orders"
+        columns={orderColumns}
+        rowKey={(order) => order.id}
+        sorting={{
+          sort: query.sort,
+          onSort: (sort) => update({ sort, page: 1 }),
+          columns: ORDER_SORT_COLUMNS,
+        }}
+        empty={
+          <EmptyState title={filtered ? 'No orders match this search' : 'No orders yet'}>
+            {filtered
+              ? 'Try other words, or another status.'
+              : role === 'builder'
+                ? 'Orders appear here once the plant starts one for your jobs.'
+                : 'Orders are started from a job’s page with “New order”.'}
+          </EmptyState>
+        }
+        onPage={(p) => update({ page: p })}
+      />
     </>
   );
 }

@@ -3,12 +3,9 @@ import type { ReviewQueueItem } from '../../../../shared/api/orders';
 import { CsiBadge } from '../../../components/truss/MemberTable';
 import {
   Badge,
-  Card,
-  DataTable,
   EmptyState,
+  PagedTable,
   PageHeader,
-  Pager,
-  QueryState,
   tableColumnHelper,
 } from '../../../components/ui';
 import { formatDateTime } from '../../../lib/format';
@@ -61,27 +58,15 @@ export function ReviewQueuePage() {
         title="Review queue"
         description="Truss designs waiting for review. Open a mark to check it and decide."
       />
-      <Card flush>
-        <QueryState query={queue} what="the review queue">
-          {(page) => (
-            <>
-              <DataTable
-                caption="Designs waiting for review"
-                columns={columns}
-                data={page.items}
-                rowKey={(item) => item.id}
-                empty={<EmptyState title="Nothing to review" />}
-              />
-              <Pager
-                page={page.page}
-                pageSize={page.pageSize}
-                total={page.total}
-                onPage={(p) => update({ page: p })}
-              />
-            </>
-          )}
-        </QueryState>
-      </Card>
+      <PagedTable
+        query={queue}
+        what="the review queue"
+        caption="Designs waiting for review"
+        columns={columns}
+        rowKey={(item) => item.id}
+        empty={<EmptyState title="Nothing to review" />}
+        onPage={(p) => update({ page: p })}
+      />
     </>
   );
 }
