@@ -36,20 +36,51 @@ const RANK: Record<MemberRole, number> = { bottomChord: 0, topChord: 0, web: 1 }
 // Directions closer than this (radians², roughly) are treated as the same line.
 const SAME_DIRECTION = 1e-12;
 
+// A chord continues through the joint when another chord leaves it within about 1° of straight
+// on: one board (or a butt splice), which no web may cut into.
+const THROUGH_COS = Math.cos((179 * Math.PI) / 180);
+
+// A web that meets a chord ending at the joint at less than 45° is mitred with it on their
+// bisector instead of butting it: a butt cut that shallow leaves a tapered web end longer than
+// the web is deep (a feather edge), which shops avoid (common practice). Steeper webs butt the
+// chord, which keeps its full band.
+const MITRE_COS = Math.cos(Math.PI / 4);
+
+/** For each member: is it a chord that runs straight through the joint? */
+const runsThrough = (members: LocalMember[]): boolean[] =>
+  members.map((m, i) =>
+    m.role === 'web'
+      ? false
+      : members.some(
+          (o, j) =>
+            j !== i &&
+            o.role !== 'web' &&
+            m.direction[0] * o.direction[0] + m.direction[1] * o.direction[1] < THROUGH_COS,
+        ),
+  );
+
 /**
  * Each member's effective contact region (before the plate outline): a band of its depth along
  * its axis from the joint, less the edge exclusion, ending ½ in (the end exclusion) short of
- * every neighbour that cuts it: a mitre with members of its own rank, the band of any member
- * that runs through it. Computed once per joint; each plate size then only clips rectangles.
+ * every neighbour that cuts it. Members of one rank (chord–chord, web–web) share their overlap
+ * on the bisector; so do a web and a chord that ends at the joint when they meet at under 45°.
+ * Otherwise the web stops ½ in short of the chord's band, which keeps its wood. Computed once
+ * per joint; each plate size and placement then only clips rectangles.
  */
 export const memberContactRegions = (members: LocalMember[], rules: ContactRules): Region[] => {
+  const through = runsThrough(members);
   const out: Region[] = [];
-  for (let i = 0; i < members.length; i++) out.push(contactRegion(members, i, rules));
+  for (let i = 0; i < members.length; i++) out.push(contactRegion(members, through, i, rules));
   return out;
 };
 
 /** The contact region of member i (plain loops: this runs for every member of every joint). */
-const contactRegion = (members: LocalMember[], i: number, rules: ContactRules): Region => {
+const contactRegion = (
+  members: LocalMember[],
+  through: boolean[],
+  i: number,
+  rules: ContactRules,
+): Region => {
   const m = members[i];
   const half = m.halfDepth - rules.edgeExclusion;
   if (half <= 0 || rules.reach <= rules.endExclusion) return [];
@@ -61,12 +92,15 @@ const contactRegion = (members: LocalMember[], i: number, rules: ContactRules): 
     const du = m.direction[0] - o.direction[0];
     const dv = m.direction[1] - o.direction[1];
     const len2 = du * du + dv * dv;
-    if (RANK[o.role] === RANK[m.role]) {
+    const cos = m.direction[0] * o.direction[0] + m.direction[1] * o.direction[1];
+    const chord = RANK[o.role] < RANK[m.role] ? j : RANK[o.role] > RANK[m.role] ? i : -1;
+    const mitre = chord < 0 || (!through[chord] && cos > MITRE_COS);
+    if (mitre) {
       if (len2 < SAME_DIRECTION || ring.length < 3) continue;
       const len = Math.sqrt(len2);
       // Half-plane on this member's side of the bisector, moved back by the end exclusion.
       ring = clipHalfPlane(ring, du / len, dv / len, rules.endExclusion);
-    } else if (RANK[o.role] < RANK[m.role]) {
+    } else if (chord === j) {
       const grown = o.halfDepth + rules.endExclusion;
       cutters.push(stripRing(o.direction, -rules.endExclusion, rules.reach, grown));
     }

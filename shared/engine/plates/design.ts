@@ -1,6 +1,6 @@
 import { EngineError } from '../errors';
 import { MM_PER_INCH, N_PER_LBF, TOLERANCE } from '../units';
-import { memberContactRegions, regionAreaInPlate, type LocalMember } from './contact';
+import { memberContactRegions, regionAreaInPlate, type LocalMember, type Region } from './contact';
 import { centreLineLength, type Point } from './geometry';
 import type {
   Direction,
@@ -29,14 +29,23 @@ const unit = (d: Direction, what: string): Point => {
   return [d.x / len, d.y / len];
 };
 
-/** Plate axis: the bottom chord, or at a splice the spliced chord, else the first member. */
+/**
+ * Plate length axis: along the bottom chord (else the top chord, else the first member). Where
+ * two such chords meet at an angle (a peak, a scissor's bottom-chord peak) the axis is square to
+ * their bisector, d₁ − d₂, so the plate sits symmetric on the joint; on a straight chord that is
+ * the chord's own line.
+ */
 const plateAxis = (joint: PlateJoint, options: PlateDesignOptions): Point => {
   if (options.orientation) return unit(options.orientation, `Plate at joint ${joint.id}`);
-  const chord =
-    joint.members.find((m) => m.role === 'bottomChord') ??
-    joint.members.find((m) => m.role !== 'web') ??
-    joint.members[0];
-  const [x, y] = unit(chord.direction, `Member ${chord.id}`);
+  const bottom = joint.members.filter((m) => m.role === 'bottomChord');
+  const chords = bottom.length > 0 ? bottom : joint.members.filter((m) => m.role !== 'web');
+  const first = chords[0] ?? joint.members[0];
+  let [x, y] = unit(first.direction, `Member ${first.id}`);
+  if (chords.length === 2) {
+    const [x2, y2] = unit(chords[1].direction, `Member ${chords[1].id}`);
+    const len = Math.hypot(x - x2, y - y2);
+    if (len > TOLERANCE) [x, y] = [(x - x2) / len, (y - y2) / len];
+  }
   // A plate is symmetric: keep its axis pointing right (or up) so the reported angle is stable.
   return x < -TOLERANCE || (Math.abs(x) <= TOLERANCE && y < 0) ? [-x, -y] : [x, y];
 };
@@ -114,18 +123,28 @@ const steelChecks = (
   return [];
 };
 
+// Slides are tried on a fixed ¼ in grid (common practice: plates are placed to the nearest
+// ¼ in). The grid does not depend on the plate, and a larger plate may slide at least as far,
+// so every placement of a smaller plate is also one of a larger plate that contains it: a
+// larger plate never gives a member less area.
+const SLIDE_STEP_MM = 0.25 * MM_PER_INCH;
+const CENTRED = [0];
+
 /**
- * Where to try the plate centre across its length axis, mm: on the joint first; at a panel
- * point also slid toward each side until its edge just covers the chord's far face, so the
- * plate reaches further onto webs that leave the chord on one side (common practice). Heels and
- * splices stay centred, since their steel checks assume the joint line through the centre.
+ * Where to try the plate centre across its length axis, mm: on the joint first, then slid
+ * ¼ in at a time to either side, as far as the plate still covers the chord's depth (its edge
+ * at the chord's far face), so the plate reaches further onto the members that need area
+ * (common practice). Heels and splices stay centred: their steel checks assume the joint line
+ * through the centre.
  */
 const plateOffsets = (kind: PlateJoint['kind'], chordHalf: number, halfWidth: number) => {
-  if (kind === 'heel' || kind === 'splice') return CENTRED;
-  const slide = halfWidth - chordHalf;
-  return chordHalf > 0 && slide > 0 ? [0, slide, -slide] : CENTRED;
+  if (kind === 'heel' || kind === 'splice' || chordHalf <= 0) return CENTRED;
+  const steps = Math.floor((halfWidth - chordHalf) / SLIDE_STEP_MM + TOLERANCE);
+  if (steps <= 0) return CENTRED;
+  const out = [0];
+  for (let k = 1; k <= steps; k++) out.push(k * SLIDE_STEP_MM, -k * SLIDE_STEP_MM);
+  return out;
 };
-const CENTRED = [0];
 
 /** Largest half depth of the chords at a joint, mm (0 when only webs meet). */
 const chordHalfDepth = (local: LocalMember[]) => {
@@ -140,8 +159,9 @@ const sortedPlates = (catalog: PlateCatalog) => {
   let entry = sortedCatalogs.get(catalog);
   if (!entry) {
     const plates = [...catalog.plates].sort(byAreaThenGauge);
+    // Far enough for the corner of any plate slid by up to its own half width.
     const reach =
-      Math.max(...plates.map((p) => Math.hypot(p.width, p.length))) * (MM_PER_INCH / 2) + 1;
+      Math.max(...plates.map((p) => Math.hypot(2 * p.width, p.length))) * (MM_PER_INCH / 2) + 1;
     entry = { plates, reach };
     sortedCatalogs.set(catalog, entry);
   }
@@ -173,6 +193,68 @@ const checkJointInput = (joint: PlateJoint, catalog: PlateCatalog): void => {
   if (catalog.plates.length === 0) {
     throw new EngineError('no_plate_fits', 'The plate catalog is empty', { joint: joint.id });
   }
+};
+
+interface PlateFrame {
+  halfLength: number;
+  halfWidth: number;
+  /** Slides to try, in order, mm. */
+  offsets: readonly number[];
+  endExclusion: number;
+  edgeExclusion: number;
+}
+
+type Placement =
+  { offset: number; checks: MemberPlateCheck[] } | { failure: { member: string; ratio: number } };
+
+/**
+ * Tooth holding of every member for one plate at the first slide that holds them all, or the
+ * member that fails at the best slide tried (for the message when no plate fits).
+ */
+const placePlate = (
+  joint: PlateJoint,
+  local: LocalMember[],
+  regions: Region[],
+  order: readonly number[],
+  plate: PlateSpec,
+  cd: number,
+  frame: PlateFrame,
+): Placement => {
+  const { halfLength, halfWidth, offsets } = frame;
+  const capacityOf = (i: number, area: number) =>
+    PLATES_PER_JOINT *
+    area *
+    (lateralValueAtAngle(plate, joint.members[i].loadToGrain ?? 0) / MM2_PER_IN2) *
+    cd *
+    N_PER_LBF;
+  // Bounds over every slide at once: no slide gives a member more than the plate swept across
+  // all of them covers, nor more than its band (depth less edge margins) out to the far corner.
+  const slid = halfWidth + Math.max(...offsets.map(Math.abs));
+  const reachInPlate = Math.hypot(halfLength, slid) - frame.endExclusion;
+  for (const i of order) {
+    const demand = Math.abs(joint.members[i].force);
+    const band = 2 * Math.max(0, local[i].halfDepth - frame.edgeExclusion) * reachInPlate;
+    if (demand > capacityOf(i, Math.min(4 * halfLength * halfWidth, Math.max(0, band)))) {
+      return { failure: { member: joint.members[i].id, ratio: Infinity } };
+    }
+    const swept = capacityOf(i, regionAreaInPlate(regions[i], halfLength, slid));
+    if (demand > swept) return { failure: { member: joint.members[i].id, ratio: demand / swept } };
+  }
+  let best = { member: '', ratio: Infinity };
+  for (const offset of offsets) {
+    const checks: MemberPlateCheck[] = [];
+    for (const i of order) {
+      const area = regionAreaInPlate(regions[i], halfLength, halfWidth, offset);
+      const c = check(Math.abs(joint.members[i].force), capacityOf(i, area));
+      if (c.ratio > 1) {
+        if (c.ratio < best.ratio) best = { member: joint.members[i].id, ratio: c.ratio };
+        break;
+      }
+      checks.push({ member: joint.members[i].id, area, ...c });
+    }
+    if (checks.length === order.length) return { offset, checks };
+  }
+  return { failure: best };
 };
 
 /**
@@ -222,43 +304,18 @@ export const designJointPlate = (
       };
       continue;
     }
-    let placed: { offset: number; checks: MemberPlateCheck[] } | undefined;
-    for (const offset of plateOffsets(joint.kind, chordHalf, halfWidth)) {
-      const checks: MemberPlateCheck[] = [];
-      let fits = true;
-      for (const i of order) {
-        const m = joint.members[i];
-        const lateral = lateralValueAtAngle(plate, m.loadToGrain ?? 0) / MM2_PER_IN2; // lbf/mm²
-        const demand = Math.abs(m.force);
-        // Cheap bound first: the member's band (its depth less the edge margins) cannot reach
-        // past the plate's far corner, nor hold more than the whole plate.
-        const reachInPlate = Math.hypot(halfLength, halfWidth + Math.abs(offset)) - endExclusion;
-        const bound = Math.min(
-          4 * halfLength * halfWidth,
-          2 * Math.max(0, local[i].halfDepth - edgeExclusion) * Math.max(0, reachInPlate),
-        );
-        if (demand > PLATES_PER_JOINT * bound * lateral * cd * N_PER_LBF) {
-          failure = { member: m.id, ratio: Infinity };
-          fits = false;
-          break;
-        }
-        const area = regionAreaInPlate(regions[i], halfLength, halfWidth, offset);
-        const capacity = PLATES_PER_JOINT * area * lateral * cd * N_PER_LBF;
-        const c = check(demand, capacity);
-        if (c.ratio > 1) {
-          failure = { member: m.id, ratio: c.ratio };
-          fits = false;
-          break;
-        }
-        checks.push({ member: m.id, area, ...c });
-      }
-      if (fits) {
-        placed = { offset, checks };
-        break;
-      }
+    const fit = placePlate(joint, local, regions, order, plate, cd, {
+      halfLength,
+      halfWidth,
+      offsets: plateOffsets(joint.kind, chordHalf, halfWidth),
+      endExclusion,
+      edgeExclusion,
+    });
+    if ('failure' in fit) {
+      failure = fit.failure;
+      continue;
     }
-    if (!placed) continue;
-    const { checks, offset } = placed;
+    const { checks, offset } = fit;
     checks.sort(
       (a, b) =>
         joint.members.findIndex((m) => m.id === a.member) -
