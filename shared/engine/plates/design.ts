@@ -128,22 +128,17 @@ const steelChecks = (
 // so every placement of a smaller plate is also one of a larger plate that contains it: a
 // larger plate never gives a member less area.
 const SLIDE_STEP_MM = 0.25 * MM_PER_INCH;
-const CENTRED = [0];
 
 /**
- * Where to try the plate centre across its length axis, mm: on the joint first, then slid
- * ¼ in at a time to either side, as far as the plate still covers the chord's depth (its edge
- * at the chord's far face), so the plate reaches further onto the members that need area
- * (common practice). Heels and splices stay centred: their steel checks assume the joint line
- * through the centre.
+ * How many grid steps the plate may slide across its length axis to either side: as far as it
+ * still covers the chord's depth (its edge at the chord's far face), so it reaches further onto
+ * the members that need area (common practice). Centred first; otherwise the slide nearest the
+ * centre that holds every member. Heels and splices stay centred: their steel checks assume
+ * the joint line through the centre.
  */
-const plateOffsets = (kind: PlateJoint['kind'], chordHalf: number, halfWidth: number) => {
-  if (kind === 'heel' || kind === 'splice' || chordHalf <= 0) return CENTRED;
-  const steps = Math.floor((halfWidth - chordHalf) / SLIDE_STEP_MM + TOLERANCE);
-  if (steps <= 0) return CENTRED;
-  const out = [0];
-  for (let k = 1; k <= steps; k++) out.push(k * SLIDE_STEP_MM, -k * SLIDE_STEP_MM);
-  return out;
+const slideSteps = (kind: PlateJoint['kind'], chordHalf: number, halfWidth: number): number => {
+  if (kind === 'heel' || kind === 'splice' || chordHalf <= 0) return 0;
+  return Math.max(0, Math.floor((halfWidth - chordHalf) / SLIDE_STEP_MM + TOLERANCE));
 };
 
 /** Largest half depth of the chords at a joint, mm (0 when only webs meet). */
@@ -196,72 +191,116 @@ const checkJointInput = (joint: PlateJoint, catalog: PlateCatalog): void => {
 };
 
 interface PlateFrame {
-  halfLength: number;
-  halfWidth: number;
-  /** Slides to try, in order, mm. */
-  offsets: readonly number[];
+  /** Grid steps the plate may slide to either side (0: it stays centred). */
+  steps: number;
   endExclusion: number;
   edgeExclusion: number;
 }
 
-type Placement =
-  { offset: number; checks: MemberPlateCheck[] } | { failure: { member: string; ratio: number } };
+/** A plate placement that holds every member. */
+interface Fit {
+  offset: number;
+  checks: MemberPlateCheck[];
+}
+type Placement = Fit | { failure: { member: string; ratio: number } };
+
+/** One plate tried at one joint: what every step of its placement needs. */
+interface Trial {
+  joint: PlateJoint;
+  regions: Region[];
+  /** Member indices in the order to check them; the member that fails moves to the front. */
+  order: number[];
+  plate: PlateSpec;
+  cd: number;
+  halfLength: number;
+  halfWidth: number;
+  /** The member failing by the least at an exact slide, for the message. */
+  best: { i: number; ratio: number };
+}
+
+// Module-level functions, not closures: this runs for every plate of every joint per keystroke.
+
+const capacityOf = (t: Trial, i: number, area: number): number =>
+  PLATES_PER_JOINT *
+  area *
+  (lateralValueAtAngle(t.plate, t.joint.members[i].loadToGrain ?? 0) / MM2_PER_IN2) *
+  t.cd *
+  N_PER_LBF;
+
+/** Moves member i to the front of the check order and reports it as the plate's failure. */
+const failing = (t: Trial, i: number, ratio: number): Placement => {
+  t.order.unshift(...t.order.splice(t.order.indexOf(i), 1));
+  return { failure: { member: t.joint.members[i].id, ratio } };
+};
 
 /**
- * Tooth holding of every member for one plate at the first slide that holds them all, or the
- * member that fails at the best slide tried (for the message when no plate fits).
+ * Every member's check at one slide; or, with `spread` > 0, a bound for every slide within
+ * ±spread of `offset` (the plate swept across them: no slide there gives any member more).
+ * Undefined as soon as one member fails.
  */
-const placePlate = (
-  joint: PlateJoint,
-  local: LocalMember[],
-  regions: Region[],
-  order: readonly number[],
-  plate: PlateSpec,
-  cd: number,
-  frame: PlateFrame,
-): Placement => {
-  const { halfLength, halfWidth, offsets } = frame;
-  const capacityOf = (i: number, area: number) =>
-    PLATES_PER_JOINT *
-    area *
-    (lateralValueAtAngle(plate, joint.members[i].loadToGrain ?? 0) / MM2_PER_IN2) *
-    cd *
-    N_PER_LBF;
-  // Bounds over every slide at once: no slide gives a member more than the plate swept across
-  // all of them covers, nor more than its band (depth less edge margins) out to the far corner.
-  const slid = halfWidth + Math.max(...offsets.map(Math.abs));
-  const reachInPlate = Math.hypot(halfLength, slid) - frame.endExclusion;
-  for (const i of order) {
-    const demand = Math.abs(joint.members[i].force);
+const checksAt = (t: Trial, offset: number, spread: number): MemberPlateCheck[] | undefined => {
+  const checks: MemberPlateCheck[] = [];
+  for (let k = 0; k < t.order.length; k++) {
+    const i = t.order[k];
+    const area = regionAreaInPlate(t.regions[i], t.halfLength, t.halfWidth + spread, offset);
+    const c = check(Math.abs(t.joint.members[i].force), capacityOf(t, i, area));
+    if (c.ratio > 1) {
+      if (spread === 0 && c.ratio < t.best.ratio) t.best = { i, ratio: c.ratio };
+      if (k > 0) t.order.unshift(...t.order.splice(k, 1));
+      return undefined;
+    }
+    checks.push({ member: t.joint.members[i].id, area, ...c });
+  }
+  return checks;
+};
+
+/**
+ * Slides of k1…k2 grid steps to one side: the one nearest the centre that holds every member,
+ * found by halving the range wherever its swept bound still holds (branch and bound).
+ */
+const nearestSlide = (t: Trial, side: number, k1: number, k2: number): Fit | undefined => {
+  if (k1 > k2) return undefined;
+  const mid = ((k1 + k2) / 2) * SLIDE_STEP_MM * side;
+  if (k1 === k2) {
+    const checks = checksAt(t, mid, 0);
+    return checks ? { offset: mid, checks } : undefined;
+  }
+  if (!checksAt(t, mid, ((k2 - k1) / 2) * SLIDE_STEP_MM)) return undefined;
+  const m = Math.floor((k1 + k2) / 2);
+  return nearestSlide(t, side, k1, m) ?? nearestSlide(t, side, m + 1, k2);
+};
+
+/**
+ * Tooth holding of every member for one plate, centred or at the slide nearest the centre
+ * that holds them all, or the member that fails at the best slide tried (for the message when
+ * no plate fits).
+ */
+const placePlate = (t: Trial, local: LocalMember[], frame: PlateFrame): Placement => {
+  const { steps } = frame;
+  // Cheap bound, for every slide at once: a member's band (its depth less the edge margins)
+  // holds no more than out to the far corner of the plate slid furthest, nor the whole plate.
+  const reachInPlate =
+    Math.hypot(t.halfLength, t.halfWidth + steps * SLIDE_STEP_MM) - frame.endExclusion;
+  for (const i of t.order) {
     const band = 2 * Math.max(0, local[i].halfDepth - frame.edgeExclusion) * reachInPlate;
-    if (demand > capacityOf(i, Math.min(4 * halfLength * halfWidth, Math.max(0, band)))) {
-      return { failure: { member: joint.members[i].id, ratio: Infinity } };
+    const area = Math.min(4 * t.halfLength * t.halfWidth, Math.max(0, band));
+    if (Math.abs(t.joint.members[i].force) > capacityOf(t, i, area)) {
+      return failing(t, i, Infinity);
     }
-    const swept = capacityOf(i, regionAreaInPlate(regions[i], halfLength, slid));
-    if (demand > swept) return { failure: { member: joint.members[i].id, ratio: demand / swept } };
   }
-  let best = { member: '', ratio: Infinity };
-  for (const offset of offsets) {
-    const checks: MemberPlateCheck[] = [];
-    for (const i of order) {
-      const area = regionAreaInPlate(regions[i], halfLength, halfWidth, offset);
-      const c = check(Math.abs(joint.members[i].force), capacityOf(i, area));
-      if (c.ratio > 1) {
-        if (c.ratio < best.ratio) best = { member: joint.members[i].id, ratio: c.ratio };
-        break;
-      }
-      checks.push({ member: joint.members[i].id, area, ...c });
-    }
-    if (checks.length === order.length) return { offset, checks };
-  }
-  return { failure: best };
+  const centred = checksAt(t, 0, 0);
+  if (centred) return { offset: 0, checks: centred };
+  const up = nearestSlide(t, 1, 1, steps);
+  const nearer = up ? Math.round(Math.abs(up.offset) / SLIDE_STEP_MM) - 1 : steps;
+  return nearestSlide(t, -1, 1, nearer) ?? up ?? failing(t, t.best.i, t.best.ratio);
 };
 
 /**
  * Chooses the plate for one joint: the smallest catalog plate (by area, then gauge) that, on
  * both faces, holds every member's force by tooth holding, 2 · area · lateral value · CD ≥ |F|,
  * and at a heel or splice carries the force across the joint line in the steel. The plate is
- * centred on the joint and aligned with the bottom chord (or the spliced chord). Throws
+ * aligned with the bottom chord (or the spliced chord; square to the bisector where two chords
+ * meet at an angle), centred on the joint or, at a panel point, slid across its axis. Throws
  * EngineError `no_plate_fits` naming the joint and the member (or steel check) that fails on the
  * largest plate.
  */
@@ -287,7 +326,7 @@ export const designJointPlate = (
   const edgeExclusion = options.edgeExclusion ?? EDGE_EXCLUSION_MM;
   const regions = memberContactRegions(local, { endExclusion, edgeExclusion, reach });
   // Most loaded members first: they fail soonest, so a too-small plate is dropped early.
-  const order = joint.members
+  const order: number[] = joint.members
     .map((_, i) => i)
     .sort((a, b) => Math.abs(joint.members[b].force) - Math.abs(joint.members[a].force));
   let failure = { member: '', ratio: 0 };
@@ -304,10 +343,18 @@ export const designJointPlate = (
       };
       continue;
     }
-    const fit = placePlate(joint, local, regions, order, plate, cd, {
+    const trial: Trial = {
+      joint,
+      regions,
+      order,
+      plate,
+      cd,
       halfLength,
       halfWidth,
-      offsets: plateOffsets(joint.kind, chordHalf, halfWidth),
+      best: { i: order[0], ratio: Infinity },
+    };
+    const fit = placePlate(trial, local, {
+      steps: slideSteps(joint.kind, chordHalf, halfWidth),
       endExclusion,
       edgeExclusion,
     });
