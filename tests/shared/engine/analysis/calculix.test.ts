@@ -3,15 +3,15 @@ import { calculixMissing, calculixWorkDir, runCalculix as run } from '../../../s
 import { analyzeTruss, type TrussModel } from '../../../../shared/engine/analysis';
 import { pitchedTruss, warren } from './support/layouts';
 
-const work = calculixWorkDir('spanwise-ccx-');
-const runCalculix = (name: string, model: TrussModel) => run(work, name, model, E);
-
 /**
  * Cross-check against an independent general-purpose solver: CalculiX (Debian package
  * calculix-ccx), linear static analysis with T3D2 truss elements. Demo sections and loads.
  */
 
 const E = 11000; // MPa, demo value
+
+const work = calculixWorkDir('spanwise-ccx-');
+const runCalculix = (name: string, model: TrussModel) => run(work, name, model, E);
 
 const topLoads = (model: TrussModel, p: number) =>
   model.joints
