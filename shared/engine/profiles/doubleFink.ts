@@ -1,4 +1,4 @@
-import { flatBottomY, gableTopY, pitchedLayout, type Layout } from './layout';
+import { gableLayout, type Layout } from './layout';
 import type { ProfileParams } from './types';
 
 /**
@@ -8,11 +8,7 @@ import type { ProfileParams } from './types';
  */
 export const doubleFinkLayout = (p: ProfileParams): Layout => {
   const L = p.span;
-  return pitchedLayout({
-    span: L,
-    heelHeight: p.heelHeight,
-    topY: gableTopY(L, p.pitch, p.heelHeight),
-    bottomY: flatBottomY,
+  return gableLayout(p, {
     topXs: [L / 6, L / 3, L / 2, (2 * L) / 3, (5 * L) / 6],
     bottomXs: [L / 5, (2 * L) / 5, (3 * L) / 5, (4 * L) / 5],
     webs: [
@@ -50,7 +46,5 @@ export const doubleFinkLayout = (p: ProfileParams): Layout => {
       ],
     ],
     peak: 2,
-    rightEnd: 'heel',
-    rise: p.heelHeight + (L / 2) * (p.pitch / 12),
   });
 };

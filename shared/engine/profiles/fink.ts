@@ -1,4 +1,4 @@
-import { flatBottomY, gableTopY, pitchedLayout, type Layout } from './layout';
+import { gableLayout, type Layout } from './layout';
 import type { ProfileParams } from './types';
 
 /**
@@ -9,11 +9,7 @@ import type { ProfileParams } from './types';
  */
 export const finkLayout = (p: ProfileParams): Layout => {
   const L = p.span;
-  return pitchedLayout({
-    span: L,
-    heelHeight: p.heelHeight,
-    topY: gableTopY(L, p.pitch, p.heelHeight),
-    bottomY: flatBottomY,
+  return gableLayout(p, {
     topXs: [L / 4, L / 2, (3 * L) / 4],
     bottomXs: [L / 3, (2 * L) / 3],
     webs: [
@@ -35,7 +31,5 @@ export const finkLayout = (p: ProfileParams): Layout => {
       ],
     ],
     peak: 1,
-    rightEnd: 'heel',
-    rise: p.heelHeight + (L / 2) * (p.pitch / 12),
   });
 };

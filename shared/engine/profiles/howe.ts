@@ -1,4 +1,4 @@
-import { flatBottomY, gableTopY, pitchedLayout, type Layout } from './layout';
+import { gableLayout, type Layout } from './layout';
 import type { ProfileParams } from './types';
 
 /**
@@ -9,11 +9,7 @@ import type { ProfileParams } from './types';
 export const howeLayout = (p: ProfileParams): Layout => {
   const L = p.span;
   const q = [L / 4, L / 2, (3 * L) / 4];
-  return pitchedLayout({
-    span: L,
-    heelHeight: p.heelHeight,
-    topY: gableTopY(L, p.pitch, p.heelHeight),
-    bottomY: flatBottomY,
+  return gableLayout(p, {
     topXs: q,
     bottomXs: q,
     webs: [
@@ -39,7 +35,5 @@ export const howeLayout = (p: ProfileParams): Layout => {
       ],
     ],
     peak: 1,
-    rightEnd: 'heel',
-    rise: p.heelHeight + (L / 2) * (p.pitch / 12),
   });
 };

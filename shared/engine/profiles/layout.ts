@@ -1,5 +1,6 @@
 import { EngineError } from '../errors';
 import { MIN_JOINT_ANGLE_DEG, describeLength } from './limits';
+import type { ProfileParams } from './types';
 
 /** A point of the line model, mm. */
 export interface Point {
@@ -139,3 +140,24 @@ export const gableTopY =
 
 /** A flat bottom chord on the bearing line. */
 export const flatBottomY = (): number => 0;
+
+/** The interior panel points and webs of a symmetric gable family (the rest follows from params). */
+export type GableSpec = Pick<PitchedSpec, 'topXs' | 'bottomXs' | 'webs' | 'peak' | 'bottomPeak'> & {
+  /** Bottom chord line; flat unless given (scissor). */
+  bottomY?: (x: number) => number;
+};
+
+/**
+ * A gable layout: top chords at the profile's pitch from both heels to a peak at mid-span,
+ * heels alike at both ends, rise = heel + half the span × pitch.
+ */
+export const gableLayout = (p: ProfileParams, spec: GableSpec): Layout =>
+  pitchedLayout({
+    ...spec,
+    span: p.span,
+    heelHeight: p.heelHeight,
+    topY: gableTopY(p.span, p.pitch, p.heelHeight),
+    bottomY: spec.bottomY ?? flatBottomY,
+    rightEnd: 'heel',
+    rise: p.heelHeight + (p.span / 2) * (p.pitch / 12),
+  });

@@ -1,4 +1,4 @@
-import { flatBottomY, gableTopY, pitchedLayout, type Layout } from './layout';
+import { gableLayout, type Layout } from './layout';
 import type { ProfileParams } from './types';
 
 /**
@@ -8,11 +8,7 @@ import type { ProfileParams } from './types';
  */
 export const queenPostLayout = (p: ProfileParams): Layout => {
   const L = p.span;
-  return pitchedLayout({
-    span: L,
-    heelHeight: p.heelHeight,
-    topY: gableTopY(L, p.pitch, p.heelHeight),
-    bottomY: flatBottomY,
+  return gableLayout(p, {
     topXs: [L / 3, L / 2, (2 * L) / 3],
     bottomXs: [L / 3, (2 * L) / 3],
     webs: [
@@ -34,7 +30,5 @@ export const queenPostLayout = (p: ProfileParams): Layout => {
       ],
     ],
     peak: 1,
-    rightEnd: 'heel',
-    rise: p.heelHeight + (L / 2) * (p.pitch / 12),
   });
 };

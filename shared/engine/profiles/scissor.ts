@@ -1,4 +1,4 @@
-import { gableTopY, pitchedLayout, type Layout } from './layout';
+import { gableLayout, gableTopY, type Layout } from './layout';
 import type { ProfileParams } from './types';
 
 /**
@@ -11,10 +11,7 @@ export const scissorLayout = (p: ProfileParams): Layout => {
   const L = p.span;
   const bottomPitch = p.bottomPitch ?? 0;
   const q = [L / 4, L / 2, (3 * L) / 4];
-  return pitchedLayout({
-    span: L,
-    heelHeight: p.heelHeight,
-    topY: gableTopY(L, p.pitch, p.heelHeight),
+  return gableLayout(p, {
     bottomY: gableTopY(L, bottomPitch, 0),
     topXs: q,
     bottomXs: q,
@@ -42,7 +39,5 @@ export const scissorLayout = (p: ProfileParams): Layout => {
     ],
     peak: 1,
     bottomPeak: bottomPitch > 0 ? 1 : undefined,
-    rightEnd: 'heel',
-    rise: p.heelHeight + (L / 2) * (p.pitch / 12),
   });
 };
