@@ -1,14 +1,6 @@
 import type { Role } from '../../../../shared/api/roles';
-import {
-  EmptyState,
-  ListToolbar,
-  PagedTable,
-  PageHeader,
-  RecordFilter,
-  SearchBox,
-} from '../../../components/ui';
-import { useBuilderChoices } from '../../../lib/builder-choices';
-import { canListBuilders } from '../../../lib/permissions';
+import { EmptyState, ListToolbar, PagedTable, PageHeader, SearchBox } from '../../../components/ui';
+import { BuilderFilter } from '../../../components/filters/BuilderFilter';
 import { useListParams } from '../../../lib/use-list-params';
 import { jobListParamsFromSearch, useJobs } from '../api/list-jobs';
 import { JOB_SORT_COLUMNS, jobColumns } from './job-columns';
@@ -18,8 +10,6 @@ export function JobsPage({ role }: { role: Role }) {
   const { params, search, update } = useListParams();
   const query = jobListParamsFromSearch(search);
   const jobs = useJobs(query);
-  const showBuilders = canListBuilders(role);
-  const builders = useBuilderChoices(showBuilders);
   const filtered = !!(params.q || query.customerId);
   return (
     <>
@@ -34,16 +24,11 @@ export function JobsPage({ role }: { role: Role }) {
           value={params.q}
           onSearch={(q) => update({ q, page: 1 })}
         />
-        {showBuilders ? (
-          <RecordFilter
-            id="filter-builder"
-            label="Builder"
-            allLabel="All builders"
-            choices={builders.data?.items}
-            value={query.customerId}
-            onChange={(customerId) => update({ filters: { customerId } })}
-          />
-        ) : null}
+        <BuilderFilter
+          role={role}
+          value={query.customerId}
+          onChange={(customerId) => update({ filters: { customerId } })}
+        />
       </ListToolbar>
       <PagedTable
         query={jobs}

@@ -6,11 +6,9 @@ import {
   ListToolbar,
   PagedTable,
   PageHeader,
-  RecordFilter,
   SearchBox,
 } from '../../../components/ui';
-import { useBuilderChoices } from '../../../lib/builder-choices';
-import { canListBuilders } from '../../../lib/permissions';
+import { BuilderFilter } from '../../../components/filters/BuilderFilter';
 import { useListParams } from '../../../lib/use-list-params';
 import { orderListParamsFromSearch, useOrders } from '../api/list-orders';
 import { ORDER_STATUS_LABELS } from '../order-status';
@@ -21,8 +19,6 @@ export function OrdersPage({ role }: { role: Role }) {
   const { params, search, update } = useListParams();
   const query = orderListParamsFromSearch(search);
   const orders = useOrders(query);
-  const showBuilders = canListBuilders(role);
-  const builders = useBuilderChoices(showBuilders);
   const filtered = !!(params.q || query.status || query.customerId || query.jobId);
   return (
     <>
@@ -54,16 +50,11 @@ export function OrdersPage({ role }: { role: Role }) {
             </option>
           ))}
         </FilterSelect>
-        {showBuilders ? (
-          <RecordFilter
-            id="filter-builder"
-            label="Builder"
-            allLabel="All builders"
-            choices={builders.data?.items}
-            value={query.customerId}
-            onChange={(customerId) => update({ filters: { customerId } })}
-          />
-        ) : null}
+        <BuilderFilter
+          role={role}
+          value={query.customerId}
+          onChange={(customerId) => update({ filters: { customerId } })}
+        />
       </ListToolbar>
       <PagedTable
         query={orders}
