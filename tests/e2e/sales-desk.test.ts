@@ -50,6 +50,11 @@ describe('the sales desk, in a browser', () => {
     await page.getByLabel('Terms', { exact: true }).selectOption({ label: 'Deposit required' });
     await page.getByRole('button', { name: 'Save builder' }).click();
     await page.waitForURL(/\/builders\/\d+$/);
+    await page.getByRole('button', { name: 'Edit details' }).click();
+    await page.getByLabel('Phone', { exact: true }).fill('(555) 014-7700');
+    await page.getByRole('button', { name: 'Save builder' }).click();
+    await expect.poll(() => page.getByText('The builder’s details were saved.').count()).toBe(1);
+    await expect.poll(() => page.getByText('(555) 014-7700').count()).toBeGreaterThan(0);
 
     await page.getByRole('button', { name: 'New job' }).click();
     await page.getByLabel('Job name').fill('Lot 9 — Quarry Lane');

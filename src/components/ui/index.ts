@@ -30,3 +30,5 @@ export { FilterSelect, ListToolbar, RecordFilter } from './FilterSelect';
 export type { FilterSelectProps, RecordFilterProps } from './FilterSelect';
 export { PagedTable } from './PagedTable';
 export type { PagedTableProps, PageOf } from './PagedTable';
+export { EditInPlace } from './EditInPlace';
+export type { EditInPlaceProps, EditInPlaceControls } from './EditInPlace';

@@ -1,14 +1,6 @@
-import { useState, type ReactNode } from 'react';
+import type { ReactNode } from 'react';
 import type { CustomerDetail } from '../../../../shared/api/customers';
-import {
-  Alert,
-  Button,
-  Card,
-  DetailList,
-  PageHeader,
-  QueryState,
-  TextLink,
-} from '../../../components/ui';
+import { DetailList, EditInPlace, PageHeader, QueryState, TextLink } from '../../../components/ui';
 import { formatDate } from '../../../lib/format';
 import { useCustomer, useUpdateCustomer } from '../api/customer';
 import { TermsBadge } from './builder-columns';
@@ -46,75 +38,45 @@ function Contacts({ customer }: { customer: CustomerDetail }) {
 }
 
 function Details({ customer, canEdit }: { customer: CustomerDetail; canEdit: boolean }) {
-  const [editing, setEditing] = useState(false);
-  const [saved, setSaved] = useState(false);
   const update = useUpdateCustomer(customer.id);
-  if (editing) {
-    return (
-      <Card title="Edit builder">
+  return (
+    <EditInPlace
+      title="Details"
+      editTitle="Edit builder"
+      editLabel="Edit details"
+      canEdit={canEdit}
+      savedMessage="The builder’s details were saved."
+      form={({ saved, cancel }) => (
         <BuilderForm
           mode="edit"
           defaultValues={builderFormValues(customer)}
           busy={update.isPending}
           error={update.error}
           onCancel={() => {
-            setEditing(false);
+            cancel();
             update.reset();
           }}
-          onSubmit={(values) =>
-            update.mutate(values, {
-              onSuccess: () => {
-                setEditing(false);
-                setSaved(true);
-              },
-            })
-          }
+          onSubmit={(values) => update.mutate(values, { onSuccess: saved })}
         />
-      </Card>
-    );
-  }
-  return (
-    <>
-      {saved ? (
-        <Alert tone="success" className="mb-4">
-          The builder’s details were saved.
-        </Alert>
-      ) : null}
-      <Card
-        title="Details"
-        actions={
-          canEdit ? (
-            <Button
-              variant="secondary"
-              size="sm"
-              onClick={() => {
-                setSaved(false);
-                setEditing(true);
-              }}
-            >
-              Edit details
-            </Button>
-          ) : null
-        }
-      >
-        <div className="flex flex-col gap-6">
-          <DetailList
-            items={[
-              { label: 'E-mail', value: customer.email },
-              { label: 'Phone', value: customer.phone ?? '—' },
-              { label: 'Terms', value: <TermsBadge terms={customer.terms} /> },
-              { label: 'City', value: customer.city ?? '—' },
-              { label: 'Billing address', value: customer.billingAddress ?? '—' },
-              { label: 'Builder since', value: formatDate(customer.createdAt) },
-            ]}
-          />
-          <div>
-            <h3 className="mb-2 text-sm font-semibold text-sand-900">Contacts</h3>
-            <Contacts customer={customer} />
-          </div>
+      )}
+    >
+      <div className="flex flex-col gap-6">
+        <DetailList
+          items={[
+            { label: 'E-mail', value: customer.email },
+            { label: 'Phone', value: customer.phone ?? '—' },
+            { label: 'Terms', value: <TermsBadge terms={customer.terms} /> },
+            { label: 'City', value: customer.city ?? '—' },
+            { label: 'Billing address', value: customer.billingAddress ?? '—' },
+            { label: 'Builder since', value: formatDate(customer.createdAt) },
+          ]}
+        />
+        <div>
+          <h3 className="mb-2 text-sm font-semibold text-sand-900">Contacts</h3>
+          <Contacts customer={customer} />
         </div>
-      </Card>
-    </>
+      </div>
+    </EditInPlace>
   );
 }
 

@@ -1,10 +1,8 @@
-import { useState, type ReactNode } from 'react';
+import type { ReactNode } from 'react';
 import type { JobDetail } from '../../../../shared/api/jobs';
 import {
-  Alert,
-  Button,
-  Card,
   DetailList,
+  EditInPlace,
   LinkButton,
   PageHeader,
   QueryState,
@@ -71,84 +69,54 @@ function Details({
   canEdit,
   canOpenBuilder,
 }: { job: JobDetail } & Pick<JobPageProps, 'canEdit' | 'canOpenBuilder'>) {
-  const [editing, setEditing] = useState(false);
-  const [saved, setSaved] = useState(false);
   const update = useUpdateJob(job.id);
-  if (editing) {
-    return (
-      <Card title="Edit job">
+  const c = job.criteria;
+  return (
+    <EditInPlace
+      title="Site and design criteria"
+      editTitle="Edit job"
+      editLabel="Edit job"
+      canEdit={canEdit}
+      savedMessage="The job was saved. New truss lines start from these loads."
+      form={({ saved, cancel }) => (
         <JobForm
           mode="edit"
           defaultValues={jobFormValues(job)}
           busy={update.isPending}
           error={update.error}
           onCancel={() => {
-            setEditing(false);
+            cancel();
             update.reset();
           }}
-          onSubmit={(values) =>
-            update.mutate(values, {
-              onSuccess: () => {
-                setEditing(false);
-                setSaved(true);
-              },
-            })
-          }
+          onSubmit={(values) => update.mutate(values, { onSuccess: saved })}
         />
-      </Card>
-    );
-  }
-  const c = job.criteria;
-  return (
-    <>
-      {saved ? (
-        <Alert tone="success" className="mb-4">
-          The job was saved. New truss lines start from these loads.
-        </Alert>
-      ) : null}
-      <Card
-        title="Site and design criteria"
-        actions={
-          canEdit ? (
-            <Button
-              variant="secondary"
-              size="sm"
-              onClick={() => {
-                setSaved(false);
-                setEditing(true);
-              }}
-            >
-              Edit job
-            </Button>
-          ) : null
-        }
-      >
-        <div className="flex flex-col gap-6">
-          <DetailList
-            items={[
-              {
-                label: 'Builder',
-                value: canOpenBuilder ? (
-                  <TextLink to={`/builders/${job.customer.id}`}>{job.customer.name}</TextLink>
-                ) : (
-                  job.customer.name
-                ),
-              },
-              { label: 'Site address', value: job.address },
-              { label: 'Plan revision', value: job.planRevision ?? '—' },
-              { label: 'Created', value: formatDate(job.createdAt) },
-              { label: 'Ground snow load', value: formatAreaLoad(c.groundSnow, job.units) },
-              { label: 'Wind uplift', value: formatAreaLoad(c.windUplift, job.units) },
-              { label: 'Exposure notes', value: c.exposureNotes || '—' },
-            ]}
-          />
-          <EffectiveLoads job={job} />
-          <p className="text-xs text-sand-600">
-            Loads must be confirmed by the building designer; local codes govern.
-          </p>
-        </div>
-      </Card>
-    </>
+      )}
+    >
+      <div className="flex flex-col gap-6">
+        <DetailList
+          items={[
+            {
+              label: 'Builder',
+              value: canOpenBuilder ? (
+                <TextLink to={`/builders/${job.customer.id}`}>{job.customer.name}</TextLink>
+              ) : (
+                job.customer.name
+              ),
+            },
+            { label: 'Site address', value: job.address },
+            { label: 'Plan revision', value: job.planRevision ?? '—' },
+            { label: 'Created', value: formatDate(job.createdAt) },
+            { label: 'Ground snow load', value: formatAreaLoad(c.groundSnow, job.units) },
+            { label: 'Wind uplift', value: formatAreaLoad(c.windUplift, job.units) },
+            { label: 'Exposure notes', value: c.exposureNotes || '—' },
+          ]}
+        />
+        <EffectiveLoads job={job} />
+        <p className="text-xs text-sand-600">
+          Loads must be confirmed by the building designer; local codes govern.
+        </p>
+      </div>
+    </EditInPlace>
   );
 }
 
