@@ -32,9 +32,13 @@ export const findOrder = (id: number, actor: User) =>
 export const findLine = (orderId: number, lineId: number) =>
   OrderLine.findOne({ where: { id: lineId, orderId }, include: [{ model: User, as: 'reviewer' }] });
 
-/** The order page: lines with design summaries and review state, and its history. */
-export async function orderPage(orderId: number, actor: User) {
-  const order = await findOrder(orderId, actor);
+/**
+ * The order page: lines with design summaries and review state, and its history. Pass the order
+ * when it is already loaded (with `orderAttributes` and `orderIncludes`), its id after a write.
+ */
+export async function orderPage(orderOrId: Order | number, actor: User) {
+  const order = typeof orderOrId === 'number' ? await findOrder(orderOrId, actor) : orderOrId;
+  const orderId = order!.id;
   const [lines, events, plant] = await Promise.all([
     OrderLine.findAll({
       where: { orderId },

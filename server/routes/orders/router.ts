@@ -115,7 +115,7 @@ export function ordersRouter() {
     order,
     authorize(orderPolicy.show),
     handle(async (req, res) => {
-      res.json(await orderPage((res.locals.record as Order).id, req.user!));
+      res.json(await orderPage(res.locals.record as Order, req.user!));
     }),
   );
 
