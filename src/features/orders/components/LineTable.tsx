@@ -30,8 +30,8 @@ function ReviewCell({ line }: { line: LineSummary }) {
       ) : null}
       {line.reviewState === 'approved' ? (
         <span className="text-xs text-sand-600">
-          Locked{line.reviewedBy ? ` · approved by ${line.reviewedBy.replace(/\.$/, '')}` : ''}. A
-          change needs a new design and a new review.
+          Locked{line.reviewedBy ? ` · approved by ${line.reviewedBy}` : ''} · a change needs a new
+          design and a new review.
         </span>
       ) : null}
     </div>
