@@ -12,7 +12,8 @@ import { readConfig } from '../server/config';
 import { User } from '../server/models';
 import { provideMailer } from '../server/services/provideMailer';
 import type { Mailer } from '../server/services/mail';
-import { DEMO_PASSWORD, DEMO_SIGN_INS, seedDemo } from '../seeders/demo';
+import { seedDemo } from '../seeders/demo';
+import { DEMO_PASSWORD, DEMO_SIGN_INS } from '../shared/api/demo';
 import { APP_PG_PORT, provideDatabase } from './database';
 
 const config = readConfig();

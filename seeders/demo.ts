@@ -4,20 +4,10 @@
  */
 import bcrypt from 'bcryptjs';
 import { Customer, Job, Plant, User } from '../server/models';
-import type { Role } from '../shared/api/roles';
+import { DEMO_PASSWORD, DEMO_SIGN_INS } from '../shared/api/demo';
 import { seedOrders } from './orders';
 import { seedPriceBook } from './priceBook';
 
-export const DEMO_PASSWORD = 'spanwise-demo';
-
-export const DEMO_SIGN_INS: { email: string; role: Role; name: string }[] = [
-  { email: 'admin@spanwise.test', role: 'admin', name: 'Maren Holt' },
-  { email: 'sales@spanwise.test', role: 'sales', name: 'Devin Okafor' },
-  { email: 'engineer@spanwise.test', role: 'engineer', name: 'Priya Ramanathan, P.E.' },
-  { email: 'foreman@spanwise.test', role: 'foreman', name: 'Walt Brennan' },
-  { email: 'builder1@spanwise.test', role: 'builder', name: 'Sam Whitaker' },
-  { email: 'builder2@spanwise.test', role: 'builder', name: 'Lena Castillo' },
-];
 
 const CUSTOMERS = [
   {

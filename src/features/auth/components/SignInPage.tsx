@@ -14,7 +14,7 @@ import {
 import { isApiError } from '../../../lib/api-client';
 import { useHealth } from '../api/health';
 import { useLogin } from '../api/login';
-import { DEMO_ACCOUNTS, DEMO_PASSWORD } from '../demo-accounts';
+import { DEMO_PASSWORD, DEMO_SIGN_INS } from '../../../../shared/api/demo';
 import { BrandMark } from './BrandMark';
 import { safeReturnPath } from '../return-path';
 
@@ -90,7 +90,7 @@ export function SignInPage() {
               <code className="font-mono font-semibold">{DEMO_PASSWORD}</code>:
             </p>
             <ul className="mt-2 grid gap-1">
-              {DEMO_ACCOUNTS.map((account) => (
+              {DEMO_SIGN_INS.map((account) => (
                 <li key={account.email} className="flex justify-between gap-3">
                   <span>{ROLE_LABELS[account.role]}</span>
                   <code className="font-mono text-xs">{account.email}</code>
