@@ -127,3 +127,8 @@ export const storedFileSchema = z.object({
 });
 export type StoredFile = z.infer<typeof storedFileSchema>;
 export const MAX_UPLOAD_BYTES = 25 * 1024 * 1024;
+/** The refusal of any plan type other than PDF, PNG or JPEG (`415 unsupported_type`). */
+export const UNSUPPORTED_PLAN_TYPE_MESSAGE = 'Upload a PDF, PNG or JPEG plan';
+/** The refusal of a plan over {@link MAX_UPLOAD_BYTES} (`413 too_large`). */
+export const PLAN_TOO_LARGE_MESSAGE =
+  'The plan is larger than 25 MB. Upload a file of at most 25 MB.';

@@ -10,11 +10,11 @@ import {
 } from '../../services/storage';
 import type { CheckedUpload } from '../../commands/files';
 import { MAX_UPLOAD_BYTES } from './schema';
+import {
+  PLAN_TOO_LARGE_MESSAGE as TOO_LARGE_MESSAGE,
+  UNSUPPORTED_PLAN_TYPE_MESSAGE as UNSUPPORTED_TYPE_MESSAGE,
+} from '../../../shared/api/pricing';
 
-/** The refusal a browser shows for any type other than the three we accept. */
-export const UNSUPPORTED_TYPE_MESSAGE = 'Upload a PDF, PNG or JPEG plan';
-/** The refusal for a file over {@link MAX_UPLOAD_BYTES}. */
-export const TOO_LARGE_MESSAGE = 'The plan is larger than 25 MB. Upload a file of at most 25 MB.';
 
 // Disk, not memory: 25 MB per request held in RAM would let a few uploads exhaust the server.
 const multipart = multer({

@@ -1,9 +1,12 @@
-import { MAX_UPLOAD_BYTES, type StoredFile } from '../../../shared/api/pricing';
+import {
+  MAX_UPLOAD_BYTES,
+  PLAN_TOO_LARGE_MESSAGE as TOO_LARGE_MESSAGE,
+  UNSUPPORTED_PLAN_TYPE_MESSAGE as UNSUPPORTED_TYPE_MESSAGE,
+  type StoredFile,
+} from '../../../shared/api/pricing';
 
-/** The server's refusal of any other type (`415 unsupported_type`); shown before sending, too. */
-export const UNSUPPORTED_TYPE_MESSAGE = 'Upload a PDF, PNG or JPEG plan';
-/** The server's refusal of a file over 25 MB (`413 too_large`). */
-export const TOO_LARGE_MESSAGE = 'The plan is larger than 25 MB. Upload a file of at most 25 MB.';
+// The server's own refusals, shown before any byte is sent too.
+export { TOO_LARGE_MESSAGE, UNSUPPORTED_TYPE_MESSAGE };
 
 /** What the file picker offers: the three plan types by extension and by MIME type. */
 export const PLAN_FILE_ACCEPT = '.pdf,.png,.jpg,.jpeg,application/pdf,image/png,image/jpeg';
