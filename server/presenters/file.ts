@@ -3,7 +3,7 @@ import type { StoredFile, User } from '../models';
 import { filePolicy } from '../policies/file';
 
 /** A plan file row, with whether the viewer may delete it (the policy decides, the client shows). */
-export type PlanFileRow = StoredFileShape & { canDelete: boolean };
+export type PlanFileRow = StoredFileShape;
 
 /** A stored plan file as the client sees it: the user's name for it, never the stored name. */
 export function presentStoredFile(f: StoredFile, viewer: User): PlanFileRow {

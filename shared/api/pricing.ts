@@ -124,6 +124,8 @@ export const storedFileSchema = z.object({
   size: z.number().int(),
   uploadedBy: z.string().nullable(),
   createdAt: z.string(),
+  /** Whether the signed-in user may delete it (the server's policy decides). */
+  canDelete: z.boolean(),
 });
 export type StoredFile = z.infer<typeof storedFileSchema>;
 export const MAX_UPLOAD_BYTES = 25 * 1024 * 1024;

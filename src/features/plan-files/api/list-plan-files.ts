@@ -4,8 +4,8 @@ import { storedFileSchema } from '../../../../shared/api/pricing';
 import { api } from '../../../lib/api-client';
 import { planFileKeys } from './plan-file-keys';
 
-/** A listed plan, plus whether the signed-in user may delete it (the server's policy decides). */
-export const planFileRowSchema = storedFileSchema.extend({ canDelete: z.boolean().default(false) });
+/** A listed plan, with whether the signed-in user may delete it (shared contract). */
+export const planFileRowSchema = storedFileSchema;
 /** One row of the plans list. */
 export type PlanFileRow = z.infer<typeof planFileRowSchema>;
 
