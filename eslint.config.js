@@ -52,4 +52,21 @@ export default tseslint.config(
       ],
     },
   },
+,
+  {
+    // The engine is the lower layer: the API contracts build on it, never the other way round.
+    files: ['shared/engine/**/*.ts'],
+    rules: {
+      'no-restricted-imports': [
+        'error',
+        {
+          patterns: [
+            { group: ['**/src/**', '**/server/**'], message: 'shared/ imports nothing from src/ or server/.' },
+            { group: ['node:*', 'fs', 'path', 'os', 'child_process', 'react', 'react-*', 'express', 'sequelize'], message: 'shared/ stays free of Node built-ins, React, Express and Sequelize.' },
+            { group: ['../api/*', '../../api/*', '../../../api/*'], message: 'shared/engine does not import shared/api (the contracts build on the engine).' },
+          ],
+        },
+      ],
+    },
+  },
 );

@@ -1,7 +1,8 @@
 import { z } from 'zod';
 import { LUMBER_GRADES, LUMBER_SIZES } from '../engine/lumber';
-import type { ProfileKind, ProfileParams } from '../engine/profiles/types';
-import { inch, inchToMm, KPA_PER_PSF, type MPa, type Mm, mm } from '../engine/units';
+import type { ProfileKind } from '../engine/profiles/types';
+import { inch, inchToMm, KPA_PER_PSF, type Mm, mm } from '../engine/units';
+import type { AreaLoad, EngineDesignInput } from '../engine/design/input';
 
 /**
  * The design input contract: one truss as the sales desk describes it. Shared by the CLI,
@@ -288,37 +289,7 @@ export type DesignInput = z.infer<typeof designInputSchema>;
 /** What a client may send (defaults still optional). */
 export type DesignInputDraft = z.input<typeof designInputSchema>;
 
-/** Area load in N/mm² (numerically MPa; 1 kPa = 0.001 N/mm²). */
-export type AreaLoad = MPa;
-
-/** The design request in engine units: lengths mm, area loads N/mm², chords as allowed lists. */
-export interface EngineDesignInput {
-  profile: ProfileParams;
-  spacing: Mm;
-  plies: number;
-  loads: {
-    tcll: AreaLoad;
-    tcdl: AreaLoad;
-    bcll: AreaLoad;
-    bcdl: AreaLoad;
-    bcllNonConcurrent?: AreaLoad;
-    snow?: {
-      pg: AreaLoad;
-      ce: number;
-      ct: number;
-      is: number;
-      slippery: boolean;
-      edition: (typeof SNOW_EDITIONS)[number];
-    };
-    windUplift?: AreaLoad;
-  };
-  /** Allowed lumber ids per role, cheapest-first choice left to sizing; absent = plant default. */
-  lumber: { topChord?: string[]; bottomChord?: string[]; webs?: string[] };
-  bearingWidth: Mm;
-  /** Span / deflection limits, e.g. 240 for L/240. */
-  deflection: { live: number; total: number };
-  webBraces: string[];
-}
+export type { AreaLoad, EngineDesignInput } from '../engine/design/input';
 
 const list = (c: string | string[] | undefined) => (c === undefined ? undefined : [c].flat());
 

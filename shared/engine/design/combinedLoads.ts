@@ -1,4 +1,4 @@
-import type { EngineDesignInput } from '../../api/design';
+import type { EngineDesignInput } from './input';
 import type { JointLoad } from '../analysis/types';
 import {
   areaLoadCases,

@@ -1,4 +1,4 @@
-import type { EngineDesignInput } from '../../api/design';
+import type { EngineDesignInput } from './input';
 import { lumberLabel } from '../lumber';
 import { checkBearing } from '../members/bearing';
 import { DEMO_PLATE_CATALOG } from '../plates';

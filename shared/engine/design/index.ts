@@ -7,3 +7,4 @@ export { DEFAULT_LUMBER, lumberCandidates } from './lumberChoice';
 export { effectiveLengths } from './sizing';
 export { axialStiffness } from './deflection';
 export type * from './types';
+export type { AreaLoad, EngineDesignInput } from './input';

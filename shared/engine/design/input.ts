@@ -1,0 +1,35 @@
+import type { AsceEdition } from '../loads/snow';
+import type { ProfileParams } from '../profiles/types';
+import type { MPa, Mm } from '../units';
+
+/** Area load in N/mm² (numerically MPa; 1 kPa = 0.001 N/mm²). */
+export type AreaLoad = MPa;
+
+/** The design request in engine units: lengths mm, area loads N/mm², chords as allowed lists. */
+export interface EngineDesignInput {
+  profile: ProfileParams;
+  spacing: Mm;
+  plies: number;
+  loads: {
+    tcll: AreaLoad;
+    tcdl: AreaLoad;
+    bcll: AreaLoad;
+    bcdl: AreaLoad;
+    bcllNonConcurrent?: AreaLoad;
+    snow?: {
+      pg: AreaLoad;
+      ce: number;
+      ct: number;
+      is: number;
+      slippery: boolean;
+      edition: AsceEdition;
+    };
+    windUplift?: AreaLoad;
+  };
+  /** Allowed lumber ids per role, cheapest-first choice left to sizing; absent = plant default. */
+  lumber: { topChord?: string[]; bottomChord?: string[]; webs?: string[] };
+  bearingWidth: Mm;
+  /** Span / deflection limits, e.g. 240 for L/240. */
+  deflection: { live: number; total: number };
+  webBraces: string[];
+}
