@@ -52,7 +52,6 @@ export default tseslint.config(
       ],
     },
   },
-,
   {
     // The engine is the lower layer: the API contracts build on it, never the other way round.
     files: ['shared/engine/**/*.ts'],
@@ -61,9 +60,29 @@ export default tseslint.config(
         'error',
         {
           patterns: [
-            { group: ['**/src/**', '**/server/**'], message: 'shared/ imports nothing from src/ or server/.' },
-            { group: ['node:*', 'fs', 'path', 'os', 'child_process', 'react', 'react-*', 'express', 'sequelize'], message: 'shared/ stays free of Node built-ins, React, Express and Sequelize.' },
-            { group: ['../api/*', '../../api/*', '../../../api/*'], message: 'shared/engine does not import shared/api (the contracts build on the engine).' },
+            {
+              group: ['**/src/**', '**/server/**'],
+              message: 'shared/ imports nothing from src/ or server/.',
+            },
+            {
+              group: [
+                'node:*',
+                'fs',
+                'path',
+                'os',
+                'child_process',
+                'react',
+                'react-*',
+                'express',
+                'sequelize',
+              ],
+              message: 'shared/ stays free of Node built-ins, React, Express and Sequelize.',
+            },
+            {
+              group: ['../api/*', '../../api/*', '../../../api/*'],
+              message:
+                'shared/engine does not import shared/api (the contracts build on the engine).',
+            },
           ],
         },
       ],
