@@ -11,7 +11,6 @@ import { readConfig, type Config } from './config';
 import { configurePassport } from './middleware/auth';
 import { requireCsrf } from './middleware/csrf';
 import { apiNotFound, errorHandler } from './middleware/errors';
-import { presentMe } from './presenters/user';
 import { authRouter } from './routes/auth/router';
 import { usersRouter } from './routes/users/router';
 import { customersRouter } from './routes/customers/router';
@@ -39,9 +38,10 @@ export interface AppOptions {
 /** The whole HTTP app, without a listener, so tests drive it with supertest. */
 export function createApp(opts: AppOptions) {
   const config = { ...readConfig(), ...opts.config };
-  presentMe.demo = config.demo;
   configurePassport();
   const app = express();
+  // Per app, not per process: tests run apps in and out of demo mode side by side.
+  app.locals.demo = config.demo;
   app.set('trust proxy', config.production ? 1 : false);
   app.disable('x-powered-by');
   app.use(

@@ -3,7 +3,7 @@ import type { User as UserShape } from '../../shared/api/users';
 import type { User } from '../models';
 
 /** The session user, as login and /me present it. */
-export function presentMe(user: User): Me {
+export function presentMe(user: User, demo: boolean): Me {
   return {
     user: {
       id: user.id,
@@ -17,12 +17,11 @@ export function presentMe(user: User): Me {
       id: user.plant!.id,
       name: user.plant!.name,
       units: user.plant!.units,
-      demo: presentMe.demo,
+      demo,
     },
     customer: user.customer ? { id: user.customer.id, name: user.customer.name } : null,
   };
 }
-presentMe.demo = true;
 
 /** A user row on the plant manager's Users screen. */
 export function presentUser(user: User): UserShape {

@@ -52,7 +52,7 @@ export function authRouter(opts: { loginAttemptsPer15Min: number }) {
               { model: Plant, as: 'plant' },
             ],
           });
-          res.json(presentMe(full!));
+          res.json(presentMe(full!, req.app.locals.demo as boolean));
         } catch (e) {
           next(e);
         }
@@ -68,7 +68,7 @@ export function authRouter(opts: { loginAttemptsPer15Min: number }) {
   });
 
   router.get('/me', requireUser, (req, res) => {
-    res.json(presentMe(req.user!));
+    res.json(presentMe(req.user!, req.app.locals.demo as boolean));
   });
 
   return router;

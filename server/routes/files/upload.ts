@@ -15,7 +15,6 @@ import {
   UNSUPPORTED_PLAN_TYPE_MESSAGE as UNSUPPORTED_TYPE_MESSAGE,
 } from '../../../shared/api/pricing';
 
-
 // Disk, not memory: 25 MB per request held in RAM would let a few uploads exhaust the server.
 const multipart = multer({
   storage: multer.diskStorage({

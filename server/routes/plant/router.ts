@@ -1,13 +1,12 @@
 import { Router } from 'express';
 import { requireUser } from '../../middleware/auth';
 import { presentPlant } from '../../presenters/plant';
-import { presentMe } from '../../presenters/user';
 
 /** The signed-in user's plant: name, units, demo mode and default design loads. */
 export function plantRouter() {
   const router = Router();
   router.get('/', requireUser, (req, res) => {
-    res.json(presentPlant(req.user!.plant!, presentMe(req.user!).plant.demo));
+    res.json(presentPlant(req.user!.plant!, req.app.locals.demo as boolean));
   });
   return router;
 }

@@ -152,3 +152,16 @@ describe('health', () => {
     expect(res.body.error.code).toBe('not_found');
   });
 });
+
+describe('demo mode', () => {
+  it('belongs to each app, not to the process', async () => {
+    const user = await createUser();
+    const demoApp = testApp({ demo: true });
+    const plainApp = testApp({ demo: false });
+    const a = await signedIn(demoApp, user.email);
+    const b = await signedIn(plainApp, user.email);
+    expect((await a.get('/api/auth/me').expect(200)).body.plant.demo).toBe(true);
+    expect((await b.get('/api/auth/me').expect(200)).body.plant.demo).toBe(false);
+    expect((await a.get('/api/plant').expect(200)).body.demo).toBe(true);
+  });
+});
