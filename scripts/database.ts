@@ -8,8 +8,9 @@ import {
   type Cluster,
 } from './pg';
 
-export const APP_PG_PORT = 54329;
-export const TEST_PG_PORT = 54339;
+export const APP_PG_PORT = Number(process.env.APP_PG_PORT ?? 54329);
+// Overridable so two checkouts on one machine can run their suites side by side.
+export const TEST_PG_PORT = Number(process.env.TEST_PG_PORT ?? 54339);
 
 export interface Database {
   url: string;
