@@ -24,6 +24,8 @@ import { priceBookRouter } from './routes/priceBook/router';
 import { quotesRouter } from './routes/quotes/router';
 import { filesRouter } from './routes/files/router';
 import type { Mailer } from './services/mail';
+import { survivePoolErrors } from './db/resilience';
+import { logger } from './logger';
 
 export interface AppOptions {
   sequelize: Sequelize;
@@ -55,9 +57,17 @@ export function createApp(opts: AppOptions) {
     }),
   );
 
-  const pool = new pg.Pool({ connectionString: opts.databaseUrl, max: 5 });
+  const pool = survivePoolErrors(
+    new pg.Pool({ connectionString: opts.databaseUrl, max: 5, connectionTimeoutMillis: 5000 }),
+    'session',
+  );
   const PgStore = connectPgSimple(session);
-  const store = new PgStore({ pool, tableName: 'session', pruneSessionInterval: 15 * 60 });
+  const store = new PgStore({
+    pool,
+    tableName: 'session',
+    pruneSessionInterval: 15 * 60,
+    errorLog: (...args: unknown[]) => logger.warn({ detail: args.map(String) }, 'session store'),
+  });
   app.locals.mailer = opts.mailer ?? null;
   app.locals.close = async () => {
     store.close();

@@ -1,5 +1,7 @@
 import type { ErrorRequestHandler, RequestHandler } from 'express';
 import { AppError } from '../errors';
+import { isDatabaseUnavailable } from '../db/resilience';
+import { logger } from '../logger';
 
 export const apiNotFound: RequestHandler = (_req, _res, next) =>
   next(new AppError(404, 'not_found', 'No such API endpoint.'));
@@ -24,7 +26,20 @@ export const errorHandler: ErrorRequestHandler = (err, _req, res, _next) => {
     });
     return;
   }
-  console.error(err);
+  if (isDatabaseUnavailable(err)) {
+    logger.warn({ err }, 'database unavailable');
+    res
+      .status(503)
+      .set('Retry-After', '5')
+      .json({
+        error: {
+          code: 'db_unavailable',
+          message: 'The database is not reachable right now. Try again in a moment.',
+        },
+      });
+    return;
+  }
+  logger.error({ err }, 'unexpected error');
   res
     .status(500)
     .json({ error: { code: 'internal', message: 'Something went wrong on our side. Try again.' } });
