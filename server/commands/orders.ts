@@ -1,9 +1,30 @@
 import { Op, type Transaction } from 'sequelize';
 import type { CreateLineInput, ReviewInput, UpdateLineInput } from '../../shared/api/orders';
 import { Order, OrderLine, Plant, type Job, type User } from '../models';
-import { AppError, badRequest, conflict } from '../errors';
+import { AppError, badRequest, conflict, notFound } from '../errors';
 import { computeDesign, type ComputedDesign } from '../services/design';
 import { orderEvent } from './audit';
+
+/**
+ * Lock order: every command that touches an order and its lines locks the order row first, then the
+ * lines (by id), so two commands never wait on each other in opposite orders (no deadlocks).
+ */
+const lockOrderRow = async (orderId: number, t: Transaction) => {
+  const o = await Order.findByPk(orderId, { transaction: t, lock: t.LOCK.UPDATE });
+  if (!o) throw conflict('The order no longer exists.');
+  return o;
+};
+
+/** The line as it is now, locked (after its order); gone in the meantime answers 404. */
+const lockLine = async (orderId: number, lineId: number, t: Transaction) => {
+  const l = await OrderLine.findOne({
+    where: { id: lineId, orderId },
+    transaction: t,
+    lock: t.LOCK.UPDATE,
+  });
+  if (!l) throw notFound('Truss line');
+  return l;
+};
 
 /**
  * Lock the order row so concurrent line writes keep positions and numbers consistent. A quoted
@@ -11,8 +32,7 @@ import { orderEvent } from './audit';
  * is a new revision) and its history says so.
  */
 const lockOrder = async (order: Order, t: Transaction, actor: User) => {
-  const o = await Order.findByPk(order.id, { transaction: t, lock: t.LOCK.UPDATE });
-  if (!o) throw conflict('The order no longer exists.');
+  const o = await lockOrderRow(order.id, t);
   if (o.status === 'quoted') {
     await o.update({ status: 'draft' }, { transaction: t });
     await orderEvent(t, actor, o, 'order.reopened', {
@@ -89,28 +109,38 @@ export async function addLine(actor: User, order: Order, input: CreateLineInput)
   });
 }
 
-/** Change a line. A new design resets its review; an approved design is locked. */
+/**
+ * Change a line. A new design resets its review and raises its design version; an approved design
+ * is locked — decided on the line as it is under its lock, not as it was loaded.
+ */
 export async function updateLine(
   actor: User,
   order: Order,
-  line: OrderLine,
+  loaded: OrderLine,
   input: UpdateLineInput,
 ) {
-  const redesign =
-    input.design !== undefined || (input.plies !== undefined && input.plies !== line.plies);
-  if (redesign && line.reviewState === 'approved') {
-    throw conflictLocked();
-  }
-  const plies = input.plies ?? line.plies;
-  const design = redesign ? computeDesign(input.design ?? line.designInput, { plies }) : null;
+  const redesignOf = (l: OrderLine) =>
+    input.design !== undefined || (input.plies !== undefined && input.plies !== l.plies);
+  const designFor = (l: OrderLine) =>
+    computeDesign(input.design ?? l.designInput, { plies: input.plies ?? l.plies });
+  if (redesignOf(loaded) && loaded.reviewState === 'approved') throw conflictLocked();
+  // The engine runs outside the locks; it runs again inside only if the line changed meanwhile.
+  const early = redesignOf(loaded) ? designFor(loaded) : null;
   return Order.sequelize!.transaction(async (t) => {
     await lockOrder(order, t, actor);
+    const line = await lockLine(order.id, loaded.id, t);
+    const redesign = redesignOf(line);
+    if (redesign && line.reviewState === 'approved') throw conflictLocked();
+    const plies = input.plies ?? line.plies;
+    const unchanged = line.designVersion === loaded.designVersion && line.plies === loaded.plies;
+    const design = !redesign ? null : early && unchanged ? early : designFor(line);
     const changes: Partial<OrderLine> = {};
     if (input.mark !== undefined) changes.mark = input.mark;
     if (input.quantity !== undefined) changes.quantity = input.quantity;
     if (design) {
       Object.assign(changes, designColumns(design), {
         plies,
+        designVersion: line.designVersion + 1,
         reviewState: 'pending',
         reviewComment: null,
         reviewedBy: null,
@@ -147,15 +177,18 @@ const conflictLocked = () =>
     'This design is approved and locked. Copy the line to make a new design; it will need a new review.',
   );
 
-/** Remove a line from a draft order. */
-export async function deleteLine(actor: User, order: Order, line: OrderLine) {
+/** Remove a line from a draft order (an approved one takes its approval with it, on record). */
+export async function deleteLine(actor: User, order: Order, loaded: OrderLine) {
   return Order.sequelize!.transaction(async (t) => {
     await lockOrder(order, t, actor);
+    const line = await lockLine(order.id, loaded.id, t);
     await line.destroy({ transaction: t });
     await orderEvent(t, actor, order, 'line.deleted', {
       lineId: line.id,
       mark: line.mark,
       description: line.description,
+      reviewState: line.reviewState,
+      designVersion: line.designVersion,
     });
   });
 }
@@ -170,10 +203,16 @@ async function nextMark(orderId: number, t: Transaction) {
 }
 
 /** Copy a line (design recomputed by the current engine) under the next free mark; it needs its own review. */
-export async function copyLine(actor: User, order: Order, line: OrderLine) {
-  const design = computeDesign(line.designInput, { plies: line.plies });
+export async function copyLine(actor: User, order: Order, loaded: OrderLine) {
+  const early = computeDesign(loaded.designInput, { plies: loaded.plies });
   return Order.sequelize!.transaction(async (t) => {
     await lockOrder(order, t, actor);
+    // The copy is of the design as it is now (recomputed only if it changed since it was loaded).
+    const line = await lockLine(order.id, loaded.id, t);
+    const design =
+      line.designVersion === loaded.designVersion && line.plies === loaded.plies
+        ? early
+        : computeDesign(line.designInput, { plies: line.plies });
     const max = (await OrderLine.max('position', {
       where: { orderId: order.id },
       transaction: t,
@@ -202,7 +241,12 @@ export async function copyLine(actor: User, order: Order, line: OrderLine) {
 export async function reorderLines(actor: User, order: Order, lineIds: number[]) {
   return Order.sequelize!.transaction(async (t) => {
     await lockOrder(order, t, actor);
-    const lines = await OrderLine.findAll({ where: { orderId: order.id }, transaction: t });
+    const lines = await OrderLine.findAll({
+      where: { orderId: order.id },
+      order: [['id', 'ASC']],
+      transaction: t,
+      lock: t.LOCK.UPDATE,
+    });
     const ids = new Set(lines.map((l) => l.id));
     if (
       lineIds.length !== ids.size ||
@@ -226,15 +270,28 @@ export async function reorderLines(actor: User, order: Order, lineIds: number[])
   });
 }
 
-/** The design reviewer approves (locks) or sends back a line's design. */
-export async function reviewLine(actor: User, order: Order, line: OrderLine, input: ReviewInput) {
-  if (input.decision === 'approve' && !line.designOk) {
-    throw conflict(
-      'A design that fails its checks cannot be approved; send it back with a comment.',
-    );
-  }
-  if (line.reviewState === 'approved') throw conflictLocked();
+/**
+ * The design reviewer approves (locks) or sends back a line's design — the version they looked at.
+ * Decided under the order's then the line's lock, so an edit cannot slip in between.
+ */
+export async function reviewLine(actor: User, order: Order, loaded: OrderLine, input: ReviewInput) {
   return Order.sequelize!.transaction(async (t) => {
+    await lockOrderRow(order.id, t);
+    const line = await lockLine(order.id, loaded.id, t);
+    if (line.reviewState === 'approved') throw conflictLocked();
+    if (line.designVersion !== input.designVersion) {
+      throw new AppError(
+        409,
+        'stale',
+        `The design of ${line.mark} changed since you opened it (now version ${line.designVersion}). Reload it and review the current design.`,
+        { designVersion: `Current version is ${line.designVersion}` },
+      );
+    }
+    if (input.decision === 'approve' && !line.designOk) {
+      throw conflict(
+        'A design that fails its checks cannot be approved; send it back with a comment.',
+      );
+    }
     await line.update(
       {
         reviewState: input.decision === 'approve' ? 'approved' : 'returned',
@@ -254,6 +311,7 @@ export async function reviewLine(actor: User, order: Order, line: OrderLine, inp
         mark: line.mark,
         comment: input.comment || undefined,
         engineVersion: line.engineVersion,
+        designVersion: line.designVersion,
       },
     );
     return line;

@@ -44,6 +44,7 @@ export async function createQuote(actor: User, order: Order) {
         ['id', 'ASC'],
       ],
       transaction: t,
+      lock: t.LOCK.UPDATE, // after the order's lock, as every order command does
     });
     const refusal = quoteRefusal(lines);
     if (refusal) throw conflict(refusal);

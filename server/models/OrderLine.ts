@@ -34,6 +34,8 @@ export class OrderLine extends Model<
   declare maxCsi: number | null;
   declare warningCount: number;
   declare description: string;
+  /** 1 for a new line, raised by every design change; a review names the version it approves. */
+  declare designVersion: CreationOptional<number>;
   declare reviewState: CreationOptional<ReviewState>;
   declare reviewComment: CreationOptional<string | null>;
   declare reviewedBy: CreationOptional<number | null>;
@@ -59,6 +61,7 @@ export class OrderLine extends Model<
         maxCsi: { type: DataTypes.DOUBLE, allowNull: true },
         warningCount: { type: DataTypes.INTEGER, allowNull: false, defaultValue: 0 },
         description: { type: DataTypes.STRING(120), allowNull: false },
+        designVersion: { type: DataTypes.INTEGER, allowNull: false, defaultValue: 1 },
         reviewState: { type: DataTypes.STRING(12), allowNull: false, defaultValue: 'pending' },
         reviewComment: { type: DataTypes.TEXT, allowNull: true },
         reviewedBy: { type: DataTypes.INTEGER, allowNull: true },

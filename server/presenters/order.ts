@@ -42,6 +42,7 @@ export function presentLineSummary(l: OrderLine): LineSummary {
     reviewedAt: l.reviewedAt?.toISOString() ?? null,
     engineVersion: l.engineVersion,
     updatedAt: l.updatedAt.toISOString(),
+    designVersion: l.designVersion,
   };
 }
 

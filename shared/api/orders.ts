@@ -75,6 +75,11 @@ export const reviewSchema = z
   .object({
     decision: z.enum(['approve', 'return'], { message: 'Approve or return' }),
     comment: z.string().trim().max(2000).default(''),
+    /** The line's `designVersion` the reviewer looked at; a newer design answers 409 `stale`. */
+    designVersion: z
+      .number({ message: 'Reload the design: the review must name the version you looked at' })
+      .int()
+      .positive(),
   })
   .refine((r) => r.decision === 'approve' || r.comment.length > 0, {
     message: 'Say what needs to change when you send a design back',
@@ -100,6 +105,8 @@ export const lineSummarySchema = z.object({
   reviewedAt: z.string().nullable(),
   engineVersion: z.string(),
   updatedAt: z.string(),
+  /** Raised by every design change; `POST …/review` must name the current one. */
+  designVersion: z.number().int(),
 });
 export type LineSummary = z.infer<typeof lineSummarySchema>;
 

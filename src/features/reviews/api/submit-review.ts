@@ -3,10 +3,11 @@ import { lineSchema, type LineDetail } from '../../../../shared/api/orders';
 import { api } from '../../../lib/api-client';
 import { orderKeys, reviewKeys } from '../../../lib/query-keys';
 
-/** Body of the review command. */
+/** Body of the review command: the decision on the design version the reviewer looked at. */
 export interface ReviewDecision {
   decision: 'approve' | 'return';
   comment: string;
+  designVersion: number;
 }
 
 /** `POST /api/orders/:orderId/lines/:lineId/review` → the reviewed line. */
@@ -29,6 +30,11 @@ export function useSubmitReview(orderId: number, lineId: number) {
         queryClient.invalidateQueries({ queryKey: reviewKeys.all }),
         queryClient.invalidateQueries({ queryKey: orderKeys.detail(orderId), exact: true }),
       ]);
+    },
+    // The design changed while it was open: show the current one (the message says so).
+    onError: async (error) => {
+      if ((error as { code?: string }).code === 'stale')
+        await queryClient.invalidateQueries({ queryKey: orderKeys.line(orderId, lineId) });
     },
   });
 }

@@ -65,7 +65,11 @@ function Decision({ line, orderId }: { line: LineDetail; orderId: number }) {
   const [message, setMessage] = useState<string | null>(null);
   const decide = (decision: ReviewDecision['decision']) => {
     // The same schema as the server: a return needs a comment.
-    const parsed = reviewSchema.safeParse({ decision, comment });
+    const parsed = reviewSchema.safeParse({
+      decision,
+      comment,
+      designVersion: line.designVersion,
+    });
     if (!parsed.success) {
       setMessage(parsed.error.issues[0]?.message ?? 'Check the comment');
       return;

@@ -66,6 +66,7 @@ const calls: Record<string, (s: S, w: W) => request.Test> = {
     s.post(`/api/orders/${w.order.id}/lines/${w.line.id}/review`, {
       decision: 'return',
       comment: 'Check it',
+      designVersion: w.line.designVersion,
     }),
   'GET /api/reviews': (s) => s.get('/api/reviews'),
   'POST /api/designs/preview': (s) => s.post('/api/designs/preview', FINK_24),

@@ -1,25 +1,16 @@
 import { beforeAll, describe, expect, it } from 'vitest';
 import { testApp } from '../../../support/db';
-import {
-  createJob,
-  createLine,
-  createOrder,
-  createPlant,
-  createUser,
-  FINK_24,
-} from '../../../support/factories';
-import { signedIn } from '../../../support/session';
+import { createJob, createLine, createOrder, FINK_24 } from '../../../support/factories';
+import { salesDesk, type Session } from '../../../support/desk';
 import { OrderLine, type Plant } from '../../../../server/models';
 
 const app = testApp();
 let plant: Plant;
-let sales: Awaited<ReturnType<typeof signedIn>>;
-let engineer: Awaited<ReturnType<typeof signedIn>>;
+let sales: Session;
+let engineer: Session;
 
 beforeAll(async () => {
-  plant = await createPlant();
-  sales = await signedIn(app, (await createUser({ role: 'sales', plant })).email);
-  engineer = await signedIn(app, (await createUser({ role: 'engineer', plant })).email);
+  ({ plant, sales, engineer } = await salesDesk(app));
 });
 
 const newOrder = async () => {
@@ -139,7 +130,10 @@ describe('design review', () => {
     const queue = await engineer.get('/api/reviews?pageSize=100').expect(200);
     expect(queue.body.items.map((i: { id: number }) => i.id)).toContain(line.id);
     const res = await engineer
-      .post(`/api/orders/${order.id}/lines/${line.id}/review`, { decision: 'approve' })
+      .post(`/api/orders/${order.id}/lines/${line.id}/review`, {
+        decision: 'approve',
+        designVersion: 1,
+      })
       .expect(200);
     expect(res.body).toMatchObject({ reviewState: 'approved', reviewedBy: expect.any(String) });
     const locked = await sales
@@ -152,7 +146,11 @@ describe('design review', () => {
     expect(after!.designInput).toEqual(line.designInput);
     await sales.patch(`/api/orders/${order.id}/lines/${line.id}`, { quantity: 9 }).expect(200);
     await engineer
-      .post(`/api/orders/${order.id}/lines/${line.id}/review`, { decision: 'return', comment: 'x' })
+      .post(`/api/orders/${order.id}/lines/${line.id}/review`, {
+        decision: 'return',
+        comment: 'x',
+        designVersion: 1,
+      })
       .expect(409);
   });
 
@@ -160,12 +158,16 @@ describe('design review', () => {
     const order = await createOrder({ plant });
     const line = await createLine({ order });
     await engineer
-      .post(`/api/orders/${order.id}/lines/${line.id}/review`, { decision: 'return' })
+      .post(`/api/orders/${order.id}/lines/${line.id}/review`, {
+        decision: 'return',
+        designVersion: 1,
+      })
       .expect(400);
     const res = await engineer
       .post(`/api/orders/${order.id}/lines/${line.id}/review`, {
         decision: 'return',
         comment: 'Check the heel bearing width',
+        designVersion: 1,
       })
       .expect(200);
     expect(res.body).toMatchObject({
@@ -192,7 +194,10 @@ describe('design review', () => {
     });
     expect(line.designOk).toBe(false);
     const res = await engineer
-      .post(`/api/orders/${order.id}/lines/${line.id}/review`, { decision: 'approve' })
+      .post(`/api/orders/${order.id}/lines/${line.id}/review`, {
+        decision: 'approve',
+        designVersion: 1,
+      })
       .expect(409);
     expect(res.body.error.message).toMatch(/fails/);
   });
