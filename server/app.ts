@@ -10,6 +10,7 @@ import pg from 'pg';
 import { readConfig, type Config } from './config';
 import { configurePassport } from './middleware/auth';
 import { requireCsrf } from './middleware/csrf';
+import { requireStorableText } from './middleware/storableText';
 import { apiNotFound, errorHandler } from './middleware/errors';
 import { authRouter } from './routes/auth/router';
 import { usersRouter } from './routes/users/router';
@@ -44,7 +45,7 @@ export function createApp(opts: AppOptions) {
   const app = express();
   // Per app, not per process: tests run apps in and out of demo mode side by side.
   app.locals.demo = config.demo;
-  app.set('trust proxy', config.production ? 1 : false);
+  app.set('trust proxy', config.trustProxy > 0 ? config.trustProxy : false);
   app.disable('x-powered-by');
   app.use(
     helmet({
@@ -84,6 +85,7 @@ export function createApp(opts: AppOptions) {
   });
 
   app.use('/api', express.json({ limit: '1mb' }));
+  app.use('/api', requireStorableText);
   app.use(
     '/api',
     session({

@@ -7,6 +7,10 @@ export interface Config {
   sessionSecret: string;
   sessionIdleMinutes: number;
   loginAttemptsPer15Min: number;
+  /** Failed sign-ins per 15 minutes from one address across all e-mails. */
+  loginAttemptsPerAddress: number;
+  /** Proxy hops in front of the app whose X-Forwarded-For is believed (0: none). */
+  trustProxy: number;
 }
 
 export function readConfig(env: NodeJS.ProcessEnv = process.env): Config {
@@ -21,5 +25,7 @@ export function readConfig(env: NodeJS.ProcessEnv = process.env): Config {
     sessionSecret,
     sessionIdleMinutes: Number(env.SESSION_IDLE_MINUTES ?? 120),
     loginAttemptsPer15Min: Number(env.LOGIN_ATTEMPTS ?? 10),
+    loginAttemptsPerAddress: Number(env.LOGIN_ATTEMPTS_PER_ADDRESS ?? 50),
+    trustProxy: Number(env.TRUST_PROXY ?? (production ? 1 : 0)),
   };
 }

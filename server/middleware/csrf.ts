@@ -14,6 +14,12 @@ export function csrfToken(session: { csrfToken?: string }) {
   return session.csrfToken;
 }
 
+/** A new token at sign-in and sign-out: a token seen before the change of user stops working. */
+export function rotateCsrfToken(session: { csrfToken?: string }) {
+  session.csrfToken = randomBytes(24).toString('base64url');
+  return session.csrfToken;
+}
+
 const SAFE = new Set(['GET', 'HEAD', 'OPTIONS']);
 
 /** Every non-GET request must echo the session's token in X-CSRF-Token. */

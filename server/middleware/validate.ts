@@ -4,12 +4,13 @@ import { badRequest } from '../errors';
 
 /** Turn zod issues into `{ field: message }` the client shows beside each field. */
 export function fieldMessages(error: z.ZodError): Record<string, string> {
-  const fields: Record<string, string> = {};
+  // A Map, so a field named like an Object.prototype member (`constructor`, `__proto__`) is kept.
+  const fields = new Map<string, string>();
   for (const issue of error.issues) {
-    const key = issue.path.join('.') || '_';
-    if (!(key in fields)) fields[key] = issue.message;
+    const key = issue.path.map(String).join('.') || '_';
+    if (!fields.has(key)) fields.set(key, issue.message);
   }
-  return fields;
+  return Object.fromEntries(fields);
 }
 
 /** Parse `req.body` or `req.query` with a schema from shared/; the parsed value lands in res.locals. */

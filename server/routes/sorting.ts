@@ -10,7 +10,8 @@ export function orderFrom(
   if (!sort) return fallback;
   const desc = sort.startsWith('-');
   const key = desc ? sort.slice(1) : sort;
-  const column = allowed[key];
+  // Own keys only: `sort=constructor` or `toString` must not find Object.prototype's members.
+  const column = Object.hasOwn(allowed, key) ? allowed[key] : undefined;
   if (!column)
     throw badRequest(`Cannot sort by "${key}".`, {
       sort: `One of: ${Object.keys(allowed).join(', ')}`,

@@ -81,7 +81,7 @@ const MAX_NAME = 200;
 export function sanitiseFileName(raw: string): string {
   const base = raw.normalize('NFC').split(/[/\\]/).pop() ?? '';
   const cleaned = base
-    .replace(/[\p{Cc}\p{Cf}<>:"|?*]/gu, '')
+    .replace(/[\p{Cc}\p{Cf}\p{Cs}<>:"|?*]/gu, '')
     .replace(/\s+/g, ' ')
     .replace(/^[\s.]+|[\s.]+$/g, '');
   if (!cleaned) return 'plan';

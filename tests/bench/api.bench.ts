@@ -38,7 +38,7 @@ for (let i = 0; i < 60; i++) await createLine({ order, mark: `T${i + 1}` });
 const app = createApp({
   sequelize,
   databaseUrl: db.url,
-  config: { demo: false, loginAttemptsPer15Min: 1000 },
+  config: { demo: false, loginAttemptsPer15Min: 1000, loginAttemptsPerAddress: 100_000 },
 });
 const server = app.listen(0, '127.0.0.1');
 await new Promise((r) => server.once('listening', r));
@@ -54,7 +54,11 @@ const login = await fetch(`${base}/api/auth/login`, {
   body: JSON.stringify({ email: sales.email, password: TEST_PASSWORD }),
 });
 cookie = (login.headers.get('set-cookie') ?? cookie).split(';')[0];
-const headers = { cookie, 'x-csrf-token': token, 'content-type': 'application/json' };
+// Sign-in rotates the CSRF token: fetch the new one with the signed-in session.
+const rotated = (await (await fetch(`${base}/api/auth/csrf`, { headers: { cookie } })).json()) as {
+  token: string;
+};
+const headers = { cookie, 'x-csrf-token': rotated.token, 'content-type': 'application/json' };
 
 const percentile = (sorted: number[], p: number) =>
   sorted[Math.min(sorted.length - 1, Math.floor((p / 100) * sorted.length))];

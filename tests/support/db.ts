@@ -40,7 +40,12 @@ export function testApp(
   return createApp({
     sequelize: testSequelize(),
     databaseUrl: testDatabaseUrl(),
-    config: { demo: false, loginAttemptsPer15Min: 1000, ...config },
+    config: {
+      demo: false,
+      loginAttemptsPer15Min: 1000,
+      loginAttemptsPerAddress: 100_000,
+      ...config,
+    },
     clientDir,
     mailer: mail,
   });

@@ -2,14 +2,19 @@ import request from 'supertest';
 import type { Express } from 'express';
 import { TEST_PASSWORD } from './factories';
 
-/** A supertest agent with a cookie jar and the session's CSRF token. */
+/** A supertest agent with a cookie jar and the session's CSRF token (fetched again as it rotates). */
 export async function agentFor(app: Express) {
   const agent = request.agent(app);
-  const { body } = await agent.get('/api/auth/csrf').expect(200);
-  const token = body.token as string;
+  const fetchToken = async () =>
+    (await agent.get('/api/auth/csrf').expect(200)).body.token as string;
+  let token = await fetchToken();
   return {
     agent,
-    token,
+    get token() {
+      return token;
+    },
+    /** Sign-in and sign-out rotate the token: fetch the new one, as the client does. */
+    refreshToken: async () => (token = await fetchToken()),
     get: (url: string) => agent.get(url),
     post: (url: string, data?: object) =>
       agent
@@ -21,6 +26,11 @@ export async function agentFor(app: Express) {
         .patch(url)
         .set('X-CSRF-Token', token)
         .send(data ?? {}),
+    put: (url: string, data?: object) =>
+      agent
+        .put(url)
+        .set('X-CSRF-Token', token)
+        .send(data ?? {}),
     delete: (url: string) => agent.delete(url).set('X-CSRF-Token', token),
   };
 }
@@ -29,5 +39,6 @@ export async function agentFor(app: Express) {
 export async function signedIn(app: Express, email: string, password = TEST_PASSWORD) {
   const s = await agentFor(app);
   await s.post('/api/auth/login', { email, password }).expect(200);
+  await s.refreshToken();
   return s;
 }

@@ -13,7 +13,7 @@ beforeAll(async () => {
   app = createApp({
     sequelize: db.sequelize,
     databaseUrl: db.cluster.url,
-    config: { demo: false, loginAttemptsPer15Min: 1000 },
+    config: { demo: false, loginAttemptsPer15Min: 1000, loginAttemptsPerAddress: 100_000 },
   });
 }, 120_000);
 
