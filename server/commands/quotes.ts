@@ -179,6 +179,7 @@ export async function sendQuote(actor: User, order: Order, quote: Quote, mailer:
   const message = quoteMessage(quote);
   await mailer.send({
     to,
+    plantId: order.plantId,
     ...message,
     attachments: [
       { filename: `${quote.reference}.pdf`, content: pdf, contentType: 'application/pdf' },

@@ -53,8 +53,16 @@ export async function createUser(actor: User, input: CreateUserInput) {
   });
 }
 
-/** Rename, change role, (de)activate or reset the password of a user of the actor's plant. */
-export async function updateUser(actor: User, user: User, input: UpdateUserInput) {
+/**
+ * Rename, change role, (de)activate or reset the password of a user of the actor's plant. A reset
+ * password ends the user's other sessions (all but `currentSessionId`, the actor's own request).
+ */
+export async function updateUser(
+  actor: User,
+  user: User,
+  input: UpdateUserInput,
+  currentSessionId = '',
+) {
   if (
     user.id === actor.id &&
     (input.active === false || (input.role && input.role !== actor.role))
@@ -83,12 +91,12 @@ export async function updateUser(actor: User, user: User, input: UpdateUserInput
       subjectId: user.id,
       data: { ...input, password: input.password ? 'changed' : undefined },
     });
-    if (input.active === false) {
-      // End every session of a deactivated user at once (deserializeUser also refuses them).
+    if (input.active === false || input.password !== undefined) {
+      // End the user's sessions at once (deserializeUser also refuses a deactivated user).
       await User.sequelize!.query(
-        `DELETE FROM session WHERE (sess->'passport'->>'user')::int = :id`,
+        `DELETE FROM session WHERE (sess->'passport'->>'user')::int = :id AND sid <> :keep`,
         {
-          replacements: { id: user.id },
+          replacements: { id: user.id, keep: currentSessionId },
           transaction: t,
         },
       );

@@ -8,7 +8,12 @@ export interface OutgoingMail {
   text: string;
   html?: string;
   attachments?: { filename: string; content: Buffer; contentType: string }[];
+  /** The plant that sends it: carried in a header so the demo inbox shows each plant its own. */
+  plantId?: number;
 }
+
+/** The header naming the sending plant (read back by the local SMTP fake). */
+export const PLANT_HEADER = 'X-Spanwise-Plant';
 
 export interface Mailer {
   send: (mail: OutgoingMail) => Promise<{ messageId: string }>;
@@ -27,8 +32,9 @@ export function createMailer(opts: { url: string; fake?: SmtpFake | null; from?:
   return {
     fake: opts.fake ?? null,
     from,
-    send: async (mail) => {
-      const info = await transport.sendMail({ from, ...mail });
+    send: async ({ plantId, ...mail }) => {
+      const headers = plantId === undefined ? undefined : { [PLANT_HEADER]: String(plantId) };
+      const info = await transport.sendMail({ from, ...mail, headers });
       return { messageId: info.messageId };
     },
   };

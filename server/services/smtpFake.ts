@@ -7,11 +7,13 @@ import { simpleParser } from 'mailparser';
 import { randomUUID } from 'node:crypto';
 import type { AddressInfo } from 'node:net';
 import type { MailMessage } from '../../shared/api/pricing';
+import { PLANT_HEADER } from './mail';
 
 export interface SmtpFake {
   url: string;
   port: number;
-  messages: () => MailMessage[];
+  /** Newest first; with a plant id, only the messages that plant sent. */
+  messages: (plantId?: number) => MailMessage[];
   clear: () => void;
   close: () => Promise<void>;
 }
@@ -25,7 +27,7 @@ const addresses = (v: unknown): string[] => {
 
 /** Start the fake on 127.0.0.1 (port 0 picks a free one). */
 export async function startSmtpFake(port = 0): Promise<SmtpFake> {
-  const kept: MailMessage[] = [];
+  const kept: (MailMessage & { plantId: number | null })[] = [];
   const server = new SMTPServer({
     secure: false,
     authOptional: true,
@@ -38,6 +40,7 @@ export async function startSmtpFake(port = 0): Promise<SmtpFake> {
         .then((mail) => {
           kept.push({
             id: randomUUID(),
+            plantId: Number(mail.headers.get(PLANT_HEADER.toLowerCase()) ?? NaN) || null,
             receivedAt: new Date().toISOString(),
             from: addresses(mail.from)[0] ?? '',
             to: addresses(mail.to),
@@ -62,7 +65,11 @@ export async function startSmtpFake(port = 0): Promise<SmtpFake> {
   return {
     url: `smtp://127.0.0.1:${actual}`,
     port: actual,
-    messages: () => [...kept].reverse(),
+    messages: (plantId) =>
+      kept
+        .filter((m) => plantId === undefined || m.plantId === plantId)
+        .map(({ plantId: _plant, ...m }) => m)
+        .reverse(),
     clear: () => void kept.splice(0),
     close: () => new Promise((resolve) => server.close(() => resolve())),
   };

@@ -76,7 +76,12 @@ export function usersRouter() {
     load('User', findUser),
     authorize(userPolicy.update),
     handle(async (req, res) => {
-      const user = await updateUser(req.user!, res.locals.record as User, res.locals.body);
+      const user = await updateUser(
+        req.user!,
+        res.locals.record as User,
+        res.locals.body,
+        req.sessionID,
+      );
       res.json(presentUser(user));
     }),
   );
