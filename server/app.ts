@@ -26,6 +26,7 @@ import { quotesRouter } from './routes/quotes/router';
 import { filesRouter } from './routes/files/router';
 import type { Mailer } from './services/mail';
 import { survivePoolErrors } from './db/resilience';
+import { sweepPartialUploads } from './services/storage';
 import { logger } from './logger';
 
 export interface AppOptions {
@@ -70,6 +71,10 @@ export function createApp(opts: AppOptions) {
     errorLog: (...args: unknown[]) => logger.warn({ detail: args.map(String) }, 'session store'),
   });
   app.locals.mailer = opts.mailer ?? null;
+  // Start-up: half-written uploads of a killed process go (in the background; logged if it fails).
+  void sweepPartialUploads()
+    .then((swept) => swept.length && logger.info({ swept }, 'removed partial uploads'))
+    .catch((err: unknown) => logger.warn({ err }, 'could not sweep partial uploads'));
   app.locals.close = async () => {
     store.close();
     await pool.end().catch(() => undefined);

@@ -4,7 +4,7 @@
  */
 import { randomUUID } from 'node:crypto';
 import { mkdirSync } from 'node:fs';
-import { rename, rm, stat } from 'node:fs/promises';
+import { readdir, rename, rm, stat } from 'node:fs/promises';
 import { join, resolve } from 'node:path';
 import { fileTypeFromFile } from 'file-type';
 import type { StoredFile } from '../../shared/api/pricing';
@@ -29,6 +29,26 @@ export function uploadTempDir(): string {
   const dir = join(uploadDir(), 'tmp');
   mkdirSync(dir, { recursive: true });
   return dir;
+}
+
+/**
+ * Remove uploads a killed process left half-written in the temp folder. Only ones older than
+ * `olderThanMs`: another app server sharing UPLOAD_DIR may be receiving a file right now.
+ */
+export async function sweepPartialUploads(olderThanMs = 60 * 60 * 1000): Promise<string[]> {
+  const dir = uploadTempDir();
+  const cutoff = Date.now() - olderThanMs;
+  const swept: string[] = [];
+  for (const name of await readdir(dir)) {
+    if (!name.endsWith('.part')) continue;
+    const path = join(dir, name);
+    const info = await stat(path).catch(() => null);
+    if (info && info.mtimeMs < cutoff) {
+      await removeQuietly(path);
+      swept.push(name);
+    }
+  }
+  return swept;
 }
 
 // A stored name is ours alone (uuid + known extension): anything else never reaches the disk API.
