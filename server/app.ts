@@ -24,6 +24,9 @@ import { priceBookRouter } from './routes/priceBook/router';
 import { quotesRouter } from './routes/quotes/router';
 import { filesRouter } from './routes/files/router';
 import type { Mailer } from './services/mail';
+import { startMailQueue, type MailQueue } from './services/mailQueue';
+import { renderAttachment } from './services/mailAttachments';
+import { acceptanceRouter } from './routes/portal/router';
 
 export interface AppOptions {
   sequelize: Sequelize;
@@ -33,6 +36,8 @@ export interface AppOptions {
   clientDir?: string;
   /** Outgoing mail (SMTP_URL or the local fake); without it, sending answers 503. */
   mailer?: Mailer;
+  /** The mail job queue (pg-boss); without it, mail waits in the outbox for a worker. */
+  mailQueue?: MailQueue | null;
 }
 
 /** The whole HTTP app, without a listener, so tests drive it with supertest. */
@@ -59,7 +64,24 @@ export function createApp(opts: AppOptions) {
   const PgStore = connectPgSimple(session);
   const store = new PgStore({ pool, tableName: 'session', pruneSessionInterval: 15 * 60 });
   app.locals.mailer = opts.mailer ?? null;
+  app.locals.mailQueue = opts.mailQueue ?? null;
+  // Given a mailer but no queue (tests), the app runs its own queue worker.
+  const ownQueue =
+    opts.mailer && opts.mailQueue === undefined
+      ? startMailQueue({
+          databaseUrl: opts.databaseUrl,
+          mailer: opts.mailer,
+          render: renderAttachment,
+          pollingIntervalSeconds: 0.5,
+        })
+          .then((q) => (app.locals.mailQueue = q))
+          .catch((e: Error) => {
+            console.error(`Mail queue did not start: ${e.message}`);
+            return null;
+          })
+      : null;
   app.locals.close = async () => {
+    await (await ownQueue)?.stop();
     store.close();
     await pool.end().catch(() => undefined);
   };
@@ -99,6 +121,7 @@ export function createApp(opts: AppOptions) {
   app.use('/api/customers', customersRouter());
   app.use('/api/jobs', jobsRouter());
   app.use('/api/plant', plantRouter());
+  app.use('/api/orders/:id/quotes', acceptanceRouter());
   app.use('/api/orders/:id/quotes', quotesRouter());
   app.use('/api/orders', ordersRouter());
   app.use('/api/price-book', priceBookRouter());
