@@ -27,6 +27,10 @@ import type { Mailer } from './services/mail';
 import { startMailQueue, type MailQueue } from './services/mailQueue';
 import { renderAttachment } from './services/mailAttachments';
 import { acceptanceRouter } from './routes/portal/router';
+import { orderPaymentsRouter } from './routes/payments/router';
+import { paymentsWebhookRouter } from './routes/payments/webhook';
+import { mailProbe } from './services/mailQueue';
+import { paymentsProbe, type Payments } from './services/payments';
 
 export interface AppOptions {
   sequelize: Sequelize;
@@ -38,6 +42,8 @@ export interface AppOptions {
   mailer?: Mailer;
   /** The mail job queue (pg-boss); without it, mail waits in the outbox for a worker. */
   mailQueue?: MailQueue | null;
+  /** The payment service through the SDK (the local fake or the hosted one); null: none. */
+  payments?: Payments | null;
 }
 
 /** The whole HTTP app, without a listener, so tests drive it with supertest. */
@@ -65,6 +71,7 @@ export function createApp(opts: AppOptions) {
   const store = new PgStore({ pool, tableName: 'session', pruneSessionInterval: 15 * 60 });
   app.locals.mailer = opts.mailer ?? null;
   app.locals.mailQueue = opts.mailQueue ?? null;
+  app.locals.payments = opts.payments ?? null;
   // Given a mailer but no queue (tests), the app runs its own queue worker.
   const ownQueue =
     opts.mailer && opts.mailQueue === undefined
@@ -89,12 +96,20 @@ export function createApp(opts: AppOptions) {
   app.get('/api/health', async (_req, res) => {
     try {
       await opts.sequelize.query('SELECT 1');
-      res.json({ status: 'ok', db: 'ok', demo: config.demo });
+      res.json({
+        status: 'ok',
+        db: 'ok',
+        demo: config.demo,
+        mail: await mailProbe(app.locals.mailQueue),
+        payments: paymentsProbe(app.locals.payments),
+      });
     } catch {
       res.status(503).json({ status: 'degraded', db: 'unreachable', demo: config.demo });
     }
   });
 
+  // Verified over the raw body, so mounted before the JSON parser (and outside session and CSRF).
+  app.use('/api/payments/webhook', paymentsWebhookRouter());
   app.use('/api', express.json({ limit: '1mb' }));
   app.use(
     '/api',
@@ -123,6 +138,7 @@ export function createApp(opts: AppOptions) {
   app.use('/api/plant', plantRouter());
   app.use('/api/orders/:id/quotes', acceptanceRouter());
   app.use('/api/orders/:id/quotes', quotesRouter());
+  app.use('/api/orders', orderPaymentsRouter());
   app.use('/api/orders', ordersRouter());
   app.use('/api/price-book', priceBookRouter());
   app.use('/api/reviews', reviewsRouter());

@@ -32,7 +32,8 @@ async function quotedOrder(plant: Plant, customer?: Customer) {
   await createLine({ order });
   const sales = await createUser({ role: 'sales', plant });
   // Sent: a builder reads only the revisions the plant sent them.
-  await sendQuote(sales, await order.reload(), await createQuote(sales, order));
+  const quote = await createQuote(sales, order);
+  await sendQuote(sales, await order.reload(), quote);
   return order.reload();
 }
 
