@@ -75,7 +75,10 @@ export async function acceptQuote(
   return Order.sequelize!.transaction(async (t) => {
     const locked = await Order.findByPk(order.id, { transaction: t, lock: t.LOCK.UPDATE });
     if (!locked) throw conflict('The order no longer exists.');
-    const existing = await QuoteAcceptance.findOne({ where: { orderId: order.id }, transaction: t });
+    const existing = await QuoteAcceptance.findOne({
+      where: { orderId: order.id },
+      transaction: t,
+    });
     if (existing) {
       if (existing.quoteId === quote.id) return { changed: false };
       throw conflict('This order was already accepted on another revision.');

@@ -13,7 +13,12 @@ const orderIdOf = (o: Meta) => {
 };
 
 /** An order event written by the payment service (no signed-in actor). */
-async function serviceEvent(t: Transaction, order: Order, action: string, data: Record<string, unknown>) {
+async function serviceEvent(
+  t: Transaction,
+  order: Order,
+  action: string,
+  data: Record<string, unknown>,
+) {
   await Order.sequelize!.query('UPDATE orders SET updated_at = now() WHERE id = :id', {
     replacements: { id: order.id },
     transaction: t,
@@ -31,7 +36,11 @@ async function serviceEvent(t: Transaction, order: Order, action: string, data: 
 /** A pending card deposit is paid: receipt number, order → deposit paid, audit, receipt e-mail. */
 async function markPaid(t: Transaction, order: Order, p: Payment, intentId: string | null) {
   await p.update(
-    { status: 'succeeded', providerPaymentIntentId: intentId ?? p.providerPaymentIntentId, paidAt: new Date() },
+    {
+      status: 'succeeded',
+      providerPaymentIntentId: intentId ?? p.providerPaymentIntentId,
+      paidAt: new Date(),
+    },
     { transaction: t },
   );
   await p.update({ receiptNumber: receiptNumber(order, p) }, { transaction: t });
@@ -43,12 +52,18 @@ async function markPaid(t: Transaction, order: Order, p: Payment, intentId: stri
     paymentIntent: p.providerPaymentIntentId,
   });
   await settleDeposit(t, order);
-  await queueReceipt(t, order, p, p.quoteId ? await Quote.findByPk(p.quoteId, { transaction: t }) : null);
+  await queueReceipt(
+    t,
+    order,
+    p,
+    p.quoteId ? await Quote.findByPk(p.quoteId, { transaction: t }) : null,
+  );
 }
 
 async function sessionCompleted(t: Transaction, order: Order, s: Stripe.Checkout.Session) {
   if (s.payment_status !== 'paid') return;
-  const intentId = typeof s.payment_intent === 'string' ? s.payment_intent : (s.payment_intent?.id ?? null);
+  const intentId =
+    typeof s.payment_intent === 'string' ? s.payment_intent : (s.payment_intent?.id ?? null);
   const p = await Payment.findOne({ where: { providerSessionId: s.id }, transaction: t });
   if (!p) throw conflict(`No deposit was opened for session ${s.id}.`);
   if (p.status !== 'succeeded') await markPaid(t, order, p, intentId);
@@ -82,7 +97,10 @@ async function refundCreated(t: Transaction, order: Order, r: Stripe.Refund) {
     }));
   if (!p) throw conflict(`No refund was requested as ${r.id}.`);
   if (p.status === 'succeeded' || r.status !== 'succeeded') return;
-  await p.update({ status: 'succeeded', providerRefundId: r.id, paidAt: new Date() }, { transaction: t });
+  await p.update(
+    { status: 'succeeded', providerRefundId: r.id, paidAt: new Date() },
+    { transaction: t },
+  );
   await p.update({ receiptNumber: receiptNumber(order, p) }, { transaction: t });
   await serviceEvent(t, order, 'refund.succeeded', {
     paymentId: p.id,

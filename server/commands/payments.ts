@@ -20,7 +20,11 @@ export async function paidCents(orderId: number, t?: Transaction) {
 
 export const requirePayments = (p: Payments | null): Payments => {
   if (!p)
-    throw new AppError(503, 'payments_unavailable', 'Online payment is not configured on this server.');
+    throw new AppError(
+      503,
+      'payments_unavailable',
+      'Online payment is not configured on this server.',
+    );
   return p;
 };
 
@@ -46,7 +50,9 @@ export async function openDeposit(
   if (order.status === 'deposit_paid' || order.status === 'released')
     throw conflict('The deposit on this order is already paid.');
   if (order.status !== 'accepted')
-    throw conflict(`A deposit is taken on an accepted order; this one is ${order.status.replace('_', ' ')}.`);
+    throw conflict(
+      `A deposit is taken on an accepted order; this one is ${order.status.replace('_', ' ')}.`,
+    );
   const quote = await acceptedQuote(order);
   const s = quote.snapshot as unknown as QuoteSnapshot;
   const amount = cents(quote.depositDue) - (await paidCents(order.id));

@@ -8,7 +8,8 @@ import {
 } from 'sequelize';
 
 /** What to render and attach when the message is sent (rendered by the worker, not stored). */
-export type MailAttachment = { type: 'quote'; quoteId: number } | { type: 'receipt'; paymentId: number };
+export type MailAttachment =
+  { type: 'quote'; quoteId: number } | { type: 'receipt'; paymentId: number };
 export type MailStatus = 'queued' | 'retrying' | 'sent' | 'failed';
 
 /**

@@ -117,9 +117,11 @@ const BUILDER_SUMMARIES: Record<string, (e: AuditEvent) => string> = {
     e.data.onBehalf
       ? `${d(e, 'reference')} accepted for you by the plant (${d(e, 'method')}, ${d(e, 'name')})`
       : `You accepted ${d(e, 'reference')} (${d(e, 'name')})`,
-  'quote.changes_requested': (e) => `You asked for changes to ${d(e, 'reference')}: ${d(e, 'message')}`,
+  'quote.changes_requested': (e) =>
+    `You asked for changes to ${d(e, 'reference')}: ${d(e, 'message')}`,
   'payment.received': (e) => `Deposit received: ${money(e)}, receipt ${d(e, 'receiptNumber')}`,
-  'payment.recorded': (e) => `Payment received (${d(e, 'method')}): ${money(e)}, receipt ${d(e, 'receiptNumber')}`,
+  'payment.recorded': (e) =>
+    `Payment received (${d(e, 'method')}): ${money(e)}, receipt ${d(e, 'receiptNumber')}`,
   'order.cancelled': () => 'Order cancelled',
   'refund.succeeded': (e) => `Refund sent: ${money(e)}`,
   'order.status': (e) => `Order ${d(e, 'to').replace('_', ' ')}`,

@@ -89,8 +89,15 @@ async function relay(boss: PgBoss) {
     limit: 100,
   });
   for (const row of waiting) {
-    const jobId = await boss.send(MAIL_QUEUE, { id: row.id }, { ...RETRY, singletonKey: `mail-${row.id}` });
-    await MailMessage.update({ jobId: jobId ?? 'duplicate' }, { where: { id: row.id, jobId: null } });
+    const jobId = await boss.send(
+      MAIL_QUEUE,
+      { id: row.id },
+      { ...RETRY, singletonKey: `mail-${row.id}` },
+    );
+    await MailMessage.update(
+      { jobId: jobId ?? 'duplicate' },
+      { where: { id: row.id, jobId: null } },
+    );
   }
 }
 
@@ -111,7 +118,8 @@ export async function startMailQueue(opts: {
     lastError = e.message;
   });
   await boss.start();
-  if (!(await boss.getQueue(MAIL_QUEUE))) await boss.createQueue(MAIL_QUEUE, { name: MAIL_QUEUE, ...RETRY });
+  if (!(await boss.getQueue(MAIL_QUEUE)))
+    await boss.createQueue(MAIL_QUEUE, { name: MAIL_QUEUE, ...RETRY });
   await boss.work<{ id: number }>(
     MAIL_QUEUE,
     { includeMetadata: true, pollingIntervalSeconds: opts.pollingIntervalSeconds ?? 2 },

@@ -26,7 +26,11 @@ export function createPayments(opts: {
     telemetry: false,
     appInfo: { name: 'Spanwise' },
     ...(fake
-      ? { host: fake.hostname, port: Number(fake.port), protocol: fake.protocol === 'https:' ? 'https' : 'http' }
+      ? {
+          host: fake.hostname,
+          port: Number(fake.port),
+          protocol: fake.protocol === 'https:' ? 'https' : 'http',
+        }
       : {}),
   });
   return {

@@ -18,7 +18,12 @@ interface LineItem {
   price_data?: { currency?: string; unit_amount?: string; product_data?: { name?: string } };
 }
 
-export function fakeApp(opts: { secretKey: string; store: Store; send: Send; baseUrl: () => string }) {
+export function fakeApp(opts: {
+  secretKey: string;
+  store: Store;
+  send: Send;
+  baseUrl: () => string;
+}) {
   const { store } = opts;
   const app = express();
   app.disable('x-powered-by');
@@ -177,13 +182,23 @@ export function fakeApp(opts: { secretKey: string; store: Store; send: Send; bas
     const limit = Math.min(100, Math.max(1, Number(req.query.limit ?? 10) || 10));
     const type = typeof req.query.type === 'string' ? req.query.type : null;
     const list = store.events.filter((e) => !type || e.type === type);
-    res.json({ object: 'list', data: list.slice(0, limit), has_more: list.length > limit, url: '/v1/events' });
+    res.json({
+      object: 'list',
+      data: list.slice(0, limit),
+      has_more: list.length > limit,
+      url: '/v1/events',
+    });
   });
 
   app.use('/v1', (req, res) => {
     res
       .status(404)
-      .json(apiError('invalid_request_error', `Unrecognized request URL (${req.method}: ${req.originalUrl}).`));
+      .json(
+        apiError(
+          'invalid_request_error',
+          `Unrecognized request URL (${req.method}: ${req.originalUrl}).`,
+        ),
+      );
   });
 
   // The hosted payment page at the session's url.

@@ -24,7 +24,12 @@ export interface PaymentsFake {
 }
 
 export async function startPaymentsFake(
-  opts: { port?: number; webhookUrl?: string | null; secretKey?: string; webhookSecret?: string } = {},
+  opts: {
+    port?: number;
+    webhookUrl?: string | null;
+    secretKey?: string;
+    webhookSecret?: string;
+  } = {},
 ): Promise<PaymentsFake> {
   const secretKey = opts.secretKey ?? FAKE_SECRET_KEY;
   const webhookSecret = opts.webhookSecret ?? FAKE_WEBHOOK_SECRET;

@@ -28,7 +28,8 @@ export function createSender(opts: { secret: string; url: () => string | null })
   function deliver(event: { id: string }, attempt = 0) {
     if (closed) return;
     const url = opts.url();
-    const retry = () => later(() => deliver(event, attempt + 1), Math.min(500 * 2 ** attempt, 30_000));
+    const retry = () =>
+      later(() => deliver(event, attempt + 1), Math.min(500 * 2 ** attempt, 30_000));
     if (!url) return retry();
     const payload = JSON.stringify(event, null, 2);
     fetch(url, {

@@ -23,7 +23,9 @@ const order = load('Order', findOrder);
 const loadPayment: RequestHandler = handle(async (req, res, next) => {
   const id = parseId(req.params.paymentId);
   const o = res.locals.record as Order;
-  const p = id ? await Payment.findOne({ where: { id, orderId: o.id, status: 'succeeded' } }) : null;
+  const p = id
+    ? await Payment.findOne({ where: { id, orderId: o.id, status: 'succeeded' } })
+    : null;
   if (!p) return next(notFound('Payment'));
   res.locals.payment = p;
   next();

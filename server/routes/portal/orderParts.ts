@@ -29,10 +29,9 @@ export async function orderMoneyParts(orderId: number, actor: User) {
     findAcceptance(orderId),
   ]);
   // A builder sees money that moved, not checkout sessions they left open.
-  const shown = actor.role === 'builder' ? payments.filter((p) => p.status !== 'pending') : payments;
-  const quote = acceptance?.quote
-    ? await Quote.findByPk(acceptance.quoteId)
-    : null;
+  const shown =
+    actor.role === 'builder' ? payments.filter((p) => p.status !== 'pending') : payments;
+  const quote = acceptance?.quote ? await Quote.findByPk(acceptance.quoteId) : null;
   return {
     payments: shown.map(presentPayment),
     money: presentMoney(quote, payments),

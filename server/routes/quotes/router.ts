@@ -16,7 +16,8 @@ const order = load('Order', findOrder);
 const withCreator = [{ model: User, as: 'creator' }];
 
 /** A builder sees only the revisions the plant sent them, never drafts made since. */
-const visibleTo = (viewer: User) => (viewer.role === 'builder' ? { sentAt: { [Op.ne]: null } } : {});
+const visibleTo = (viewer: User) =>
+  viewer.role === 'builder' ? { sentAt: { [Op.ne]: null } } : {};
 
 /** The order's revisions, newest first. */
 const revisions = (o: Order, viewer: User) =>
@@ -56,7 +57,9 @@ export function quotesRouter() {
     authorize(quotePolicy.list),
     handle(async (req, res) => {
       const list = await revisions(res.locals.record, req.user!);
-      const latest = (await Quote.max('number', { where: { orderId: res.locals.record.id } })) as number;
+      const latest = (await Quote.max('number', {
+        where: { orderId: res.locals.record.id },
+      })) as number;
       res.json({ items: list.map((q) => presentQuote(q, q.number < latest, req.user!)) });
     }),
   );
