@@ -27,6 +27,7 @@ import type { Mailer } from './services/mail';
 import { startMailQueue, type MailQueue } from './services/mailQueue';
 import { renderAttachment } from './services/mailAttachments';
 import { acceptanceRouter } from './routes/portal/router';
+import { portalHomeRouter } from './routes/portal/home';
 import { orderPaymentsRouter } from './routes/payments/router';
 import { paymentsWebhookRouter } from './routes/payments/webhook';
 import { mailProbe } from './services/mailQueue';
@@ -140,6 +141,7 @@ export function createApp(opts: AppOptions) {
   app.use('/api/orders/:id/quotes', quotesRouter());
   app.use('/api/orders', orderPaymentsRouter());
   app.use('/api/orders', ordersRouter());
+  app.use('/api/portal', portalHomeRouter());
   app.use('/api/price-book', priceBookRouter());
   app.use('/api/reviews', reviewsRouter());
   app.use('/api/designs', designsRouter());

@@ -134,3 +134,38 @@ export const timelineStepSchema = z.object({
   at: z.string().nullable(),
 });
 export type TimelineStep = z.infer<typeof timelineStepSchema>;
+
+const homeOrder = {
+  orderId: z.number().int(),
+  orderNumber: z.string(),
+  job: z.string(),
+  status: z.string(),
+};
+
+/** `GET /api/portal/home`: what needs the builder now. */
+export const portalHomeSchema = z.object({
+  quotesWaiting: z.array(
+    z.object({
+      ...homeOrder,
+      number: z.number().int(),
+      reference: z.string(),
+      total: z.number(),
+      currency: z.string(),
+      validUntil: z.string(),
+      daysLeft: z.number().int(),
+    }),
+  ),
+  depositsDue: z.array(
+    z.object({ ...homeOrder, reference: z.string(), amount: z.number(), currency: z.string() }),
+  ),
+  inProgress: z.array(z.object({ ...homeOrder, plannedDelivery: z.string().nullable() })),
+  messages: z.array(
+    z.object({
+      id: z.number().int(),
+      orderId: z.number().int().nullable(),
+      subject: z.string(),
+      at: z.string(),
+    }),
+  ),
+});
+export type PortalHome = z.infer<typeof portalHomeSchema>;
