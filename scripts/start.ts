@@ -13,6 +13,9 @@ import { User } from '../server/models';
 import { provideMailer } from '../server/services/provideMailer';
 import type { Mailer } from '../server/services/mail';
 import { seedDemo } from '../seeders/demo';
+import { providePayments } from '../server/services/providePayments';
+import { startMailQueue, type MailQueue } from '../server/services/mailQueue';
+import { renderAttachment } from '../server/services/mailAttachments';
 import { DEMO_PASSWORD, DEMO_SIGN_INS } from '../shared/api/demo';
 import { APP_PG_PORT, provideDatabase } from './database';
 
@@ -21,6 +24,8 @@ const db = await provideDatabase({ dir: '.data/postgres', port: APP_PG_PORT, nam
 const sequelize = connect(db.url);
 let server: Server | null = null;
 let mail: Mailer | null = null;
+let mailQueue: MailQueue | null = null;
+let payments: Awaited<ReturnType<typeof providePayments>> | null = null;
 let closeApp: () => Promise<void> = async () => undefined;
 
 let stopping = false;
@@ -32,6 +37,8 @@ async function stop(code = 0) {
   server?.close();
   server?.closeAllConnections();
   await closeApp().catch(() => undefined);
+  await mailQueue?.stop().catch(() => undefined);
+  await payments?.fake?.close().catch(() => undefined);
   await mail?.fake?.close().catch(() => undefined);
   await sequelize.close().catch(() => undefined);
   db.stop();
@@ -67,12 +74,22 @@ try {
       ? `Mail: local SMTP fake on ${mail.fake.url} (the plant manager's Demo inbox shows it)`
       : 'Mail: SMTP_URL',
   );
+  mailQueue = await startMailQueue({ databaseUrl: db.url, mailer: mail, render: renderAttachment });
+  console.log('Mail queue: pg-boss worker started (outbox in mail_messages)');
+  payments = await providePayments(`http://${config.host}:${config.port}/api/payments/webhook`);
+  console.log(
+    payments.fake
+      ? `Payments: local fake of the hosted payment API on ${payments.fake.url} (key ${payments.fake.secretKey}, webhook secret ${payments.fake.webhookSecret})`
+      : 'Payments: hosted service (STRIPE_SECRET_KEY)',
+  );
   const app = createApp({
     sequelize,
     databaseUrl: db.url,
     config,
     clientDir: 'dist/client',
     mailer: mail,
+    mailQueue,
+    payments: payments.payments,
   });
   closeApp = app.locals.close;
   server = app.listen(config.port, config.host, () => {

@@ -28,6 +28,14 @@ import type { Mailer } from './services/mail';
 import { survivePoolErrors } from './db/resilience';
 import { sweepPartialUploads } from './services/storage';
 import { logger } from './logger';
+import { startMailQueue, type MailQueue } from './services/mailQueue';
+import { renderAttachment } from './services/mailAttachments';
+import { acceptanceRouter } from './routes/portal/router';
+import { portalHomeRouter } from './routes/portal/home';
+import { orderPaymentsRouter } from './routes/payments/router';
+import { paymentsWebhookRouter } from './routes/payments/webhook';
+import { mailProbe } from './services/mailQueue';
+import { paymentsProbe, type Payments } from './services/payments';
 
 export interface AppOptions {
   sequelize: Sequelize;
@@ -37,6 +45,10 @@ export interface AppOptions {
   clientDir?: string;
   /** Outgoing mail (SMTP_URL or the local fake); without it, sending answers 503. */
   mailer?: Mailer;
+  /** The mail job queue (pg-boss); without it, mail waits in the outbox for a worker. */
+  mailQueue?: MailQueue | null;
+  /** The payment service through the SDK (the local fake or the hosted one); null: none. */
+  payments?: Payments | null;
 }
 
 /** The whole HTTP app, without a listener, so tests drive it with supertest. */
@@ -75,7 +87,25 @@ export function createApp(opts: AppOptions) {
   void sweepPartialUploads()
     .then((swept) => swept.length && logger.info({ swept }, 'removed partial uploads'))
     .catch((err: unknown) => logger.warn({ err }, 'could not sweep partial uploads'));
+  app.locals.mailQueue = opts.mailQueue ?? null;
+  app.locals.payments = opts.payments ?? null;
+  // Given a mailer but no queue (tests), the app runs its own queue worker.
+  const ownQueue =
+    opts.mailer && opts.mailQueue === undefined
+      ? startMailQueue({
+          databaseUrl: opts.databaseUrl,
+          mailer: opts.mailer,
+          render: renderAttachment,
+          pollingIntervalSeconds: 0.5,
+        })
+          .then((q) => (app.locals.mailQueue = q))
+          .catch((e: Error) => {
+            console.error(`Mail queue did not start: ${e.message}`);
+            return null;
+          })
+      : null;
   app.locals.close = async () => {
+    await (await ownQueue)?.stop();
     store.close();
     await pool.end().catch(() => undefined);
   };
@@ -83,12 +113,20 @@ export function createApp(opts: AppOptions) {
   app.get('/api/health', async (_req, res) => {
     try {
       await opts.sequelize.query('SELECT 1');
-      res.json({ status: 'ok', db: 'ok', demo: config.demo });
+      res.json({
+        status: 'ok',
+        db: 'ok',
+        demo: config.demo,
+        mail: await mailProbe(app.locals.mailQueue),
+        payments: paymentsProbe(app.locals.payments),
+      });
     } catch {
       res.status(503).json({ status: 'degraded', db: 'unreachable', demo: config.demo });
     }
   });
 
+  // Verified over the raw body, so mounted before the JSON parser (and outside session and CSRF).
+  app.use('/api/payments/webhook', paymentsWebhookRouter());
   app.use('/api', express.json({ limit: '1mb' }));
   app.use('/api', requireStorableText);
   app.use(
@@ -116,8 +154,11 @@ export function createApp(opts: AppOptions) {
   app.use('/api/customers', customersRouter());
   app.use('/api/jobs', jobsRouter());
   app.use('/api/plant', plantRouter());
+  app.use('/api/orders/:id/quotes', acceptanceRouter());
   app.use('/api/orders/:id/quotes', quotesRouter());
+  app.use('/api/orders', orderPaymentsRouter());
   app.use('/api/orders', ordersRouter());
+  app.use('/api/portal', portalHomeRouter());
   app.use('/api/price-book', priceBookRouter());
   app.use('/api/reviews', reviewsRouter());
   app.use('/api/designs', designsRouter());

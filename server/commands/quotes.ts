@@ -1,9 +1,8 @@
 import { DESIGN_CAUTIONS, type PresentedDesign } from '../../shared/engine/design';
 import { Customer, Job, Order, OrderLine, Plant, Quote, type User } from '../models';
-import { AppError, conflict } from '../errors';
-import type { Mailer } from '../services/mail';
+import { conflict } from '../errors';
+import { queueMail } from '../services/mailQueue';
 import { priceQuote, summarizeDesign, type QuoteSnapshot } from '../services/pricing';
-import { renderQuotePdf } from '../services/quotePdf';
 import { formatMoney, formatDate } from '../services/quotePdf/format';
 import { orderEvent } from './audit';
 import { pricesFor } from './priceBook';
@@ -156,16 +155,11 @@ export function quoteMessage(quote: Quote) {
 }
 
 /**
- * E-mail the latest revision to the builder company with the PDF attached, then record when and to
- * whom it went (the only columns a quote lets change). 503 without a mailer.
+ * Send the latest revision to the builder company: the e-mail (the PDF attached when it goes out)
+ * joins the mail queue in the same transaction that records when and to whom it went (the only
+ * columns a quote lets change).
  */
-export async function sendQuote(actor: User, order: Order, quote: Quote, mailer: Mailer | null) {
-  if (!mailer)
-    throw new AppError(
-      503,
-      'mail_unavailable',
-      'E-mail is not configured on this server; the quote was not sent.',
-    );
+export async function sendQuote(actor: User, order: Order, quote: Quote) {
   const latest = (await Quote.max('number', { where: { orderId: order.id } })) as number;
   if (quote.number !== latest)
     throw conflict(
@@ -175,18 +169,18 @@ export async function sendQuote(actor: User, order: Order, quote: Quote, mailer:
     throw conflict('The order changed after this quote; make a new revision before sending it.');
   const customer = await Customer.findByPk(order.customerId);
   const to = customer!.email;
-  const pdf = await renderQuotePdf(quote);
   const message = quoteMessage(quote);
-  await mailer.send({
-    to,
-    plantId: order.plantId,
-    ...message,
-    attachments: [
-      { filename: `${quote.reference}.pdf`, content: pdf, contentType: 'application/pdf' },
-    ],
-  });
   return Order.sequelize!.transaction(async (t) => {
     await quote.update({ sentAt: new Date(), sentTo: to }, { transaction: t });
+    await queueMail(t, {
+      plantId: order.plantId,
+      orderId: order.id,
+      kind: 'quote',
+      to,
+      subject: message.subject,
+      body: message.text,
+      attachment: { type: 'quote', quoteId: quote.id },
+    });
     await orderEvent(t, actor, order, 'quote.sent', {
       quoteId: quote.id,
       number: quote.number,

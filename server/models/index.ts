@@ -9,6 +9,10 @@ import { OrderLine } from './OrderLine';
 import { PriceBook } from './PriceBook';
 import { Quote } from './Quote';
 import { StoredFile } from './StoredFile';
+import { QuoteAcceptance } from './QuoteAcceptance';
+import { Payment } from './Payment';
+import { PaymentEvent } from './PaymentEvent';
+import { MailMessage } from './MailMessage';
 
 let initialised: Sequelize | null = null;
 
@@ -27,6 +31,10 @@ export function initModels(sequelize: Sequelize) {
     PriceBook,
     Quote,
     StoredFile,
+    QuoteAcceptance,
+    Payment,
+    PaymentEvent,
+    MailMessage,
   ])
     m.initModel(sequelize);
   Plant.hasMany(Customer, { foreignKey: 'plantId' });
@@ -50,6 +58,8 @@ export function initModels(sequelize: Sequelize) {
   Quote.belongsTo(Order, { foreignKey: 'orderId', as: 'order' });
   Quote.belongsTo(User, { foreignKey: 'createdBy', as: 'creator', constraints: false });
   StoredFile.belongsTo(User, { foreignKey: 'uploadedBy', as: 'uploader', constraints: false });
+  QuoteAcceptance.belongsTo(Quote, { foreignKey: 'quoteId', as: 'quote' });
 }
 
 export { Plant, Customer, User, Job, AuditEvent, Order, OrderLine, PriceBook, Quote, StoredFile };
+export { QuoteAcceptance, Payment, PaymentEvent, MailMessage };

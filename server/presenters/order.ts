@@ -7,6 +7,7 @@ import type {
   ReviewQueueItem,
 } from '../../shared/api/orders';
 import type { AuditEvent, Order, OrderLine, User } from '../models';
+import { summarizePortalEvent } from './portal';
 
 type Counted = Order & { get(k: 'lineCount' | 'trussCount'): unknown };
 
@@ -91,7 +92,7 @@ export function summarizeEvent(e: AuditEvent): string {
     case 'line.returned':
       return `Sent ${d(e, 'mark')} back: ${d(e, 'comment')}`;
     default:
-      return e.action;
+      return summarizePortalEvent(e) ?? e.action;
   }
 }
 
@@ -111,7 +112,15 @@ export function presentOrder(
   history: HistoryEntry[],
   units: 'imperial' | 'metric',
 ): OrderDetail {
-  return { ...presentOrderSummary(o), lines: lines.map(presentLineSummary), history, units };
+  return {
+    ...presentOrderSummary(o),
+    lines: lines.map(presentLineSummary),
+    history,
+    units,
+    payments: [],
+    money: null,
+    acceptance: null,
+  };
 }
 
 export function presentQueueItem(l: OrderLine): ReviewQueueItem {

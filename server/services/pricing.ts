@@ -36,6 +36,7 @@ export const DEMO_PRICE_BOOK: PriceBook = {
   margin: 0.25,
   taxRate: 0.07,
   depositRate: 0.3,
+  cancellationFee: 150,
   quoteValidityDays: 30,
   terms:
     'Prices hold until the date shown. Builders on deposit terms pay the deposit on acceptance; ' +

@@ -1,5 +1,6 @@
 import { z } from 'zod';
 import { listQuerySchema } from './list';
+import { acceptanceSchema, orderMoneySchema, paymentSummarySchema } from './portal';
 
 export const ORDER_STATUSES = [
   'draft',
@@ -136,6 +137,10 @@ export const orderSchema = orderSummarySchema.extend({
   lines: z.array(lineSummarySchema),
   history: z.array(historyEntrySchema),
   units: z.enum(['imperial', 'metric']),
+  // Money and acceptance (shared/api/portal.ts): payments, the accepted total and what is due.
+  payments: z.array(paymentSummarySchema).default([]),
+  money: orderMoneySchema.nullable().default(null),
+  acceptance: acceptanceSchema.nullable().default(null),
 });
 export type OrderDetail = z.infer<typeof orderSchema>;
 

@@ -44,6 +44,8 @@ export const priceBookSchema = z.object({
   taxRate: fraction('Tax rate', 0.5),
   /** Deposit asked of builders without a credit account. */
   depositRate: fraction('Deposit', 1),
+  /** Kept from a card deposit when the plant manager cancels an order before production. */
+  cancellationFee: money('Cancellation fee').optional(),
   quoteValidityDays: z
     .number()
     .int('Whole days')

@@ -1,6 +1,6 @@
 import type { QueryClient } from '@tanstack/react-query';
 import type { ReactNode } from 'react';
-import { createBrowserRouter, useParams, type LoaderFunctionArgs } from 'react-router';
+import { createBrowserRouter, redirect, useParams, type LoaderFunctionArgs } from 'react-router';
 import type { Me } from '../../shared/api/auth';
 import { customerQueryOptions } from '../features/builders/api/customer';
 import {
@@ -43,6 +43,7 @@ import { AppFrame } from './AppFrame';
 import { ErrorPage, NotFoundPage } from './ErrorPages';
 import { redirectIfSignedIn, requireRole, requireSession } from './guards';
 import { SECTION_ROLES } from './navigation';
+import { portalRoutes } from './portal-routes';
 
 /** How long a loader waits for its data before showing the page with its own loading state. */
 const PREFETCH_WAIT_MS = 800;
@@ -128,6 +129,8 @@ export function createAppRouter(queryClient: QueryClient) {
               index: true,
               loader: async ({ request }) => {
                 const me = await requireSession(queryClient, request);
+                // A builder's home is the portal's "what needs you".
+                if (me.user.role === 'builder') throw redirect('/portal');
                 const jobs = queryClient.ensureQueryData(recentJobsQueryOptions());
                 const extra =
                   me.user.role === 'admin'
@@ -264,6 +267,7 @@ export function createAppRouter(queryClient: QueryClient) {
             ...priceBookRoutes(queryClient),
             ...quoteRoutes(queryClient),
             ...inboxRoutes(queryClient),
+            ...portalRoutes(queryClient),
             { path: '*', element: <NotFoundPage /> },
           ],
         },

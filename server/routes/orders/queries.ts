@@ -2,6 +2,7 @@ import { Op, literal } from 'sequelize';
 import { AuditEvent, Customer, Job, Order, OrderLine, Plant, User } from '../../models';
 import { orderPolicy } from '../../policies/order';
 import { presentHistory, presentOrder } from '../../presenters/order';
+import { builderView, orderMoneyParts } from '../portal/orderParts';
 
 const lineCount = literal('(SELECT COUNT(*) FROM order_lines ol WHERE ol.order_id = "Order"."id")');
 const trussCount = literal(
@@ -60,5 +61,15 @@ export async function orderPage(orderOrId: Order | number, actor: User) {
     }),
     Plant.findByPk(actor.plantId),
   ]);
-  return presentOrder(order as never, lines, presentHistory(events), plant!.units);
+  const builder = actor.role === 'builder';
+  const page = presentOrder(
+    order as never,
+    lines,
+    builder ? builderView.history(events) : presentHistory(events),
+    plant!.units,
+  );
+  return {
+    ...(builder ? builderView.page(page) : page),
+    ...(await orderMoneyParts(orderId, actor)),
+  };
 }

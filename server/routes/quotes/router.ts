@@ -1,4 +1,5 @@
 import { Router, type RequestHandler } from 'express';
+import { Op } from 'sequelize';
 import { requireUser } from '../../middleware/auth';
 import { authorize } from '../../policies/predicates';
 import { quotePolicy } from '../../policies/quote';
@@ -9,26 +10,31 @@ import { presentQuote } from '../../presenters/quote';
 import { renderQuotePdf } from '../../services/quotePdf';
 import { findOrder } from '../orders/queries';
 import { handle, load } from '../load';
+import { builderQuote } from '../portal/builderQuote';
 
 const order = load('Order', findOrder);
 const withCreator = [{ model: User, as: 'creator' }];
 
+/** A builder sees only the revisions the plant sent them, never drafts made since. */
+const visibleTo = (viewer: User) =>
+  viewer.role === 'builder' ? { sentAt: { [Op.ne]: null } } : {};
+
 /** The order's revisions, newest first. */
-const revisions = (o: Order) =>
+const revisions = (o: Order, viewer: User) =>
   Quote.findAll({
-    where: { orderId: o.id, plantId: o.plantId },
+    where: { orderId: o.id, plantId: o.plantId, ...visibleTo(viewer) },
     include: withCreator,
     order: [['number', 'DESC']],
   });
 
 /** load (second step): the revision named by :number within the loaded (scoped) order. */
-const loadQuote: RequestHandler = handle(async (req, res, next) => {
+export const loadQuote: RequestHandler = handle(async (req, res, next) => {
   const o = res.locals.record as Order;
   const raw = req.params.number;
   const number = typeof raw === 'string' && /^\d{1,6}$/.test(raw) ? Number(raw) : null;
   const quote = number
     ? await Quote.findOne({
-        where: { orderId: o.id, plantId: o.plantId, number },
+        where: { orderId: o.id, plantId: o.plantId, number, ...visibleTo(req.user!) },
         include: withCreator,
       })
     : null;
@@ -50,8 +56,11 @@ export function quotesRouter() {
     order,
     authorize(quotePolicy.list),
     handle(async (req, res) => {
-      const list = await revisions(res.locals.record);
-      res.json({ items: list.map((q, i) => presentQuote(q, i > 0, req.user!)) });
+      const list = await revisions(res.locals.record, req.user!);
+      const latest = (await Quote.max('number', {
+        where: { orderId: res.locals.record.id },
+      })) as number;
+      res.json({ items: list.map((q) => presentQuote(q, q.number < latest, req.user!)) });
     }),
   );
 
@@ -75,7 +84,12 @@ export function quotesRouter() {
     authorize(quotePolicy.show),
     handle(async (req, res) => {
       const quote = res.locals.quote as Quote;
-      res.json(presentQuote(quote, await isSuperseded(quote), req.user!));
+      const superseded = await isSuperseded(quote);
+      res.json(
+        req.user!.role === 'builder'
+          ? await builderQuote(res.locals.record, quote, superseded, req.user!)
+          : presentQuote(quote, superseded, req.user!),
+      );
     }),
   );
 
@@ -104,12 +118,7 @@ export function quotesRouter() {
     loadQuote,
     authorize(quotePolicy.send),
     handle(async (req, res) => {
-      const sent = await sendQuote(
-        req.user!,
-        res.locals.record,
-        res.locals.quote,
-        req.app.locals.mailer ?? null,
-      );
+      const sent = await sendQuote(req.user!, res.locals.record, res.locals.quote);
       res.json(presentQuote(sent, false, req.user!));
     }),
   );

@@ -6,10 +6,14 @@ import { jobQueryOptions } from './api/get-job';
 import { lineQueryOptions } from './api/get-line';
 import { orderQueryOptions } from './api/get-order';
 import { plantQueryOptions } from './api/get-plant';
-import { TrussEditorPage } from './components/TrussEditorPage';
 
 /** Who may open the truss editor: the sales desk and the plant manager. */
 export const TRUSS_EDITOR_ROLES = ['admin', 'sales'] as const satisfies readonly Role[];
+
+/** The editor (and the engine it runs in the browser) loads only when someone opens it. */
+const editor = async () => ({
+  Component: (await import('./components/TrussEditorPage')).TrussEditorPage,
+});
 
 /** How long a loader waits for data before the page shows its own spinner. */
 const PREFETCH_WAIT_MS = 800;
@@ -50,7 +54,7 @@ export function trussEditorRoutes(queryClient: QueryClient): RouteObject[] {
     return settleWithin(work);
   };
   return [
-    { path: 'orders/:orderId/lines/new', loader: load, element: <TrussEditorPage /> },
-    { path: 'orders/:orderId/lines/:lineId', loader: load, element: <TrussEditorPage /> },
+    { path: 'orders/:orderId/lines/new', loader: load, lazy: editor },
+    { path: 'orders/:orderId/lines/:lineId', loader: load, lazy: editor },
   ];
 }

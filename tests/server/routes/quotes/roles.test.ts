@@ -12,7 +12,8 @@ import {
 import { signedIn } from '../../../support/session';
 import type { Role } from '../../../../shared/api/roles';
 import { Quote, type Customer, type Order, type Plant, type User } from '../../../../server/models';
-import { createQuote } from '../../../../server/commands/quotes';
+import { createQuote, sendQuote } from '../../../../server/commands/quotes';
+import { Op } from 'sequelize';
 import { binary, TEST_BOOK } from './helpers';
 
 const ROLES: Role[] = ['admin', 'sales', 'engineer', 'foreman', 'builder'];
@@ -29,7 +30,10 @@ async function quotedOrder(plant: Plant, customer?: Customer) {
   const job = await createJob({ customer: customer ?? (await createCustomer({ plant })) });
   const order = await createOrder({ job });
   await createLine({ order });
-  await createQuote(await createUser({ role: 'sales', plant }), order);
+  const sales = await createUser({ role: 'sales', plant });
+  // Sent: a builder reads only the revisions the plant sent them.
+  const quote = await createQuote(sales, order);
+  await sendQuote(sales, await order.reload(), quote);
   return order.reload();
 }
 
@@ -45,6 +49,9 @@ beforeAll(async () => {
 
 const latest = async (o: Order) =>
   (await Quote.max('number', { where: { orderId: o.id } })) as number;
+/** The latest revision sent to the builder (POST /quotes adds unsent ones along the way). */
+const latestSent = async (o: Order) =>
+  (await Quote.max('number', { where: { orderId: o.id, sentAt: { [Op.ne]: null } } })) as number;
 const put = (s: S, url: string, body: object) =>
   s.agent.put(url).set('X-CSRF-Token', s.token).send(body);
 
@@ -54,10 +61,10 @@ const calls: Record<string, (s: S, o: Order) => Promise<request.Response>> = {
   'POST /api/orders/:id/quotes': async (s, o) => s.post(`/api/orders/${o.id}/quotes`),
   'GET /api/orders/:id/quotes': async (s, o) => s.get(`/api/orders/${o.id}/quotes`),
   'GET /api/orders/:id/quotes/:number': async (s, o) =>
-    s.get(`/api/orders/${o.id}/quotes/${await latest(o)}`),
+    s.get(`/api/orders/${o.id}/quotes/${await latestSent(o)}`),
   'GET /api/orders/:id/quotes/:number/pdf': async (s, o) =>
     s.agent
-      .get(`/api/orders/${o.id}/quotes/${await latest(o)}/pdf`)
+      .get(`/api/orders/${o.id}/quotes/${await latestSent(o)}/pdf`)
       .buffer(true)
       .parse(binary),
   'POST /api/orders/:id/quotes/:number/send': async (s, o) =>
