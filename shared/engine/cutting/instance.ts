@@ -1,5 +1,6 @@
 import { EngineError } from '../errors';
 import { TOLERANCE } from '../units';
+import { commonUnit } from './knapsackGrid';
 import type { CuttingInput } from './types';
 
 /**
@@ -21,7 +22,15 @@ export interface Instance {
   trim: number;
   /** Absolute slack on every fit test. */
   eps: number;
+  /**
+   * When every weight and capacity lies on a common grid of at most `GRID_LIMIT` steps per
+   * board: the weights and capacities in grid steps (pricing is then a table, not a search).
+   */
+  grid: { weights: number[]; capacity: number[] } | null;
 }
+
+/** Longest board, in grid steps, for which pricing uses the table (20 ft at 1/32 in ≈ 7,700). */
+const GRID_LIMIT = 20_000;
 
 const finite = (v: number, min: number) => Number.isFinite(v) && v >= min;
 
@@ -75,7 +84,15 @@ export function buildInstance(input: CuttingInput): Instance {
     kerf,
     trim,
     eps,
+    grid: null,
   };
+  const unit = commonUnit([...inst.weights, ...inst.capacity], eps);
+  if (unit > 0 && Math.max(...inst.capacity) / unit <= GRID_LIMIT) {
+    inst.grid = {
+      weights: inst.weights.map((w) => Math.round(w / unit)),
+      capacity: inst.capacity.map((c) => Math.round(c / unit)),
+    };
+  }
   const longest = inst.lengths[0];
   if (longest !== undefined && !inst.capacity.some((c) => inst.weights[0]! <= c + eps)) {
     throw new EngineError(

@@ -1,4 +1,4 @@
-import { solveMaster, type ColumnPool } from './columnGeneration';
+import type { Master } from './columnGeneration';
 import type { Instance } from './instance';
 import { capPattern, firstFitDecreasing, patternKey, planCost, type Pattern } from './patterns';
 import type { LpSolver } from './types';
@@ -13,10 +13,10 @@ import type { LpSolver } from './types';
  */
 export function diveResidual(
   inst: Instance,
-  lp: LpSolver,
-  pool: ColumnPool,
+  master: Master,
   deadline: number,
   now: () => number,
+  roundsPerStep = 25,
 ): Pattern[] | null {
   const demand = inst.demand.slice();
   const available = inst.available.slice();
@@ -36,10 +36,11 @@ export function diveResidual(
   };
   while (demand.some((d) => d > 0)) {
     if (now() > deadline) return finish();
-    const master = solveMaster(inst, lp, pool, demand, available);
-    if (master.infeasible || master.used.length === 0) return finish();
+    master.setResidual(demand, available);
+    const lp = master.solve({ maxRounds: roundsPerStep, relativeGap: 1e-3 });
+    if (lp.infeasible || lp.used.length === 0) return finish();
     let progressed = false;
-    for (const u of master.used) {
+    for (const u of lp.used) {
       const whole = Math.floor(u.value + 1e-6);
       if (whole > 0) {
         take(u.pattern, whole);
@@ -47,7 +48,7 @@ export function diveResidual(
       }
     }
     if (!progressed) {
-      const largest = master.used.reduce((a, b) => (b.value > a.value ? b : a));
+      const largest = lp.used.reduce((a, b) => (b.value > a.value ? b : a));
       take(largest.pattern, 1);
     }
   }
@@ -63,13 +64,18 @@ export function diveResidual(
 export function solvePoolMip(
   inst: Instance,
   lp: LpSolver,
-  pool: ColumnPool,
+  pool: readonly Pattern[],
   incumbent: readonly Pattern[],
   seconds: number,
 ): Pattern[] | null {
-  for (const b of incumbent) pool.add(b);
-  const patterns = pool.patterns.filter((p) => inst.available[p.stock]! > 0);
-  const index = new Map(patterns.map((p, j) => [patternKey(p), j]));
+  const index = new Map<string, number>();
+  const patterns: Pattern[] = [];
+  for (const p of [...pool, ...incumbent]) {
+    const key = patternKey(p);
+    if (index.has(key) || inst.available[p.stock]! <= 0) continue;
+    index.set(key, patterns.length);
+    patterns.push(p);
+  }
   const start = patterns.map(() => 0);
   for (const b of incumbent) start[index.get(patternKey(b))!]! += 1;
   const hasStart = incumbent.length > 0;

@@ -1,5 +1,5 @@
 import { EngineError } from '../errors';
-import { ColumnPool, solveMaster } from './columnGeneration';
+import { Master } from './columnGeneration';
 import { buildInstance, pieceLength, type Instance } from './instance';
 import { diveResidual, solvePoolMip } from './integerPhase';
 import { firstFitDecreasing, planCost, tidyPlan, type Pattern } from './patterns';
@@ -93,7 +93,6 @@ function presentBoards(inst: Instance, boards: readonly Pattern[]): PlannedBoard
 export function planCutting(input: CuttingInput, options: CuttingOptions = {}): CuttingPlan {
   const inst = buildInstance(input);
   const now = options.now ?? (() => performance.now());
-  const deadline = now() + (options.timeLimitMs ?? 1500);
   const ffdRaw = firstFitDecreasing(inst);
   const ffd = ffdRaw ? figures(inst, ffdRaw) : null;
   const material = materialBound(inst);
@@ -108,30 +107,35 @@ export function planCutting(input: CuttingInput, options: CuttingOptions = {}): 
   let lpValue: number | null = null;
   let method: CuttingPlan['method'] = 'first-fit-decreasing';
   if (options.lp && inst.demand.length > 0) {
-    const pool = new ColumnPool();
-    for (const b of ffdRaw ?? []) pool.add(b);
-    const root = solveMaster(inst, options.lp, pool, inst.demand, inst.available);
-    if (root.infeasible) throw shortfall();
-    lpValue = root.objective;
-    if (root.exact) bound = Math.max(material, roundUpBound(root.objective, costGrid(inst.cost)));
-    const tol = 1e-9 * Math.max(1, bound);
-    const dived = diveResidual(inst, options.lp, pool, deadline, now);
-    let best = [dived, ffdRaw]
-      .filter((p): p is Pattern[] => p !== null)
-      .map((p) => tidyPlan(inst, p))
-      .sort((a, b) => planCost(inst, a) - planCost(inst, b))[0];
-    const cost = (p: Pattern[] | undefined) => (p ? planCost(inst, p) : Infinity);
-    // Without any plan yet (the stock on hand is tight) the MIP gets at least a second.
-    const remaining = Math.max((deadline - now()) / 1000, best ? 0 : 1);
-    if (cost(best) > bound + tol && remaining > 0.05) {
-      const mip = solvePoolMip(inst, options.lp, pool, best ?? [], remaining);
-      if (mip) {
-        const tidied = tidyPlan(inst, mip);
-        if (planCost(inst, tidied) < cost(best)) best = tidied;
+    const master = new Master(inst, options.lp);
+    try {
+      master.add(ffdRaw ?? []);
+      const root = master.solve({ relativeGap: options.lpGap ?? 1e-5 });
+      if (root.infeasible) throw shortfall();
+      lpValue = root.bound;
+      if (root.exact) bound = Math.max(material, roundUpBound(root.bound, costGrid(inst.cost)));
+      const tol = 1e-9 * Math.max(1, bound);
+      const deadline = now() + (options.timeLimitMs ?? 1500);
+      const dived = diveResidual(inst, master, deadline, now);
+      let best = [dived, ffdRaw]
+        .filter((p): p is Pattern[] => p !== null)
+        .map((p) => tidyPlan(inst, p))
+        .sort((a, b) => planCost(inst, a) - planCost(inst, b))[0];
+      const cost = (p: Pattern[] | undefined) => (p ? planCost(inst, p) : Infinity);
+      // Without any plan yet (the stock on hand is tight) the MIP gets at least a second.
+      const remaining = Math.max((deadline - now()) / 1000, best ? 0 : 1);
+      if (cost(best) > bound + tol && remaining > 0.05) {
+        const mip = solvePoolMip(inst, options.lp, master.patterns, best ?? [], remaining);
+        if (mip) {
+          const tidied = tidyPlan(inst, mip);
+          if (planCost(inst, tidied) < cost(best)) best = tidied;
+        }
       }
+      if (!best) throw shortfall();
+      boards = best;
+    } finally {
+      master.dispose();
     }
-    if (!best) throw shortfall();
-    boards = best;
     method = 'column-generation';
   } else {
     if (!ffdRaw) throw shortfall();

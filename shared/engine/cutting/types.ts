@@ -60,11 +60,25 @@ export interface LpSolution {
 }
 
 /**
+ * A persistent LP kept between solves: columns are added and row bounds changed, and each
+ * solve starts from the previous basis (column generation re-solves hundreds of times).
+ */
+export interface LpSession {
+  addColumns(cost: number[], columns: LpProblem['columns']): void;
+  setRowBounds(rows: number[], lower: number[], upper: number[]): void;
+  solve(): LpSolution;
+  dispose(): void;
+}
+
+/**
  * An LP/MIP solver. The engine stays free of Node built-ins and WASM loading: the server, CLI
  * and tests inject one (see `server/services/lp.ts`, backed by HiGHS).
  */
 export interface LpSolver {
+  /** One-shot solve (the MIP over the pool). */
   solve(problem: LpProblem): LpSolution;
+  /** Opens a persistent LP (continuous) starting from `problem`. */
+  open(problem: LpProblem): LpSession;
 }
 
 /** Options of `planCutting`. */
@@ -73,6 +87,11 @@ export interface CuttingOptions {
   lp?: LpSolver;
   /** Time budget of the integer phase in ms (default 1500); the LP bound is always finished. */
   timeLimitMs?: number;
+  /**
+   * Column generation stops once its Lagrangian bound is within this fraction of the LP's
+   * value (default 1e-5); 0 solves the LP to optimality.
+   */
+  lpGap?: number;
   /** Clock in ms (default `performance.now`); injectable for tests. */
   now?: () => number;
 }
@@ -103,7 +122,7 @@ export interface CuttingPlan extends PlanFigures {
   lowerBound: {
     /** No plan can cost less than this. */
     cost: number;
-    /** The LP relaxation's optimum (before rounding up), or null without an LP solver. */
+    /** The LP relaxation's bound (before rounding up), or null without an LP solver. */
     lp: number | null;
   };
   /** True when the plan's cost equals the lower bound (proven least cost). */

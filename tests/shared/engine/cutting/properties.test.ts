@@ -2,6 +2,7 @@ import fc from 'fast-check';
 import { beforeAll, describe, expect, it } from 'vitest';
 import { planCutting, type CuttingInput, type LpSolver } from '../../../../shared/engine/cutting';
 import { boundedKnapsack } from '../../../../shared/engine/cutting/knapsack';
+import { commonUnit, gridKnapsacks } from '../../../../shared/engine/cutting/knapsackGrid';
 import { isEngineError } from '../../../../shared/engine/errors';
 import { loadLpSolver } from '../../../../server/services/lp';
 import { planProblems } from './feasibility';
@@ -57,6 +58,11 @@ describe('every plan is feasible and within its bound (property)', () => {
 });
 
 describe('bounded knapsack (pricing)', () => {
+  it('finds the grid of 1/16 in lengths in mm (hand-checked: 25.4 / 16 = 1.5875)', () => {
+    expect(commonUnit([1.5875 * 97, 1.5875 * 3840, 3.175], 1e-6)).toBeCloseTo(1.5875, 9);
+    expect(commonUnit([1, Math.SQRT2], 1e-6)).toBe(0);
+  });
+
   it('matches exhaustive search on small random instances', () => {
     const instance = fc.record({
       items: fc.array(
@@ -89,6 +95,18 @@ describe('bounded knapsack (pricing)', () => {
         };
         walk(0, cap, 0);
         expect(r.value).toBe(best);
+        // The table answers every capacity at once; the search and the table agree.
+        const [table] = gridKnapsacks(
+          items.map((i) => i.v),
+          items.map((i) => i.w),
+          items.map((i) => i.u),
+          [cap],
+        );
+        expect(table!.value).toBe(best);
+        expect(
+          table!.items.reduce((s, i, k) => s + items[i]!.w * table!.counts[k]!, 0),
+        ).toBeLessThanOrEqual(cap);
+        table!.items.forEach((i, k) => expect(table!.counts[k]!).toBeLessThanOrEqual(items[i]!.u));
         expect(r.items.reduce((s, i, k) => s + items[i]!.w * r.counts[k]!, 0)).toBeLessThanOrEqual(
           cap,
         );
