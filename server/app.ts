@@ -24,6 +24,8 @@ import { priceBookRouter } from './routes/priceBook/router';
 import { quotesRouter } from './routes/quotes/router';
 import { filesRouter } from './routes/files/router';
 import type { Mailer } from './services/mail';
+import { stockRouter } from './routes/stock/router';
+import { lumberPlanRouter } from './routes/lumberPlan/router';
 
 export interface AppOptions {
   sequelize: Sequelize;
@@ -104,6 +106,8 @@ export function createApp(opts: AppOptions) {
   app.use('/api/price-book', priceBookRouter());
   app.use('/api/reviews', reviewsRouter());
   app.use('/api/designs', designsRouter());
+  app.use('/api/stock', stockRouter());
+  app.use('/api/shop/orders', lumberPlanRouter());
   app.use('/api/dev', devRouter(opts.mailer ?? null));
   app.use('/api', filesRouter());
   app.use('/api', apiNotFound);

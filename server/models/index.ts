@@ -9,6 +9,7 @@ import { OrderLine } from './OrderLine';
 import { PriceBook } from './PriceBook';
 import { Quote } from './Quote';
 import { StoredFile } from './StoredFile';
+import { StockSettings } from './StockSettings';
 
 let initialised: Sequelize | null = null;
 
@@ -50,6 +51,9 @@ export function initModels(sequelize: Sequelize) {
   Quote.belongsTo(Order, { foreignKey: 'orderId', as: 'order' });
   Quote.belongsTo(User, { foreignKey: 'createdBy', as: 'creator', constraints: false });
   StoredFile.belongsTo(User, { foreignKey: 'uploadedBy', as: 'uploader', constraints: false });
+  StockSettings.initModel(sequelize);
+  StockSettings.belongsTo(User, { foreignKey: 'updatedBy', as: 'editor', constraints: false });
 }
 
 export { Plant, Customer, User, Job, AuditEvent, Order, OrderLine, PriceBook, Quote, StoredFile };
+export { StockSettings };
