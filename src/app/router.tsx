@@ -32,6 +32,8 @@ import { reviewRoutes } from '../features/reviews/routes';
 import { trussEditorRoutes } from '../features/truss-editor/routes';
 import { planFileRoutes } from '../features/plan-files/routes';
 import { priceBookRoutes } from '../features/price-book/routes';
+import { stockSettingsRoutes } from '../features/stock-settings/routes';
+import { lumberPlanRoutes } from '../features/lumber-plan/routes';
 import { quoteRoutes } from '../features/quotes/routes';
 import { inboxRoutes } from '../features/inbox/routes';
 import { usersQueryOptions } from '../features/users/api/list-users';
@@ -264,6 +266,8 @@ export function createAppRouter(queryClient: QueryClient) {
             ...priceBookRoutes(queryClient),
             ...quoteRoutes(queryClient),
             ...inboxRoutes(queryClient),
+            ...stockSettingsRoutes(queryClient),
+            ...lumberPlanRoutes(queryClient),
             { path: '*', element: <NotFoundPage /> },
           ],
         },
