@@ -255,6 +255,7 @@ export function createAppRouter(queryClient: QueryClient) {
                       canSeeQuotes={(SECTION_ROLES.quotes as readonly string[]).includes(
                         me.user.role,
                       )}
+                      canSeeShop={['admin', 'sales', 'foreman'].includes(me.user.role)}
                     />
                   )}
                 />
