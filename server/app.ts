@@ -36,6 +36,8 @@ import { orderPaymentsRouter } from './routes/payments/router';
 import { paymentsWebhookRouter } from './routes/payments/webhook';
 import { mailProbe } from './services/mailQueue';
 import { paymentsProbe, type Payments } from './services/payments';
+import { stockRouter } from './routes/stock/router';
+import { lumberPlanRouter } from './routes/lumberPlan/router';
 
 export interface AppOptions {
   sequelize: Sequelize;
@@ -162,6 +164,8 @@ export function createApp(opts: AppOptions) {
   app.use('/api/price-book', priceBookRouter());
   app.use('/api/reviews', reviewsRouter());
   app.use('/api/designs', designsRouter());
+  app.use('/api/stock', stockRouter());
+  app.use('/api/shop/orders', lumberPlanRouter());
   app.use('/api/dev', devRouter(opts.mailer ?? null));
   app.use('/api', filesRouter());
   app.use('/api', apiNotFound);

@@ -1,6 +1,9 @@
 import { ZodError } from 'zod';
 import { designInputSchema, toEngineInput } from '../../shared/api/design';
 import { analyzeTruss, designTruss, isEngineError, presentDesign } from '../../shared/engine';
+import { planCutting } from '../../shared/engine/cutting';
+import { loadLpSolver } from '../services/lp';
+import { cutInputSchema } from './cutSchema';
 import { trussModelSchema } from './modelSchema';
 
 /** The CLI's error body: an engine error code (or `invalid`), a message and optional details. */
@@ -24,6 +27,37 @@ export function analyzeCommand(json: unknown) {
 export function designCommand(json: unknown) {
   const input = designInputSchema.parse(json);
   return presentDesign(designTruss(toEngineInput(input)), input.units);
+}
+
+/** Rounds away binary noise (0.30000000000000004) so printed lengths read as typed. */
+const tidy = (v: number) => Math.round(v * 1e9) / 1e9;
+
+/**
+ * `cut`: stock lengths (cost defaults to the length), kerf, trim and pieces → the least-cost
+ * lumber plan, its lower bound and whether it is proven optimal.
+ */
+export async function cutCommand(json: unknown) {
+  const input = cutInputSchema.parse(json);
+  const plan = planCutting(
+    {
+      stocks: input.stocks.map((s) => ({ ...s, cost: s.cost ?? s.length })),
+      kerf: input.kerf,
+      trim: input.trim,
+      pieces: input.pieces.map((p) => ({ length: p.length, quantity: p.quantity })),
+    },
+    { lp: await loadLpSolver(), timeLimitMs: 2000 },
+  );
+  return {
+    boards: plan.boards.map((b) => ({
+      stock: b.stock,
+      pieces: b.pieces.map((p) => p.length),
+      offcut: tidy(b.offcut),
+    })),
+    boardCount: plan.boardCount,
+    totalCost: tidy(plan.totalCost),
+    lowerBound: { cost: tidy(plan.lowerBound.cost) },
+    optimal: plan.optimal,
+  };
 }
 
 /**

@@ -1,9 +1,10 @@
-/** Usage text of the `truss` CLI: both commands and both file formats. */
-export const HELP = `truss — analyse a plane truss or design a roof truss (Spanwise engine)
+/** Usage text of the `truss` CLI: every command and its file format. */
+export const HELP = `truss — analyse a plane truss, design a roof truss or plan lumber (Spanwise engine)
 
 Usage:
   npm run --silent truss -- analyze FILE.json
   npm run --silent truss -- design FILE.json
+  npm run --silent truss -- cut FILE.json
   (FILE may be - to read standard input)
 
 analyze FILE.json — a plane truss in any consistent units:
@@ -36,7 +37,20 @@ design FILE.json — one roof truss as the sales desk describes it:
   forces per combination and CSI, pieces, reactions, bearing, deflection, plates, warnings,
   notes, cautions, engineVersion and "ok".
 
+cut FILE.json — a lumber plan: which stock boards to pull and what to cut from each, at least
+  cost. Any one consistent unit for lengths (cost defaults to the stock's length):
+  { "stocks": [{ "length", "cost"?, "available"? }, ...],   available = boards on hand
+    "kerf"?: 0, "trim"?: 0,                                  kerf between neighbouring pieces,
+                                                             trim once per board
+    "pieces": [{ "length", "quantity", "id"? }, ...] }
+  A board holds its pieces + one kerf between neighbours + the trim.
+  Output: { "boards": [{ "stock", "pieces": [lengths], "offcut" }], "boardCount", "totalCost",
+            "lowerBound": { "cost" }  (no plan can cost less), "optimal" (cost = bound) }
+  A piece longer than every stock (code piece_too_long) or more pieces than the stock on hand
+  holds (code not_enough_stock) exits 2.
+
 Errors: exit code 2 and { "error": { "code", "message", "details"? } } on stdout, with code
-  invalid | unstable | indeterminate | geometry | no_lumber_passes | no_plate_fits.
+  invalid | unstable | indeterminate | geometry | no_lumber_passes | no_plate_fits |
+  piece_too_long | not_enough_stock.
   Exit code 1 and code "internal" for a fault of the program. Exit code 0 otherwise.
 `;

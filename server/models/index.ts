@@ -13,6 +13,7 @@ import { QuoteAcceptance } from './QuoteAcceptance';
 import { Payment } from './Payment';
 import { PaymentEvent } from './PaymentEvent';
 import { MailMessage } from './MailMessage';
+import { StockSettings } from './StockSettings';
 
 let initialised: Sequelize | null = null;
 
@@ -59,7 +60,10 @@ export function initModels(sequelize: Sequelize) {
   Quote.belongsTo(User, { foreignKey: 'createdBy', as: 'creator', constraints: false });
   StoredFile.belongsTo(User, { foreignKey: 'uploadedBy', as: 'uploader', constraints: false });
   QuoteAcceptance.belongsTo(Quote, { foreignKey: 'quoteId', as: 'quote' });
+  StockSettings.initModel(sequelize);
+  StockSettings.belongsTo(User, { foreignKey: 'updatedBy', as: 'editor', constraints: false });
 }
 
 export { Plant, Customer, User, Job, AuditEvent, Order, OrderLine, PriceBook, Quote, StoredFile };
 export { QuoteAcceptance, Payment, PaymentEvent, MailMessage };
+export { StockSettings };

@@ -11,5 +11,6 @@ export * from './plates';
 export * from './format';
 export * from './design';
 export * from './units';
+export * from './cutting';
 export { EngineError, isEngineError, type EngineErrorCode } from './errors';
 export { ENGINE_VERSION } from './version';

@@ -27,6 +27,7 @@ export const SECTION_ROLES = {
   quotes: ['admin', 'sales', 'builder'],
   'price-book': ['admin', 'sales'],
   inbox: ['admin'],
+  stock: ['admin'],
 } as const satisfies Record<string, readonly Role[]>;
 
 const may = (section: keyof typeof SECTION_ROLES, role: Role) =>
@@ -44,5 +45,6 @@ export function navForRole(role: Role): NavItem[] {
   if (may('jobs', role)) items.push({ to: '/jobs', label: 'Jobs' });
   if (may('price-book', role)) items.push({ to: '/price-book', label: 'Price book' });
   if (may('inbox', role)) items.push({ to: '/inbox', label: 'Demo inbox' });
+  if (may('stock', role)) items.push({ to: '/stock', label: 'Lumber stock' });
   return items;
 }

@@ -32,6 +32,8 @@ import { reviewRoutes } from '../features/reviews/routes';
 import { trussEditorRoutes } from '../features/truss-editor/routes';
 import { planFileRoutes } from '../features/plan-files/routes';
 import { priceBookRoutes } from '../features/price-book/routes';
+import { stockSettingsRoutes } from '../features/stock-settings/routes';
+import { lumberPlanRoutes } from '../features/lumber-plan/routes';
 import { quoteRoutes } from '../features/quotes/routes';
 import { inboxRoutes } from '../features/inbox/routes';
 import { usersQueryOptions } from '../features/users/api/list-users';
@@ -256,6 +258,7 @@ export function createAppRouter(queryClient: QueryClient) {
                       canSeeQuotes={(SECTION_ROLES.quotes as readonly string[]).includes(
                         me.user.role,
                       )}
+                      canSeeShop={['admin', 'sales', 'foreman'].includes(me.user.role)}
                     />
                   )}
                 />
@@ -268,6 +271,8 @@ export function createAppRouter(queryClient: QueryClient) {
             ...quoteRoutes(queryClient),
             ...inboxRoutes(queryClient),
             ...portalRoutes(queryClient),
+            ...stockSettingsRoutes(queryClient),
+            ...lumberPlanRoutes(queryClient),
             { path: '*', element: <NotFoundPage /> },
           ],
         },

@@ -14,6 +14,7 @@ describe('role navigation (product brief for the client shell and the sales desk
       'Jobs',
       'Price book',
       'Demo inbox',
+      'Lumber stock',
     ]);
     expect(labels('sales')).toEqual(['Sales desk', 'Orders', 'Builders', 'Jobs', 'Price book']);
     expect(labels('engineer')).toEqual(['Design review', 'Review queue', 'Orders', 'Jobs']);

@@ -1,0 +1,1 @@
+export { stockSettingsSchema, type StockSettings } from '../../../shared/api/stock';

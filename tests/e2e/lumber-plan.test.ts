@@ -1,0 +1,117 @@
+import { execFileSync } from 'node:child_process';
+import type { Server } from 'node:http';
+import type { BrowserContext, Page } from 'playwright-core';
+import { afterAll, beforeAll, describe, expect, it } from 'vitest';
+import type { Order, User } from '../../server/models';
+import { launchBrowser, listen, SCREENSHOTS } from '../support/browser';
+import { testApp } from '../support/db';
+import {
+  createCustomer,
+  createJob,
+  createLine,
+  createOrder,
+  createPlant,
+  createUser,
+  TEST_PASSWORD,
+} from '../support/factories';
+
+let browser: BrowserContext;
+let closeBrowser: () => Promise<void>;
+let server: Server;
+let base: string;
+let foreman: User;
+let admin: User;
+let order: Order;
+
+async function signIn(page: Page, user: User) {
+  await browser.clearCookies();
+  await page.goto(`${base}/sign-in`);
+  await page.getByLabel('E-mail').fill(user.email);
+  await page.getByLabel('Password').fill(TEST_PASSWORD);
+  await page.getByRole('button', { name: 'Sign in' }).click();
+  await page.waitForURL(`${base}/`);
+}
+
+beforeAll(async () => {
+  const plant = await createPlant({ name: 'Lumber Plan Test Plant' });
+  foreman = await createUser({ role: 'foreman', plant });
+  admin = await createUser({ role: 'admin', plant });
+  const customer = await createCustomer({ plant, name: 'Alder Creek Homes' });
+  const job = await createJob({ customer, name: 'Alder Creek, lot 7' });
+  order = await createOrder({ job });
+  await createLine({ order, mark: 'T1', reviewState: 'approved' });
+  await createLine({
+    order,
+    mark: 'T2',
+    reviewState: 'approved',
+    design: {
+      units: 'imperial',
+      profile: 'howe',
+      span: 336,
+      pitch: 6,
+      heelHeight: 4,
+      overhang: 18,
+      loads: { tcll: 20, tcdl: 10, bcll: 0, bcdl: 10 },
+    },
+  });
+  const app = testApp({ demo: true }, 'dist/client');
+  ({ server, url: base } = await listen(app));
+  ({ browser, close: closeBrowser } = await launchBrowser());
+});
+
+afterAll(async () => {
+  await closeBrowser?.();
+  server?.close();
+});
+
+describe('lumber plans, in a browser', () => {
+  it('the foreman opens an approved order’s lumber plan and prints it', async () => {
+    const page = await browser.newPage();
+    await page.setViewportSize({ width: 1440, height: 900 });
+    await signIn(page, foreman);
+    await page.goto(`${base}/orders/${order.id}`);
+    await page.getByRole('link', { name: 'Lumber plan' }).click();
+    await page.waitForURL(/\/shop\/orders\/\d+\/lumber-plan$/);
+    await expect
+      .poll(() => page.locator('h1').first().textContent(), { timeout: 30000 })
+      .toMatch(/^Lumber plan — order /);
+    await expect.poll(() => page.getByText(/least possible cost/).count()).toBeGreaterThan(0);
+    await expect
+      .poll(() => page.getByText(/First-fit decreasing would have used/).count())
+      .toBeGreaterThan(0);
+    await page.screenshot({ path: `${SCREENSHOTS}/lumber-plan-desktop.png`, fullPage: true });
+    // On paper: no navigation and no buttons.
+    await page.emulateMedia({ media: 'print' });
+    expect(await page.locator('nav').first().isVisible()).toBe(false);
+    expect(await page.getByRole('button', { name: 'Print' }).isVisible()).toBe(false);
+    await page.pdf({ path: `${SCREENSHOTS}/lumber-plan-print.pdf`, format: 'Letter' });
+    execFileSync('pdftoppm', [
+      '-png',
+      '-r',
+      '50',
+      '-f',
+      '1',
+      '-l',
+      '1',
+      `${SCREENSHOTS}/lumber-plan-print.pdf`,
+      `${SCREENSHOTS}/lumber-plan-print`,
+    ]);
+    const server = await page.request.get(`${base}/api/shop/orders/${order.id}/lumber-plan.pdf`);
+    expect(server.headers()['content-type']).toBe('application/pdf');
+    await page.close();
+  });
+
+  it('the plant manager keeps the stock lengths, prices and counts on hand', async () => {
+    const page = await browser.newPage();
+    await page.setViewportSize({ width: 1440, height: 900 });
+    await signIn(page, admin);
+    await page.getByRole('link', { name: 'Lumber stock' }).first().click();
+    await page.waitForURL(/\/stock$/);
+    await expect.poll(() => page.getByText('Invented demo values').count()).toBe(1);
+    await page.getByLabel('2x4 12 ft on hand').fill('40');
+    await page.getByRole('button', { name: 'Save stock' }).click();
+    await expect.poll(() => page.getByText(/Last saved/).count(), { timeout: 30000 }).toBe(1);
+    await page.screenshot({ path: `${SCREENSHOTS}/stock-settings-desktop.png`, fullPage: true });
+    await page.close();
+  });
+});
