@@ -1,11 +1,34 @@
 import { EngineError } from '../errors';
 import type { TrussProfile } from '../profiles/types';
-import { layBoards } from './boards';
+import { layBoards, type Board } from './boards';
 import { readBoard } from './ends';
 import { cutAtJoints } from './joints';
 import { groupPieces } from './marks';
-import { signedArea } from './polygon';
+import { overlapArea, signedArea } from './polygon';
 import type { PieceLumber, PieceOutline, TrussPieces, XY } from './types';
+
+/** Overlap below this is floating-point noise along a shared edge, mm². */
+const NOISE = 0.01;
+
+/**
+ * Boards that do not meet at a joint can still run into each other where the truss is too
+ * shallow for the lumber (a raised heel on a steep scissor); such a truss cannot be built.
+ */
+const checkNoOverlap = (boards: Board[]): void => {
+  for (let i = 0; i < boards.length; i++) {
+    for (let j = i + 1; j < boards.length; j++) {
+      if (overlapArea(boards[i].ring, boards[j].ring) > NOISE) {
+        const [a, b] = [boards[i].piece.id, boards[j].piece.id];
+        throw new EngineError(
+          'geometry',
+          `Pieces ${a} and ${b} run into each other with this lumber: the truss is too shallow ` +
+            `there for boards this deep. Use a taller heel, a steeper pitch or shallower lumber.`,
+          { pieces: [a, b] },
+        );
+      }
+    }
+  }
+};
 
 /**
  * Every piece of one truss as it is cut, from its line model and the lumber of each piece:
@@ -31,6 +54,7 @@ export const cutPieces = (profile: TrussProfile, lumber: PieceLumber): TrussPiec
     }
     return { board, read: readBoard(board) };
   });
+  checkNoOverlap(boards);
   const { pieces, markOf } = groupPieces(read);
   const outlines = boards.map((b): PieceOutline => ({
     piece: b.piece.id,
