@@ -7,3 +7,10 @@ export { describeEnd } from './marks';
 export { toSixteenths, SQUARE_CUT_TOLERANCE_DEG } from './ends';
 export { lumberDepth } from './boards';
 export type * from './types';
+export {
+  buildCutList,
+  type CutList,
+  type CutListGroup,
+  type CutListRow,
+  type CutListTruss,
+} from './cutList';

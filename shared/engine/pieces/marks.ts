@@ -70,7 +70,11 @@ const referenceWords = (b: Board): string =>
 export const groupPieces = (
   boards: Array<{ board: Board; read: ReadBoard }>,
 ): { pieces: CutPiece[]; markOf: Map<string, string> } => {
-  const groups: Array<{ first: { board: Board; read: ReadBoard }; marks: string[] }> = [];
+  const groups: Array<{
+    first: { board: Board; read: ReadBoard };
+    marks: string[];
+    members: string[];
+  }> = [];
   for (const item of boards) {
     const { board, read } = item;
     const mine = variants(read.frame, read.length, (board.t0 + board.t1) / 2)[0];
@@ -86,16 +90,19 @@ export const groupPieces = (
       );
       return theirs.some((v) => sameCorners(mine, v));
     });
-    if (group) group.marks.push(board.piece.id);
-    else groups.push({ first: item, marks: [board.piece.id] });
+    if (group) {
+      group.marks.push(board.piece.id);
+      group.members.push(...board.piece.members);
+    } else groups.push({ first: item, marks: [board.piece.id], members: [...board.piece.members] });
   }
   const markOf = new Map<string, string>();
-  const pieces = groups.map(({ first: { board, read }, marks }): CutPiece => {
+  const pieces = groups.map(({ first: { board, read }, marks, members }): CutPiece => {
     for (const m of marks) markOf.set(m, board.piece.id);
     const { length, sixteenths } = toSixteenths(read.length);
     return {
       mark: board.piece.id,
       pieces: marks,
+      members,
       role: board.piece.role,
       lumber: board.lumber,
       length,

@@ -36,6 +36,8 @@ export interface CutPiece {
   mark: string;
   /** Profile piece marks it stands for, e.g. ["W1", "W4"]. */
   pieces: string[];
+  /** Analysis members those pieces carry. */
+  members: string[];
   role: MemberRole;
   /** Lumber id, e.g. "2x4 SPF-1/2". */
   lumber: string;
