@@ -23,6 +23,7 @@ import { devRouter } from './routes/dev/router';
 import { priceBookRouter } from './routes/priceBook/router';
 import { quotesRouter } from './routes/quotes/router';
 import { filesRouter } from './routes/files/router';
+import { shopRouter } from './routes/shop/router';
 import type { Mailer } from './services/mail';
 
 export interface AppOptions {
@@ -105,6 +106,7 @@ export function createApp(opts: AppOptions) {
   app.use('/api/reviews', reviewsRouter());
   app.use('/api/designs', designsRouter());
   app.use('/api/dev', devRouter(opts.mailer ?? null));
+  app.use('/api/shop', shopRouter());
   app.use('/api', filesRouter());
   app.use('/api', apiNotFound);
 

@@ -49,13 +49,13 @@ export const describeEnd = (end: CutEnd): string => {
 };
 
 const noteLines = (ends: [CutEnd, CutEnd], count: number): string[] => {
-  const notes = ends.map(describeEnd);
+  const notes: string[] = [];
   for (const e of ends) {
     if (e.site === 'tail') notes.push('Tail: plumb cut for the fascia; mark the bearing line.');
     if (e.site === 'splice') notes.push(`Splice at ${e.joint}: butt tight; plated both faces.`);
     if (e.kind === 'double') notes.push('Double bevel: cut the longer face first.');
   }
-  if (count > 1) notes.push(`${count} per truss: mirror pieces are the same board turned over.`);
+  if (count > 1) notes.push('Mirror pieces: the same board turned over.');
   return notes;
 };
 

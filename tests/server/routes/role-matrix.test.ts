@@ -1,10 +1,17 @@
 import { beforeAll, describe, expect, it } from 'vitest';
 import request from 'supertest';
 import { testApp } from '../../support/db';
-import { createCustomer, createJob, createPlant, createUser } from '../../support/factories';
+import {
+  createCustomer,
+  createJob,
+  createLine,
+  createOrder,
+  createPlant,
+  createUser,
+} from '../../support/factories';
 import { signedIn } from '../../support/session';
 import type { Role } from '../../../shared/api/roles';
-import type { Customer, Job, Plant, User } from '../../../server/models';
+import type { Customer, Job, Order, Plant, User } from '../../../server/models';
 
 const app = testApp();
 const ROLES: Role[] = ['admin', 'sales', 'engineer', 'foreman', 'builder'];
@@ -13,6 +20,7 @@ let plant: Plant;
 let customer: Customer;
 let job: Job;
 let colleague: User;
+let approved: Order;
 const users = {} as Record<Role, User>;
 
 beforeAll(async () => {
@@ -21,6 +29,8 @@ beforeAll(async () => {
   job = await createJob({ customer });
   colleague = await createUser({ role: 'foreman', plant });
   for (const role of ROLES) users[role] = await createUser({ role, plant, customer });
+  approved = await createOrder({ job });
+  await createLine({ order: approved, reviewState: 'approved' });
 });
 
 type Call = { name: string; run: (s: Awaited<ReturnType<typeof signedIn>>) => request.Test };
@@ -48,6 +58,15 @@ const routes: Record<string, Call> = {
   'GET /api/jobs': { name: 'jobs.list', run: (s) => s.get('/api/jobs') },
   'GET /api/jobs/:id': { name: 'jobs.show', run: (s) => s.get(`/api/jobs/${job.id}`) },
   'GET /api/plant': { name: 'plant', run: (s) => s.get('/api/plant') },
+  'GET /api/shop/orders': { name: 'shop.list', run: (s) => s.get('/api/shop/orders') },
+  'GET /api/shop/orders/:id/cut-list': {
+    name: 'shop.cutList',
+    run: (s) => s.get(`/api/shop/orders/${approved.id}/cut-list`),
+  },
+  'GET /api/shop/orders/:id/cut-list.csv': {
+    name: 'shop.cutListCsv',
+    run: (s) => s.get(`/api/shop/orders/${approved.id}/cut-list.csv`),
+  },
 };
 
 // Expected status per route group and role (the builder belongs to `customer`).
@@ -60,6 +79,21 @@ const expected: Record<string, Record<Role, number>> = {
   'GET /api/jobs': { admin: 200, sales: 200, engineer: 200, foreman: 200, builder: 200 },
   'GET /api/jobs/:id': { admin: 200, sales: 200, engineer: 200, foreman: 200, builder: 200 },
   'GET /api/plant': { admin: 200, sales: 200, engineer: 200, foreman: 200, builder: 200 },
+  'GET /api/shop/orders': { admin: 200, sales: 200, engineer: 403, foreman: 200, builder: 403 },
+  'GET /api/shop/orders/:id/cut-list': {
+    admin: 200,
+    sales: 200,
+    engineer: 403,
+    foreman: 200,
+    builder: 403,
+  },
+  'GET /api/shop/orders/:id/cut-list.csv': {
+    admin: 200,
+    sales: 200,
+    engineer: 403,
+    foreman: 200,
+    builder: 403,
+  },
 };
 
 describe('role matrix', () => {
@@ -83,6 +117,8 @@ describe('role matrix', () => {
       `/api/jobs/${job.id}`,
       '/api/plant',
       '/api/auth/me',
+      '/api/shop/orders',
+      `/api/shop/orders/${approved.id}/cut-list`,
     ]) {
       const res = await request(app).get(path);
       expect(res.status, path).toBe(401);
