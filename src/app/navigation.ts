@@ -27,6 +27,7 @@ export const SECTION_ROLES = {
   quotes: ['admin', 'sales', 'builder'],
   'price-book': ['admin', 'sales'],
   inbox: ['admin'],
+  shop: ['foreman', 'sales', 'admin'],
 } as const satisfies Record<string, readonly Role[]>;
 
 const may = (section: keyof typeof SECTION_ROLES, role: Role) =>
@@ -39,6 +40,7 @@ export function navForRole(role: Role): NavItem[] {
   if (may('orders', role)) {
     items.push({ to: '/orders', label: role === 'builder' ? 'Your orders' : 'Orders' });
   }
+  if (may('shop', role)) items.push({ to: '/shop', label: 'Cut lists' });
   if (may('users', role)) items.push({ to: '/users', label: 'Users' });
   if (may('builders', role)) items.push({ to: '/builders', label: 'Builders' });
   if (may('jobs', role)) items.push({ to: '/jobs', label: 'Jobs' });

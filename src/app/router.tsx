@@ -34,6 +34,7 @@ import { planFileRoutes } from '../features/plan-files/routes';
 import { priceBookRoutes } from '../features/price-book/routes';
 import { quoteRoutes } from '../features/quotes/routes';
 import { inboxRoutes } from '../features/inbox/routes';
+import { shopRoutes } from '../features/shop/routes';
 import { usersQueryOptions } from '../features/users/api/list-users';
 import { UsersPage } from '../features/users/components/UsersPage';
 import { Spinner } from '../components/ui';
@@ -264,6 +265,7 @@ export function createAppRouter(queryClient: QueryClient) {
             ...priceBookRoutes(queryClient),
             ...quoteRoutes(queryClient),
             ...inboxRoutes(queryClient),
+            ...shopRoutes(queryClient),
             { path: '*', element: <NotFoundPage /> },
           ],
         },
