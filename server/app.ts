@@ -24,6 +24,7 @@ import { devRouter } from './routes/dev/router';
 import { priceBookRouter } from './routes/priceBook/router';
 import { quotesRouter } from './routes/quotes/router';
 import { filesRouter } from './routes/files/router';
+import { shopRouter } from './routes/shop/router';
 import type { Mailer } from './services/mail';
 import { survivePoolErrors } from './db/resilience';
 import { sweepPartialUploads } from './services/storage';
@@ -167,6 +168,7 @@ export function createApp(opts: AppOptions) {
   app.use('/api/stock', stockRouter());
   app.use('/api/shop/orders', lumberPlanRouter());
   app.use('/api/dev', devRouter(opts.mailer ?? null));
+  app.use('/api/shop', shopRouter());
   app.use('/api', filesRouter());
   app.use('/api', apiNotFound);
 

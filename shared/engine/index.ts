@@ -14,3 +14,4 @@ export * from './units';
 export * from './cutting';
 export { EngineError, isEngineError, type EngineErrorCode } from './errors';
 export { ENGINE_VERSION } from './version';
+export * from './pieces';

@@ -66,7 +66,7 @@ export function AppFrame() {
       >
         Skip to content
       </a>
-      <header className="bg-timber-800 text-white">
+      <header className="bg-timber-800 text-white print:hidden">
         <div className="mx-auto flex h-14 max-w-page items-center gap-4 px-4 lg:px-6">
           <NavLink
             to="/"
@@ -135,10 +135,13 @@ export function AppFrame() {
           )}
         />
       </header>
-      <main id="main" className="mx-auto w-full max-w-page flex-1 px-4 py-6 lg:px-6 lg:py-8">
+      <main
+        id="main"
+        className="mx-auto w-full max-w-page flex-1 px-4 py-6 lg:px-6 lg:py-8 print:max-w-none print:p-0"
+      >
         <Outlet />
       </main>
-      <footer className="border-t border-sand-200 px-4 py-4 text-center text-xs text-sand-600">
+      <footer className="border-t border-sand-200 px-4 py-4 text-center text-xs text-sand-600 print:hidden">
         Spanwise · {me.plant.name}
         {me.plant.demo ? ' · demo plant (sample data)' : ''}
       </footer>

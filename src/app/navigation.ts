@@ -28,6 +28,7 @@ export const SECTION_ROLES = {
   'price-book': ['admin', 'sales'],
   inbox: ['admin'],
   stock: ['admin'],
+  shop: ['foreman', 'sales', 'admin'],
 } as const satisfies Record<string, readonly Role[]>;
 
 const may = (section: keyof typeof SECTION_ROLES, role: Role) =>
@@ -40,6 +41,7 @@ export function navForRole(role: Role): NavItem[] {
   if (may('orders', role)) {
     items.push({ to: '/orders', label: role === 'builder' ? 'Your orders' : 'Orders' });
   }
+  if (may('shop', role)) items.push({ to: '/shop', label: 'Cut lists' });
   if (may('users', role)) items.push({ to: '/users', label: 'Users' });
   if (may('builders', role)) items.push({ to: '/builders', label: 'Builders' });
   if (may('jobs', role)) items.push({ to: '/jobs', label: 'Jobs' });

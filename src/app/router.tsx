@@ -36,6 +36,7 @@ import { stockSettingsRoutes } from '../features/stock-settings/routes';
 import { lumberPlanRoutes } from '../features/lumber-plan/routes';
 import { quoteRoutes } from '../features/quotes/routes';
 import { inboxRoutes } from '../features/inbox/routes';
+import { shopRoutes } from '../features/shop/routes';
 import { usersQueryOptions } from '../features/users/api/list-users';
 import { UsersPage } from '../features/users/components/UsersPage';
 import { Spinner } from '../components/ui';
@@ -273,6 +274,7 @@ export function createAppRouter(queryClient: QueryClient) {
             ...portalRoutes(queryClient),
             ...stockSettingsRoutes(queryClient),
             ...lumberPlanRoutes(queryClient),
+            ...shopRoutes(queryClient),
             { path: '*', element: <NotFoundPage /> },
           ],
         },

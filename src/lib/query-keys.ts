@@ -68,3 +68,10 @@ export const queryKeys = {
   designs: designKeys,
   plant: plantKeys,
 };
+
+/** Query keys of the shop: orders ready for the saw and each order's cut list. */
+export const shopKeys = {
+  all: ['shop'] as const,
+  orders: () => ['shop', 'orders'] as const,
+  cutList: (orderId: number) => ['shop', 'cut-list', orderId] as const,
+};

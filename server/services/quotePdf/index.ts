@@ -1,7 +1,6 @@
-import PDFDocument from 'pdfkit';
 import type { QuoteSnapshot } from '../pricing';
 import { drawTruss } from './drawing';
-import { FONTS } from './fonts';
+import { openDocument, pageFooters } from './document';
 import { header, linesTable, notes, parties, totals, type PrintMeta } from './sections';
 import { contentBottom, paragraph, textAt } from './text';
 import { COLORS, MARGIN, type Doc } from './theme';
@@ -65,56 +64,15 @@ function drawings(doc: Doc, s: QuoteSnapshot, y: number, newPage: () => number) 
   return at + CARD_H + CARD_GAP;
 }
 
-/** Reference and page n of N on every page, inside the bottom margin. */
-function footers(doc: Doc, s: QuoteSnapshot, reference: string) {
-  const range = doc.bufferedPageRange();
-  for (let i = 0; i < range.count; i++) {
-    doc.switchToPage(range.start + i);
-    // Writing inside the margin must not start a new page.
-    const bottom = doc.page.margins.bottom;
-    doc.page.margins.bottom = 0;
-    const y = doc.page.height - 34;
-    const w = doc.page.width - 2 * MARGIN.side;
-    doc
-      .moveTo(MARGIN.side, y - 8)
-      .lineTo(MARGIN.side + w, y - 8)
-      .lineWidth(0.5)
-      .strokeColor(COLORS.rule)
-      .stroke();
-    textAt(doc, `${s.plant.name}  ·  Quote ${reference}`, MARGIN.side, y, {
-      size: 7.5,
-      color: COLORS.faint,
-      width: w * 0.7,
-    });
-    textAt(doc, `Page ${i + 1} of ${range.count}`, MARGIN.side, y, {
-      size: 7.5,
-      color: COLORS.faint,
-      width: w,
-      align: 'right',
-    });
-    doc.page.margins.bottom = bottom;
-  }
-}
-
 /**
  * The quote as a PDF a builder can read and print: Letter for imperial plants, A4 for metric;
  * Inter embedded from the app's own files. Everything printed comes from the frozen snapshot.
  */
 export function renderQuotePdf(quote: PrintableQuote): Promise<Buffer> {
   const s = quote.snapshot as unknown as QuoteSnapshot;
-  const doc = new PDFDocument({
+  const { doc, done } = openDocument({
     size: s.units === 'imperial' ? 'LETTER' : 'A4',
-    margins: { top: MARGIN.top, left: MARGIN.side, right: MARGIN.side, bottom: MARGIN.bottom },
-    bufferPages: true,
-    font: FONTS.regular,
     info: { Title: `Quote ${quote.reference}`, Author: s.plant.name, Subject: s.job.name },
-  });
-  for (const [name, path] of Object.entries(FONTS)) doc.registerFont(name, path);
-  const chunks: Buffer[] = [];
-  doc.on('data', (c: Buffer) => chunks.push(c));
-  const done = new Promise<Buffer>((resolve, reject) => {
-    doc.on('end', () => resolve(Buffer.concat(chunks)));
-    doc.on('error', reject);
   });
   const newPage = () => {
     doc.addPage();
@@ -127,7 +85,7 @@ export function renderQuotePdf(quote: PrintableQuote): Promise<Buffer> {
   y = totals(doc, s, y);
   y = notes(doc, s, y, newPage);
   drawings(doc, s, y, newPage);
-  footers(doc, s, quote.reference);
+  pageFooters(doc, `${s.plant.name}  ·  Quote ${quote.reference}`);
   doc.end();
   return done;
 }

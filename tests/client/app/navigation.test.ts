@@ -9,6 +9,7 @@ describe('role navigation (product brief for the client shell and the sales desk
     expect(labels('admin')).toEqual([
       'Overview',
       'Orders',
+      'Cut lists',
       'Users',
       'Builders',
       'Jobs',
@@ -16,9 +17,16 @@ describe('role navigation (product brief for the client shell and the sales desk
       'Demo inbox',
       'Lumber stock',
     ]);
-    expect(labels('sales')).toEqual(['Sales desk', 'Orders', 'Builders', 'Jobs', 'Price book']);
+    expect(labels('sales')).toEqual([
+      'Sales desk',
+      'Orders',
+      'Cut lists',
+      'Builders',
+      'Jobs',
+      'Price book',
+    ]);
     expect(labels('engineer')).toEqual(['Design review', 'Review queue', 'Orders', 'Jobs']);
-    expect(labels('foreman')).toEqual(['Shop floor', 'Orders', 'Jobs']);
+    expect(labels('foreman')).toEqual(['Shop floor', 'Orders', 'Cut lists', 'Jobs']);
     expect(labels('builder')).toEqual(['Your jobs', 'Your orders']);
   });
 

@@ -63,6 +63,15 @@ const routes: Record<string, Call> = {
     name: 'lumberPlan.show',
     run: (s) => s.get(`/api/shop/orders/${approved.id}/lumber-plan`),
   },
+  'GET /api/shop/orders': { name: 'shop.list', run: (s) => s.get('/api/shop/orders') },
+  'GET /api/shop/orders/:id/cut-list': {
+    name: 'shop.cutList',
+    run: (s) => s.get(`/api/shop/orders/${approved.id}/cut-list`),
+  },
+  'GET /api/shop/orders/:id/cut-list.csv': {
+    name: 'shop.cutListCsv',
+    run: (s) => s.get(`/api/shop/orders/${approved.id}/cut-list.csv`),
+  },
 };
 
 // Expected status per route group and role (the builder belongs to `customer`).
@@ -77,6 +86,21 @@ const expected: Record<string, Record<Role, number>> = {
   'GET /api/plant': { admin: 200, sales: 200, engineer: 200, foreman: 200, builder: 200 },
   'GET /api/stock': { admin: 200, sales: 200, engineer: 403, foreman: 200, builder: 403 },
   'GET /api/shop/orders/:id/lumber-plan': {
+    admin: 200,
+    sales: 200,
+    engineer: 403,
+    foreman: 200,
+    builder: 403,
+  },
+  'GET /api/shop/orders': { admin: 200, sales: 200, engineer: 403, foreman: 200, builder: 403 },
+  'GET /api/shop/orders/:id/cut-list': {
+    admin: 200,
+    sales: 200,
+    engineer: 403,
+    foreman: 200,
+    builder: 403,
+  },
+  'GET /api/shop/orders/:id/cut-list.csv': {
     admin: 200,
     sales: 200,
     engineer: 403,
@@ -106,6 +130,8 @@ describe('role matrix', () => {
       `/api/jobs/${job.id}`,
       '/api/plant',
       '/api/auth/me',
+      '/api/shop/orders',
+      `/api/shop/orders/${approved.id}/cut-list`,
     ]) {
       const res = await request(app).get(path);
       expect(res.status, path).toBe(401);

@@ -1,5 +1,5 @@
 import type { Me } from '../../../../shared/api/auth';
-import { Card, EmptyState, PageHeader } from '../../../components/ui';
+import { Card, PageHeader } from '../../../components/ui';
 import { CautionsPanel } from './CautionsPanel';
 import { TextLink } from './links';
 import { RecentJobs } from './RecentJobs';
@@ -14,11 +14,12 @@ export function ShopFloor({ me }: { me: Me }) {
       />
       <div className="grid gap-6">
         <CautionsPanel />
-        <Card title="Coming up">
-          <EmptyState title="No orders released to production yet">
-            Orders appear here once their design is approved and the deposit or account terms are
-            settled, with cut lists and plate schedules for each line.
-          </EmptyState>
+        <Card title="Cut lists" actions={<TextLink to="/shop">Ready for the shop</TextLink>}>
+          <p className="text-base text-sand-700">
+            Every order whose truss designs are all approved has its cut list under{' '}
+            <TextLink to="/shop">Ready for the shop</TextLink>: each piece by lumber, longest first,
+            with its length, end cuts and count, to print or export.
+          </p>
         </Card>
         <RecentJobs
           title="Recent jobs"

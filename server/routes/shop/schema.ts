@@ -1,0 +1,1 @@
+export { cutListQuerySchema, type CutListQuery } from '../../../shared/api/shop';

@@ -1,0 +1,107 @@
+import type { CutListGroupView, CutListView } from '../../../../shared/api/shop';
+import { Alert, Button, PageHeader, QueryState, TextLink } from '../../../components/ui';
+import { cutListUrl, useCutList } from '../api/get-cut-list';
+
+const linkClass =
+  'inline-flex h-11 items-center justify-center rounded border border-sand-300 bg-white px-4 font-medium text-sand-900 hover:bg-sand-100';
+
+function GroupTable({ group }: { group: CutListGroupView }) {
+  return (
+    <section className="mb-6 break-inside-avoid-page rounded-md border border-sand-200 bg-white print:mb-4 print:border-sand-400">
+      <header className="flex items-baseline justify-between gap-4 border-b border-sand-200 bg-sand-50 px-4 py-3">
+        <h2 className="text-lg font-semibold text-sand-900">{group.label}</h2>
+        <p className="text-sm text-sand-600">
+          {group.quantity} pieces · {group.totalLength}
+        </p>
+      </header>
+      <table className="w-full text-left align-top text-base print:text-sm">
+        <caption className="sr-only">{group.label} pieces, longest first</caption>
+        <thead className="border-b border-sand-200 text-sm text-sand-600">
+          <tr>
+            <th className="px-3 py-2 font-medium">Mark</th>
+            <th className="px-3 py-2 text-right font-medium">Qty</th>
+            <th className="px-3 py-2 text-right font-medium">Length</th>
+            <th className="px-3 py-2 font-medium">First end</th>
+            <th className="px-3 py-2 font-medium">Second end</th>
+            <th className="px-3 py-2 font-medium">Notes</th>
+          </tr>
+        </thead>
+        <tbody>
+          {group.rows.map((r) => (
+            <tr key={r.mark} className="border-b border-sand-100 align-top last:border-0">
+              <td className="px-3 py-2 font-semibold whitespace-nowrap">{r.mark}</td>
+              <td className="px-3 py-2 text-right font-semibold tabular-nums">{r.quantity}</td>
+              <td className="px-3 py-2 text-right font-semibold whitespace-nowrap tabular-nums">
+                {r.length.text}
+              </td>
+              <td className="px-3 py-2">{r.ends[0].text}</td>
+              <td className="px-3 py-2">{r.ends[1].text}</td>
+              <td className="px-3 py-2 text-sm text-sand-600">
+                {r.perTruss} per truss × {r.trusses} × {r.plies} {r.plies === 1 ? 'ply' : 'plies'}.{' '}
+                {r.notes.join(' ')}
+              </td>
+            </tr>
+          ))}
+        </tbody>
+      </table>
+    </section>
+  );
+}
+
+function CutList({ view }: { view: CutListView }) {
+  return (
+    <>
+      <p className="mb-4 text-sm text-sand-600">
+        <span className="font-semibold text-sand-900">{view.quantity} pieces</span> to cut. Sorted{' '}
+        {view.sortedBy.charAt(0).toLowerCase() + view.sortedBy.slice(1)} Angles are to the board’s
+        edges (90° is square); lengths are long point to long point.
+      </p>
+      {view.groups.map((g) => (
+        <GroupTable key={g.lumber} group={g} />
+      ))}
+      <Alert tone="warning" title="Cautions" className="break-inside-avoid">
+        {view.cautions.join(' ')}
+      </Alert>
+      <p className="mt-3 text-xs text-sand-500">
+        Computed {new Date(view.computedAt).toLocaleString()} by engine {view.engineVersion} from
+        designs of engine {view.designEngineVersions.join(', ')}.
+      </p>
+    </>
+  );
+}
+
+/** One order's cut list for the saw: tablet sized, prints without the app's navigation. */
+export function CutListPage({ orderId }: { orderId: number }) {
+  const query = useCutList(orderId);
+  const order = query.data?.order;
+  return (
+    <>
+      <p className="mb-2 text-sm print:hidden">
+        <TextLink to="/shop">← Ready for the shop</TextLink>
+      </p>
+      <PageHeader
+        title={order ? `Cut list · Order ${order.number}` : 'Cut list'}
+        description={order ? `${order.job.name} · ${order.customer.name}` : undefined}
+        actions={
+          <div className="flex gap-2 print:hidden">
+            <a className={linkClass} href={cutListUrl(orderId, 'csv')} download>
+              CSV
+            </a>
+            <a
+              className={linkClass}
+              href={cutListUrl(orderId, 'pdf')}
+              target="_blank"
+              rel="noreferrer"
+            >
+              PDF
+            </a>
+            <Button onClick={() => window.print()}>Print</Button>
+          </div>
+        }
+      />
+      <QueryState query={query} what="the cut list">
+        {(view) => <CutList view={view} />}
+      </QueryState>
+    </>
+  );
+}
