@@ -23,6 +23,7 @@ import { devRouter } from './routes/dev/router';
 import { priceBookRouter } from './routes/priceBook/router';
 import { quotesRouter } from './routes/quotes/router';
 import { filesRouter } from './routes/files/router';
+import { shopPaperRouter } from './routes/shopPaper/router';
 import type { Mailer } from './services/mail';
 
 export interface AppOptions {
@@ -100,6 +101,7 @@ export function createApp(opts: AppOptions) {
   app.use('/api/jobs', jobsRouter());
   app.use('/api/plant', plantRouter());
   app.use('/api/orders/:id/quotes', quotesRouter());
+  app.use('/api/orders/:id/shop-paper', shopPaperRouter(config));
   app.use('/api/orders', ordersRouter());
   app.use('/api/price-book', priceBookRouter());
   app.use('/api/reviews', reviewsRouter());

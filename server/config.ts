@@ -7,6 +7,8 @@ export interface Config {
   sessionSecret: string;
   sessionIdleMinutes: number;
   loginAttemptsPer15Min: number;
+  /** Absolute address people open Spanwise at (QR codes on truss tags point here). */
+  publicUrl: string;
 }
 
 export function readConfig(env: NodeJS.ProcessEnv = process.env): Config {
@@ -21,5 +23,10 @@ export function readConfig(env: NodeJS.ProcessEnv = process.env): Config {
     sessionSecret,
     sessionIdleMinutes: Number(env.SESSION_IDLE_MINUTES ?? 120),
     loginAttemptsPer15Min: Number(env.LOGIN_ATTEMPTS ?? 10),
+    // Default: where the app itself listens (http://127.0.0.1:3000 unless HOST/PORT say otherwise).
+    publicUrl: (env.PUBLIC_URL ?? `http://${env.HOST ?? '127.0.0.1'}:${env.PORT ?? 3000}`).replace(
+      /\/+$/,
+      '',
+    ),
   };
 }

@@ -1,0 +1,82 @@
+import { Router, type Response } from 'express';
+import type { Config } from '../../config';
+import { requireUser } from '../../middleware/auth';
+import { authorize } from '../../policies/predicates';
+import { shopPaperPolicy } from '../../policies/shopPaper';
+import type { Order } from '../../models';
+import { plateSchedule, plateScheduleCsv } from '../../services/shopPaper/plateSchedule';
+import { renderPlateSchedulePdf } from '../../services/plateSchedulePdf';
+import { findOrder } from '../orders/queries';
+import { handle, load } from '../load';
+import { shopOrderPaper } from './queries';
+
+const order = load('Order', findOrder);
+const guard = [requireUser, order, authorize(shopPaperPolicy.show)];
+const paperOf = (res: Response) => shopOrderPaper(res.locals.record as Order);
+
+/** Send bytes to open in the browser (PDF) or save (CSV), never cached by shared caches. */
+function sendFile(res: Response, type: string, name: string, body: Buffer | string, inline = true) {
+  res
+    .status(200)
+    .type(type)
+    .set('Content-Disposition', `${inline ? 'inline' : 'attachment'}; filename="${name}"`)
+    .set('Cache-Control', 'private, no-store')
+    .send(body);
+}
+
+/** Shop paper of one order: `/api/orders/:id/shop-paper/…` (approved designs only). */
+export function shopPaperRouter(_config: Pick<Config, 'publicUrl'>) {
+  const router = Router({ mergeParams: true });
+
+  router.get(
+    '/',
+    ...guard,
+    handle(async (_req, res) => {
+      const paper = await paperOf(res);
+      res.json({
+        order: paper.order,
+        marks: paper.lines.map((l) => ({
+          lineId: l.id,
+          mark: l.mark,
+          description: l.description,
+          quantity: l.quantity,
+          plies: l.plies,
+        })),
+        totalTrusses: paper.lines.reduce((s, l) => s + l.quantity, 0),
+      });
+    }),
+  );
+
+  router.get(
+    '/plates',
+    ...guard,
+    handle(async (_req, res) => {
+      res.json(plateSchedule(await paperOf(res)));
+    }),
+  );
+
+  router.get(
+    '/plates.csv',
+    ...guard,
+    handle(async (_req, res) => {
+      const s = plateSchedule(await paperOf(res));
+      sendFile(res, 'text/csv', `plates-${s.order.number}.csv`, plateScheduleCsv(s), false);
+    }),
+  );
+
+  router.get(
+    '/plates.pdf',
+    ...guard,
+    handle(async (_req, res) => {
+      const s = plateSchedule(await paperOf(res));
+      sendFile(
+        res,
+        'application/pdf',
+        `plates-${s.order.number}.pdf`,
+        await renderPlateSchedulePdf(s),
+      );
+    }),
+  );
+
+  return router;
+}
