@@ -6,6 +6,10 @@ import { shopPaperPolicy } from '../../policies/shopPaper';
 import type { Order } from '../../models';
 import { plateSchedule, plateScheduleCsv } from '../../services/shopPaper/plateSchedule';
 import { renderPlateSchedulePdf } from '../../services/plateSchedulePdf';
+import { trussTags } from '../../services/shopPaper/tags';
+import { renderTrussTagsPdf } from '../../services/trussTagsPdf';
+import { validate } from '../../middleware/validate';
+import { tagPdfQuerySchema, type TagLayout } from '../../../shared/api/shopPaper';
 import { findOrder } from '../orders/queries';
 import { handle, load } from '../load';
 import { shopOrderPaper } from './queries';
@@ -25,7 +29,7 @@ function sendFile(res: Response, type: string, name: string, body: Buffer | stri
 }
 
 /** Shop paper of one order: `/api/orders/:id/shop-paper/…` (approved designs only). */
-export function shopPaperRouter(_config: Pick<Config, 'publicUrl'>) {
+export function shopPaperRouter(config: Pick<Config, 'publicUrl'>) {
   const router = Router({ mergeParams: true });
 
   router.get(
@@ -75,6 +79,28 @@ export function shopPaperRouter(_config: Pick<Config, 'publicUrl'>) {
         `plates-${s.order.number}.pdf`,
         await renderPlateSchedulePdf(s),
       );
+    }),
+  );
+
+  router.get(
+    '/tags',
+    ...guard,
+    handle(async (_req, res) => {
+      res.json(trussTags(await paperOf(res), config.publicUrl));
+    }),
+  );
+
+  router.get(
+    '/tags.pdf',
+    requireUser,
+    validate(tagPdfQuerySchema, 'query'),
+    order,
+    authorize(shopPaperPolicy.show),
+    handle(async (_req, res) => {
+      const { layout } = res.locals.query as { layout: TagLayout };
+      const tags = trussTags(await paperOf(res), config.publicUrl);
+      const pdf = await renderTrussTagsPdf(tags, layout);
+      sendFile(res, 'application/pdf', `tags-${tags.order.number}-${layout}.pdf`, pdf);
     }),
   );
 
