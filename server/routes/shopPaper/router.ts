@@ -10,6 +10,8 @@ import { trussTags } from '../../services/shopPaper/tags';
 import { renderTrussTagsPdf } from '../../services/trussTagsPdf';
 import { validate } from '../../middleware/validate';
 import { tagPdfQuerySchema, type TagLayout } from '../../../shared/api/shopPaper';
+import { deliveryTicket } from '../../services/shopPaper/delivery';
+import { renderDeliveryTicketPdf } from '../../services/deliveryTicketPdf';
 import { findOrder } from '../orders/queries';
 import { handle, load } from '../load';
 import { shopOrderPaper } from './queries';
@@ -101,6 +103,24 @@ export function shopPaperRouter(config: Pick<Config, 'publicUrl'>) {
       const tags = trussTags(await paperOf(res), config.publicUrl);
       const pdf = await renderTrussTagsPdf(tags, layout);
       sendFile(res, 'application/pdf', `tags-${tags.order.number}-${layout}.pdf`, pdf);
+    }),
+  );
+
+  router.get(
+    '/delivery',
+    ...guard,
+    handle(async (_req, res) => {
+      res.json(deliveryTicket(await paperOf(res)));
+    }),
+  );
+
+  router.get(
+    '/delivery.pdf',
+    ...guard,
+    handle(async (_req, res) => {
+      const t = deliveryTicket(await paperOf(res));
+      const pdf = await renderDeliveryTicketPdf(t);
+      sendFile(res, 'application/pdf', `delivery-${t.order.number}.pdf`, pdf);
     }),
   );
 
