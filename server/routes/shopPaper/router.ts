@@ -12,6 +12,12 @@ import { validate } from '../../middleware/validate';
 import { tagPdfQuerySchema, type TagLayout } from '../../../shared/api/shopPaper';
 import { deliveryTicket } from '../../services/shopPaper/delivery';
 import { renderDeliveryTicketPdf } from '../../services/deliveryTicketPdf';
+import { shopDrawing } from '../../services/shopPaper/drawing';
+import { jointPlateRows } from '../../services/shopPaper/plateSchedule';
+import { renderShopDrawingsPdf } from '../../services/shopDrawingPdf';
+import { notFound } from '../../errors';
+import { parseId } from '../../middleware/validate';
+import type { ShopOrderPaper } from '../../services/shopPaper/lines';
 import { findOrder } from '../orders/queries';
 import { handle, load } from '../load';
 import { shopOrderPaper } from './queries';
@@ -124,5 +130,44 @@ export function shopPaperRouter(config: Pick<Config, 'publicUrl'>) {
     }),
   );
 
+  router.get(
+    '/drawings.pdf',
+    ...guard,
+    handle(async (_req, res) => {
+      const paper = await paperOf(res);
+      const sheets = paper.lines.map((l) => shopDrawing(paper, l, jointPlateRows(l)));
+      const pdf = await renderShopDrawingsPdf(sheets);
+      sendFile(res, 'application/pdf', `shop-drawings-${paper.order.number}.pdf`, pdf);
+    }),
+  );
+
+  router.get(
+    '/lines/:lineId',
+    ...guard,
+    handle(async (req, res) => {
+      const { paper, line } = await lineOf(req.params.lineId, res);
+      res.json(shopDrawing(paper, line, jointPlateRows(line)));
+    }),
+  );
+
+  router.get(
+    '/lines/:lineId/pdf',
+    ...guard,
+    handle(async (req, res) => {
+      const { paper, line } = await lineOf(req.params.lineId, res);
+      const pdf = await renderShopDrawingsPdf([shopDrawing(paper, line, jointPlateRows(line))]);
+      sendFile(res, 'application/pdf', `shop-drawing-${paper.order.number}-${line.mark}.pdf`, pdf);
+    }),
+  );
+
   return router;
+}
+
+/** The order's paper and its line named by :lineId (404 for a line of another order). */
+async function lineOf(raw: unknown, res: Response) {
+  const id = parseId(raw);
+  const paper: ShopOrderPaper = await paperOf(res);
+  const line = paper.lines.find((l) => l.id === id);
+  if (!line) throw notFound('Truss line');
+  return { paper, line };
 }

@@ -8,8 +8,6 @@ export interface PdfColumn {
   align?: 'left' | 'right';
 }
 
-const ROW_H = 14;
-
 /**
  * A table with a banded header, one line per row (texts cut with "…" to fit), starting a new page
  * (and repeating the header) when a row would pass `bottom`. Returns the y below the table.
@@ -25,6 +23,7 @@ export function pdfTable(
   size = 8.5,
 ): number {
   const width = columns.reduce((s, c) => s + c.width, 0);
+  const ROW_H = Math.round(size * 1.6);
   const head = (at: number) => {
     doc.rect(x, at, width, ROW_H + 2).fill(COLORS.band);
     let cx = x;
@@ -74,8 +73,10 @@ export function cautionsBox(
   width: number,
   bottom: number,
   newPage: () => number,
+  compact = false,
 ): number {
-  const text = cautions.map((c) => `•  ${c}`).join('\n');
+  // Compact: one running paragraph, for sheets whose drawing takes most of the page.
+  const text = cautions.map((c) => `•  ${c}`).join(compact ? '   ' : '\n');
   const h = paragraphHeight(doc, text, width - 20, { size: 8 }) + 30;
   const at = y + h > bottom ? newPage() : y;
   doc.rect(x, at, width, h).fillAndStroke(COLORS.noteBg, COLORS.noteRule);
