@@ -66,7 +66,7 @@ export function AppFrame() {
       >
         Skip to content
       </a>
-      <header className="bg-timber-800 text-white">
+      <header className="bg-timber-800 text-white print:hidden">
         <div className="mx-auto flex h-14 max-w-page items-center gap-4 px-4 lg:px-6">
           <NavLink
             to="/"

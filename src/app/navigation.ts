@@ -27,6 +27,8 @@ export const SECTION_ROLES = {
   quotes: ['admin', 'sales', 'builder'],
   'price-book': ['admin', 'sales'],
   inbox: ['admin'],
+  /** Shop paper of orders whose designs are all approved (never a builder). */
+  'shop-paper': ['admin', 'sales', 'foreman'],
 } as const satisfies Record<string, readonly Role[]>;
 
 const may = (section: keyof typeof SECTION_ROLES, role: Role) =>

@@ -34,6 +34,7 @@ import { planFileRoutes } from '../features/plan-files/routes';
 import { priceBookRoutes } from '../features/price-book/routes';
 import { quoteRoutes } from '../features/quotes/routes';
 import { inboxRoutes } from '../features/inbox/routes';
+import { shopPaperRoutes } from '../features/shop-paper/routes';
 import { usersQueryOptions } from '../features/users/api/list-users';
 import { UsersPage } from '../features/users/components/UsersPage';
 import { Spinner } from '../components/ui';
@@ -253,6 +254,9 @@ export function createAppRouter(queryClient: QueryClient) {
                       canSeeQuotes={(SECTION_ROLES.quotes as readonly string[]).includes(
                         me.user.role,
                       )}
+                      canSeeShopPaper={(SECTION_ROLES['shop-paper'] as readonly string[]).includes(
+                        me.user.role,
+                      )}
                     />
                   )}
                 />
@@ -264,6 +268,7 @@ export function createAppRouter(queryClient: QueryClient) {
             ...priceBookRoutes(queryClient),
             ...quoteRoutes(queryClient),
             ...inboxRoutes(queryClient),
+            ...shopPaperRoutes(queryClient),
             { path: '*', element: <NotFoundPage /> },
           ],
         },

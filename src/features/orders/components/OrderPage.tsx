@@ -27,6 +27,8 @@ export interface OrderPageProps {
   canOpenJob: boolean;
   /** Sales, admin and the order's builder read its quotes. */
   canSeeQuotes?: boolean;
+  /** Foreman, sales and admin print shop paper once every design is approved. */
+  canSeeShopPaper?: boolean;
 }
 
 function Header({
@@ -34,7 +36,9 @@ function Header({
   canEdit,
   canOpenJob,
   canSeeQuotes,
+  canSeeShopPaper,
 }: { order: OrderDetail } & Omit<OrderPageProps, 'id'>) {
+  const approved = order.lines.length > 0 && order.lines.every((l) => l.reviewState === 'approved');
   return (
     <div className="mb-6 flex flex-wrap items-end justify-between gap-4">
       <div className="min-w-0">
@@ -56,6 +60,11 @@ function Header({
         </p>
       </div>
       <div className="flex items-center gap-2">
+        {canSeeShopPaper && approved ? (
+          <LinkButton to={`/orders/${order.id}/shop-paper`} variant="secondary">
+            Shop paper
+          </LinkButton>
+        ) : null}
         {canSeeQuotes ? (
           <LinkButton to={`/orders/${order.id}/quotes`} variant="secondary">
             Quotes
@@ -162,7 +171,13 @@ function Lines({ order, canEdit }: { order: OrderDetail; canEdit: boolean }) {
 }
 
 /** `/orders/:id`: the order's header, its truss lines and their actions, and its history. */
-export function OrderPage({ id, canEdit, canOpenJob, canSeeQuotes = false }: OrderPageProps) {
+export function OrderPage({
+  id,
+  canEdit,
+  canOpenJob,
+  canSeeQuotes = false,
+  canSeeShopPaper = false,
+}: OrderPageProps) {
   const order = useOrder(id);
   return (
     <QueryState query={order} what="the order">
@@ -171,7 +186,13 @@ export function OrderPage({ id, canEdit, canOpenJob, canSeeQuotes = false }: Ord
           <p className="mb-2 text-sm">
             <TextLink to="/orders">← Orders</TextLink>
           </p>
-          <Header order={o} canEdit={canEdit} canOpenJob={canOpenJob} canSeeQuotes={canSeeQuotes} />
+          <Header
+            order={o}
+            canEdit={canEdit}
+            canOpenJob={canOpenJob}
+            canSeeQuotes={canSeeQuotes}
+            canSeeShopPaper={canSeeShopPaper}
+          />
           {!canEdit ? (
             <Alert className="mb-4">
               You can follow this order here; the plant’s sales desk makes the changes.
