@@ -1,10 +1,17 @@
 import { beforeAll, describe, expect, it } from 'vitest';
 import request from 'supertest';
 import { testApp } from '../../support/db';
-import { createCustomer, createJob, createPlant, createUser } from '../../support/factories';
+import {
+  createCustomer,
+  createJob,
+  createLine,
+  createOrder,
+  createPlant,
+  createUser,
+} from '../../support/factories';
 import { signedIn } from '../../support/session';
 import type { Role } from '../../../shared/api/roles';
-import type { Customer, Job, Plant, User } from '../../../server/models';
+import type { Customer, Job, Order, Plant, User } from '../../../server/models';
 
 const app = testApp();
 const ROLES: Role[] = ['admin', 'sales', 'engineer', 'foreman', 'builder'];
@@ -21,6 +28,13 @@ beforeAll(async () => {
   job = await createJob({ customer });
   colleague = await createUser({ role: 'foreman', plant });
   for (const role of ROLES) users[role] = await createUser({ role, plant, customer });
+});
+
+// Shop paper: an order of `customer` whose designs are all approved.
+let shopOrder: Order;
+beforeAll(async () => {
+  shopOrder = await createOrder({ job });
+  await createLine({ order: shopOrder, reviewState: 'approved' });
 });
 
 type Call = { name: string; run: (s: Awaited<ReturnType<typeof signedIn>>) => request.Test };
@@ -48,6 +62,18 @@ const routes: Record<string, Call> = {
   'GET /api/jobs': { name: 'jobs.list', run: (s) => s.get('/api/jobs') },
   'GET /api/jobs/:id': { name: 'jobs.show', run: (s) => s.get(`/api/jobs/${job.id}`) },
   'GET /api/plant': { name: 'plant', run: (s) => s.get('/api/plant') },
+  'GET /api/orders/:id/shop-paper/plates': {
+    name: 'shopPaper.plates',
+    run: (s) => s.get(`/api/orders/${shopOrder.id}/shop-paper/plates`),
+  },
+  'GET /api/orders/:id/shop-paper/tags': {
+    name: 'shopPaper.tags',
+    run: (s) => s.get(`/api/orders/${shopOrder.id}/shop-paper/tags`),
+  },
+  'GET /api/orders/:id/shop-paper/delivery': {
+    name: 'shopPaper.delivery',
+    run: (s) => s.get(`/api/orders/${shopOrder.id}/shop-paper/delivery`),
+  },
 };
 
 // Expected status per route group and role (the builder belongs to `customer`).
@@ -60,6 +86,27 @@ const expected: Record<string, Record<Role, number>> = {
   'GET /api/jobs': { admin: 200, sales: 200, engineer: 200, foreman: 200, builder: 200 },
   'GET /api/jobs/:id': { admin: 200, sales: 200, engineer: 200, foreman: 200, builder: 200 },
   'GET /api/plant': { admin: 200, sales: 200, engineer: 200, foreman: 200, builder: 200 },
+  'GET /api/orders/:id/shop-paper/plates': {
+    admin: 200,
+    sales: 200,
+    engineer: 403,
+    foreman: 200,
+    builder: 403,
+  },
+  'GET /api/orders/:id/shop-paper/tags': {
+    admin: 200,
+    sales: 200,
+    engineer: 403,
+    foreman: 200,
+    builder: 403,
+  },
+  'GET /api/orders/:id/shop-paper/delivery': {
+    admin: 200,
+    sales: 200,
+    engineer: 403,
+    foreman: 200,
+    builder: 403,
+  },
 };
 
 describe('role matrix', () => {
