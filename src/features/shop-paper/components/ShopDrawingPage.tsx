@@ -53,7 +53,7 @@ export function ShopDrawingPage({
               Dimensions to panel points, centre lines, feet-inches-sixteenths.
             </p>
           </Card>
-          <div className="grid gap-4 lg:grid-cols-2 print:grid-cols-2">
+          <div className="grid gap-4 xl:grid-cols-2 print:grid-cols-1">
             <Card title="Pieces" flush>
               <ShopTable
                 caption={`Pieces of ${s.mark}`}
