@@ -25,6 +25,7 @@ import { priceBookRouter } from './routes/priceBook/router';
 import { quotesRouter } from './routes/quotes/router';
 import { filesRouter } from './routes/files/router';
 import { shopRouter } from './routes/shop/router';
+import { shopPaperRouter } from './routes/shopPaper/router';
 import type { Mailer } from './services/mail';
 import { survivePoolErrors } from './db/resilience';
 import { sweepPartialUploads } from './services/storage';
@@ -160,6 +161,7 @@ export function createApp(opts: AppOptions) {
   app.use('/api/orders/:id/quotes', acceptanceRouter());
   app.use('/api/orders/:id/quotes', quotesRouter());
   app.use('/api/orders', orderPaymentsRouter());
+  app.use('/api/orders/:id/shop-paper', shopPaperRouter(config));
   app.use('/api/orders', ordersRouter());
   app.use('/api/portal', portalHomeRouter());
   app.use('/api/price-book', priceBookRouter());

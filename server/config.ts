@@ -11,6 +11,8 @@ export interface Config {
   loginAttemptsPerAddress: number;
   /** Proxy hops in front of the app whose X-Forwarded-For is believed (0: none). */
   trustProxy: number;
+  /** Absolute address people open Spanwise at (QR codes on truss tags point here). */
+  publicUrl: string;
 }
 
 export function readConfig(env: NodeJS.ProcessEnv = process.env): Config {
@@ -27,5 +29,10 @@ export function readConfig(env: NodeJS.ProcessEnv = process.env): Config {
     loginAttemptsPer15Min: Number(env.LOGIN_ATTEMPTS ?? 10),
     loginAttemptsPerAddress: Number(env.LOGIN_ATTEMPTS_PER_ADDRESS ?? 50),
     trustProxy: Number(env.TRUST_PROXY ?? (production ? 1 : 0)),
+    // Default: where the app itself listens (http://127.0.0.1:3000 unless HOST/PORT say otherwise).
+    publicUrl: (env.PUBLIC_URL ?? `http://${env.HOST ?? '127.0.0.1'}:${env.PORT ?? 3000}`).replace(
+      /\/+$/,
+      '',
+    ),
   };
 }

@@ -29,6 +29,8 @@ export const SECTION_ROLES = {
   inbox: ['admin'],
   stock: ['admin'],
   shop: ['foreman', 'sales', 'admin'],
+  /** Shop paper of orders whose designs are all approved (never a builder). */
+  'shop-paper': ['admin', 'sales', 'foreman'],
 } as const satisfies Record<string, readonly Role[]>;
 
 const may = (section: keyof typeof SECTION_ROLES, role: Role) =>

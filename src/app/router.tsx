@@ -37,6 +37,7 @@ import { lumberPlanRoutes } from '../features/lumber-plan/routes';
 import { quoteRoutes } from '../features/quotes/routes';
 import { inboxRoutes } from '../features/inbox/routes';
 import { shopRoutes } from '../features/shop/routes';
+import { shopPaperRoutes } from '../features/shop-paper/routes';
 import { usersQueryOptions } from '../features/users/api/list-users';
 import { UsersPage } from '../features/users/components/UsersPage';
 import { Spinner } from '../components/ui';
@@ -275,6 +276,7 @@ export function createAppRouter(queryClient: QueryClient) {
             ...stockSettingsRoutes(queryClient),
             ...lumberPlanRoutes(queryClient),
             ...shopRoutes(queryClient),
+            ...shopPaperRoutes(queryClient),
             { path: '*', element: <NotFoundPage /> },
           ],
         },

@@ -97,18 +97,20 @@ export async function createLine(
     mark?: string;
     design?: object;
     reviewState?: 'pending' | 'approved' | 'returned';
+    quantity?: number;
+    plies?: number;
   } = {},
 ) {
   const order = attrs.order ?? (await createOrder());
-  const d = computeDesign(attrs.design ?? FINK_24, { plies: 1 });
+  const d = computeDesign(attrs.design ?? FINK_24, { plies: attrs.plies ?? 1 });
   const position =
     ((await OrderLine.max('position', { where: { orderId: order.id } })) as number | null) ?? 0;
   return OrderLine.create({
     orderId: order.id,
     position: position + 1,
     mark: attrs.mark ?? `T${position + 1}`,
-    quantity: 4,
-    plies: 1,
+    quantity: attrs.quantity ?? 4,
+    plies: attrs.plies ?? 1,
     profile: d.profile,
     designInput: d.input as unknown as Record<string, unknown>,
     designResult: d.result as unknown as Record<string, unknown>,

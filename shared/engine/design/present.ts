@@ -116,6 +116,10 @@ export interface PresentedDesign {
     gauge?: number;
     widthIn?: number;
     lengthIn?: number;
+    /** Plate length axis from +x, degrees (counter-clockwise, y up). */
+    angleDeg?: number;
+    /** Slide of the plate centre from the joint, square to its length axis (+ toward the axis turned +90°), in or mm. */
+    offset?: number;
     ratio?: number;
     members?: { member: string; area: number; demand: number; capacity: number; ratio: number }[];
     steel?: { kind: string; member: string; demand: number; capacity: number; ratio: number }[];
@@ -242,6 +246,8 @@ export function presentDesign(design: TrussDesign, units: PresentUnits): Present
         gauge: p.design.plate.gauge,
         widthIn: p.design.plate.width,
         lengthIn: p.design.plate.length,
+        angleDeg: round((p.design.angle * 180) / Math.PI, 2),
+        offset: len(p.design.offset),
         ratio: ratio(p.design.ratio),
         members: p.design.members.map((c) => ({
           member: c.member,

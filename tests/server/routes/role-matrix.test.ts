@@ -33,6 +33,13 @@ beforeAll(async () => {
   await createLine({ order: approved, reviewState: 'approved' });
 });
 
+// Shop paper: an order of `customer` whose designs are all approved.
+let shopOrder: Order;
+beforeAll(async () => {
+  shopOrder = await createOrder({ job });
+  await createLine({ order: shopOrder, reviewState: 'approved' });
+});
+
 type Call = { name: string; run: (s: Awaited<ReturnType<typeof signedIn>>) => request.Test };
 const routes: Record<string, Call> = {
   'GET /api/users': { name: 'users.list', run: (s) => s.get('/api/users') },
@@ -72,6 +79,18 @@ const routes: Record<string, Call> = {
     name: 'shop.cutListCsv',
     run: (s) => s.get(`/api/shop/orders/${approved.id}/cut-list.csv`),
   },
+  'GET /api/orders/:id/shop-paper/plates': {
+    name: 'shopPaper.plates',
+    run: (s) => s.get(`/api/orders/${shopOrder.id}/shop-paper/plates`),
+  },
+  'GET /api/orders/:id/shop-paper/tags': {
+    name: 'shopPaper.tags',
+    run: (s) => s.get(`/api/orders/${shopOrder.id}/shop-paper/tags`),
+  },
+  'GET /api/orders/:id/shop-paper/delivery': {
+    name: 'shopPaper.delivery',
+    run: (s) => s.get(`/api/orders/${shopOrder.id}/shop-paper/delivery`),
+  },
 };
 
 // Expected status per route group and role (the builder belongs to `customer`).
@@ -101,6 +120,27 @@ const expected: Record<string, Record<Role, number>> = {
     builder: 403,
   },
   'GET /api/shop/orders/:id/cut-list.csv': {
+    admin: 200,
+    sales: 200,
+    engineer: 403,
+    foreman: 200,
+    builder: 403,
+  },
+  'GET /api/orders/:id/shop-paper/plates': {
+    admin: 200,
+    sales: 200,
+    engineer: 403,
+    foreman: 200,
+    builder: 403,
+  },
+  'GET /api/orders/:id/shop-paper/tags': {
+    admin: 200,
+    sales: 200,
+    engineer: 403,
+    foreman: 200,
+    builder: 403,
+  },
+  'GET /api/orders/:id/shop-paper/delivery': {
     admin: 200,
     sales: 200,
     engineer: 403,

@@ -27,7 +27,7 @@ export interface OrderPageProps {
   canOpenJob: boolean;
   /** Sales, admin and the order's builder read its quotes. */
   canSeeQuotes?: boolean;
-  /** The foreman, sales and admin open shop paper (the lumber plan) once every line is approved. */
+  /** The foreman, sales and admin open shop paper (cut lists, lumber plan, plates, tags) once every line is approved. */
   canSeeShop?: boolean;
 }
 
@@ -63,6 +63,11 @@ function Header({
         {canSeeShop && approved ? (
           <LinkButton to={`/shop/orders/${order.id}/lumber-plan`} variant="secondary">
             Lumber plan
+          </LinkButton>
+        ) : null}
+        {canSeeShop && approved ? (
+          <LinkButton to={`/orders/${order.id}/shop-paper`} variant="secondary">
+            Shop paper
           </LinkButton>
         ) : null}
         {canSeeQuotes ? (

@@ -1,0 +1,127 @@
+import { afterAll, beforeAll, describe, expect, it } from 'vitest';
+import type { BrowserContext, Page } from 'playwright-core';
+import type { Server } from 'node:http';
+import { execFileSync } from 'node:child_process';
+import { writeFileSync } from 'node:fs';
+import { testApp } from '../support/db';
+import {
+  createCustomer,
+  createJob,
+  createLine,
+  createOrder,
+  createPlant,
+  createUser,
+  TEST_PASSWORD,
+} from '../support/factories';
+import { launchBrowser, listen, SCREENSHOTS } from '../support/browser';
+import type { Order, OrderLine, User } from '../../server/models';
+
+let browser: BrowserContext;
+let closeBrowser: () => Promise<void>;
+let server: Server;
+let base: string;
+let foreman: User;
+let order: Order;
+let t1: OrderLine;
+
+const TABLET = { width: 1024, height: 768 };
+
+async function signIn(page: Page, user: User) {
+  await browser.clearCookies();
+  await page.goto(`${base}/sign-in`);
+  await page.getByLabel('E-mail').fill(user.email);
+  await page.getByLabel('Password').fill(TEST_PASSWORD);
+  await page.getByRole('button', { name: 'Sign in' }).click();
+  await page.waitForURL(`${base}/`);
+}
+
+/** Keep a PDF under test-results/e2e and render its first page to PNG (pdftoppm) to look at. */
+function keepPdf(name: string, pdf: Buffer) {
+  writeFileSync(`${SCREENSHOTS}/${name}.pdf`, pdf);
+  execFileSync('pdftoppm', [
+    '-png',
+    '-r',
+    '80',
+    '-f',
+    '1',
+    '-l',
+    '1',
+    '-singlefile',
+    `${SCREENSHOTS}/${name}.pdf`,
+    `${SCREENSHOTS}/${name}`,
+  ]);
+}
+
+beforeAll(async () => {
+  const plant = await createPlant({ name: 'Shop Paper Test Plant' });
+  foreman = await createUser({ role: 'foreman', plant });
+  const customer = await createCustomer({ plant, name: 'Alder Creek Homes' });
+  order = await createOrder({ job: await createJob({ customer, name: 'Alder Creek, lot 9' }) });
+  t1 = await createLine({ order, mark: 'T1', reviewState: 'approved' });
+  await createLine({ order, mark: 'G1', quantity: 2, plies: 2, reviewState: 'approved' });
+  const app = testApp({ demo: true }, 'dist/client');
+  ({ server, url: base } = await listen(app));
+  ({ browser, close: closeBrowser } = await launchBrowser());
+});
+
+afterAll(async () => {
+  await closeBrowser?.();
+  server?.close();
+});
+
+describe('shop paper, in a browser on a tablet', () => {
+  it('the foreman prints the tags and a shop drawing', async () => {
+    const page = await browser.newPage();
+    await page.setViewportSize(TABLET);
+    await signIn(page, foreman);
+    await page.goto(`${base}/orders/${order.id}`);
+    await page.getByRole('link', { name: 'Shop paper' }).click();
+    await expect
+      .poll(() => page.locator('h1').first().textContent())
+      .toBe(`Shop paper · Order ${order.number}`);
+    await page.getByText(/^Pick from the rack — \d+ plates$/).waitFor();
+    await page.screenshot({ path: `${SCREENSHOTS}/shop-paper-tablet.png`, fullPage: true });
+
+    // The tag sheet opens as a PDF in the same session.
+    const href = await page
+      .getByRole('link', { name: 'Truss tags — label sheet (4 × 2 in)' })
+      .getAttribute('href');
+    const tags = await page.request.get(`${base}${href}`);
+    expect(tags.status()).toBe(200);
+    expect(tags.headers()['content-type']).toBe('application/pdf');
+    keepPdf('shop-tags-sheet', await tags.body());
+
+    await page.getByRole('link', { name: 'Shop drawing T1' }).click();
+    await page.getByTestId('shop-drawing').waitFor();
+    await expect.poll(() => page.locator('h1').first().textContent()).toMatch(/^T1 /);
+    await page.getByRole('button', { name: 'Print shop drawing' }).waitFor();
+    await page.screenshot({ path: `${SCREENSHOTS}/shop-drawing-tablet.png`, fullPage: true });
+    // Readable on a tablet: nothing wider than the screen.
+    const scrollWidth = await page.evaluate(() => document.documentElement.scrollWidth);
+    expect(scrollWidth).toBeLessThanOrEqual(TABLET.width);
+
+    // Printed: the print stylesheet drops the app's header and the buttons.
+    await page.emulateMedia({ media: 'print' });
+    expect(await page.locator('body > div header').first().isVisible()).toBe(false);
+    expect(await page.getByRole('button', { name: 'Print shop drawing' }).isVisible()).toBe(false);
+    keepPdf('shop-drawing-printed', await page.pdf({ format: 'Letter', printBackground: true }));
+    await page.emulateMedia({ media: 'screen' });
+
+    // The PDF of the same sheet.
+    const pdfHref = await page.getByRole('link', { name: 'PDF' }).getAttribute('href');
+    const sheet = await page.request.get(`${base}${pdfHref}`);
+    expect(sheet.headers()['content-type']).toBe('application/pdf');
+    keepPdf('shop-drawing-sheet', await sheet.body());
+    await page.close();
+  });
+
+  it('a tag’s QR address opens that truss’s shop drawing', async () => {
+    const page = await browser.newPage();
+    await page.setViewportSize(TABLET);
+    await signIn(page, foreman);
+    await page.goto(`${base}/orders/${order.id}/shop-paper/lines/${t1.id}?truss=3`);
+    await page.getByText(/truss 3 of 4/).waitFor();
+    await page.getByTestId('shop-drawing').waitFor();
+    await page.close();
+  });
+});
