@@ -7,9 +7,10 @@ import type { TrussProfile } from '../profiles/types';
 import { KPA_PER_PSF } from '../units';
 import { ENGINE_VERSION } from '../version';
 import { DESIGN_CAUTIONS } from './cautions';
-import { designLoads } from './combinedLoads';
-import { designDeflection, prepareWithStiffness } from './deflection';
+import { designLoads, type CombinedLoads } from './combinedLoads';
+import { designDeflection } from './deflection';
 import { memberDemands, type MemberDemands } from './demands';
+import { designFrame } from './frameModel';
 import { designPlates } from './jointPlates';
 import { lumberCandidates } from './lumberChoice';
 import {
@@ -39,6 +40,12 @@ import type {
  * the pointed line-model heel at the bearing; taller heels get the heel post and heel diagonal.
  */
 export const STANDARD_HEEL_MAX_MM = 8 * 25.4;
+
+/**
+ * Most frame analyses per design. Member forces of the frame depend on the members' stiffness,
+ * so the lumber sizing picks is analysed again until the choice repeats (usually 1–2 passes).
+ */
+export const MAX_SIZING_PASSES = 4;
 
 /** The sizing outcome per member index. */
 interface Sized {
@@ -98,8 +105,11 @@ function designMembers(
   return profile.members.map((mb, k) => {
     const forces = combos.map((_, i) => demands.axial[i * m + k]);
     let maxMoment = 0;
-    for (let i = 0; i < combos.length; i++)
+    let maxShear = 0;
+    for (let i = 0; i < combos.length; i++) {
       maxMoment = Math.max(maxMoment, demands.moment[i * m + k]);
+      maxShear = Math.max(maxShear, demands.shear[i * m + k]);
+    }
     const v = sized.verdictOf[k];
     return {
       id: mb.id,
@@ -114,6 +124,7 @@ function designMembers(
       maxTension: Math.max(0, ...forces),
       maxCompression: Math.max(0, ...forces.map((f) => -f)),
       maxMoment,
+      maxShear,
       csi: v.csi,
       governingCombination: combos[v.combination].name,
       governingCheck: v.governing,
@@ -214,6 +225,65 @@ const lumberLabelSafe = (id: string) => {
 };
 
 /**
+ * Frame analysis and sizing, repeated while sizing changes the lumber the frame was analysed
+ * with (the first pass assumes the cheapest allowed lumber of each role). The returned frame
+ * carries the final lumber.
+ */
+function analyseAndSize(
+  profile: TrussProfile,
+  combinations: CombinedLoads[],
+  input: EngineDesignInput,
+  options: DesignOptions,
+  warnings: string[],
+) {
+  const repetitive = chordRepetitive(input.spacing);
+  const cds = combinations.map((c) => c.cd);
+  const critical = (demands: MemberDemands) =>
+    profile.members.map((_, k) => criticalCombinations(demands, cds, k));
+  // First pass: every member of the cheapest allowed lumber of its role.
+  const cheapest = new Map<string, string>();
+  let lumberOf = profile.members.map((mb) => {
+    let id = cheapest.get(mb.role);
+    if (id === undefined) {
+      id = lumberCandidates(mb.role, input.lumber, options.defaultLumber)[0];
+      cheapest.set(mb.role, id);
+    }
+    return id;
+  });
+  let frame = designFrame(profile, lumberOf, input.plies);
+  let demands = memberDemands(profile, combinations, frame);
+  let ctx: SizingContext;
+  let sized: Sized;
+  let passes = 0;
+  for (;;) {
+    passes++;
+    ctx = {
+      profile,
+      demands,
+      cds,
+      plies: input.plies,
+      repetitive,
+      bracedWebs: new Set(input.webBraces),
+      critical: critical(demands),
+    };
+    sized = sizeAll(ctx, input, options);
+    const settled = sized.lumberOf.every((id, k) => id === lumberOf[k]);
+    lumberOf = sized.lumberOf;
+    if (settled) break;
+    frame = designFrame(profile, lumberOf, input.plies);
+    if (passes === MAX_SIZING_PASSES) {
+      warnings.push(
+        `Sizing did not settle in ${passes} frame analyses: member checks use the forces of ` +
+          'the previous lumber choice; review the chord and web sizes.',
+      );
+      break;
+    }
+    demands = memberDemands(profile, combinations, frame);
+  }
+  return { frame, demands, ctx, sized, passes };
+}
+
+/**
  * Designs one truss (SI in and out; pure): profile, loads and ASD combinations, member forces,
  * NDS member checks with auto-sizing per piece, bearing, deflection and plates. A design that
  * merely fails comes back with `ok: false` and the reasons in `warnings`; only a request that
@@ -233,25 +303,18 @@ export function designTruss(input: EngineDesignInput, options: DesignOptions = {
   const profile = generateProfile({ ...input.profile, heelHeight: analysedHeel });
   const loads = designLoads(input, profile, options.edition ?? '7-16');
   const combos: DesignCombination[] = loads.combinations.map((c) => ({ name: c.name, cd: c.cd }));
-  const demands = memberDemands(profile, loads.combinations);
-
   const webIds = new Set(profile.members.filter((mb) => mb.role === 'web').map((mb) => mb.id));
   const unknownBraces = input.webBraces.filter((id) => !webIds.has(id));
   if (unknownBraces.length > 0) {
     warnings.push(`Web brace ignored, no such web in this truss: ${unknownBraces.join(', ')}.`);
   }
-  const repetitive = chordRepetitive(input.spacing);
-  const cds = combos.map((c) => c.cd);
-  const ctx: SizingContext = {
+  const { frame, demands, ctx, sized, passes } = analyseAndSize(
     profile,
-    demands,
-    cds,
-    plies: input.plies,
-    repetitive,
-    bracedWebs: new Set(input.webBraces),
-    critical: profile.members.map((_, k) => criticalCombinations(demands, cds, k)),
-  };
-  const sized = sizeAll(ctx, input, options);
+    loads.combinations,
+    input,
+    options,
+    warnings,
+  );
   for (const { group, choice } of sized.groups) {
     if (choice.pass) continue;
     const key = group.role === 'web' ? 'webs' : group.role;
@@ -268,8 +331,7 @@ export function designTruss(input: EngineDesignInput, options: DesignOptions = {
         'bottom chord; use a wider bearing or a bearing block.',
     );
   }
-  const stiff = prepareWithStiffness(profile, sized.lumberOf, input.plies);
-  const deflection = designDeflection(stiff, profile, loads.cases, input.deflection);
+  const deflection = designDeflection(frame, profile, loads.cases, input.deflection);
   for (const d of [deflection.live, deflection.total]) {
     if (d && !d.pass) {
       warnings.push(
@@ -289,11 +351,12 @@ export function designTruss(input: EngineDesignInput, options: DesignOptions = {
         ]
       : []),
     'Top chord braced out of plane by the sheathing, bottom chord by the ceiling; webs over their length unless braced.',
-    'Chord bending from each chord piece as a continuous beam on rigid supports at its panel points, the overhang a cantilever beyond the heel; hinges at the peak and at splices (conservative: a splice plate carries no moment). Members are checked with the larger of the span and panel-point moments.',
-    repetitive
+    'Forces, moments and shears from a plane frame (direct stiffness method, each member with its E, A and I): chords continuous through the panel points within each piece of lumber and hinged at splices, at the peak and at the heel (continuous into an overhang), webs pinned at both ends, roof and ceiling loads as line loads on the chord members (live and snow on the horizontal projection, dead along the member). Members are checked with the larger of the span and panel-point moments.',
+    `Frame analysed ${passes === 1 ? 'once' : `${passes} times`} with the lumber sizing chose (its stiffness sets the force distribution).`,
+    ctx.repetitive
       ? 'Repetitive member factor Cr = 1.15 on chord bending (spacing 24 in. o.c. or less).'
       : 'No repetitive member factor: spacing over 24 in. o.c.',
-    'Deflection from member axial strain of the line model (no joint slip or creep).',
+    'Deflection of the bottom-chord panel points from the same frame (axial and bending strain; no joint slip or creep).',
     ...(catalog.demo ? [catalog.label] : []),
   );
   const ok =
