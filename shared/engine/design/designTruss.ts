@@ -7,24 +7,12 @@ import type { TrussProfile } from '../profiles/types';
 import { KPA_PER_PSF } from '../units';
 import { ENGINE_VERSION } from '../version';
 import { DESIGN_CAUTIONS } from './cautions';
-import { designLoads, type CombinedLoads } from './combinedLoads';
+import { designLoads } from './combinedLoads';
 import { designDeflection } from './deflection';
-import { memberDemands, type MemberDemands } from './demands';
-import { designFrame } from './frameModel';
+import type { MemberDemands } from './demands';
+import { analyseAndSize, type Sized } from './frameSizing';
 import { designPlates } from './jointPlates';
-import { lumberCandidates } from './lumberChoice';
-import {
-  chooseForGroup,
-  chordRepetitive,
-  criticalCombinations,
-  sizingGroups,
-  sizingOptions,
-  type GroupChoice,
-  type MemberVerdict,
-  type SizingContext,
-  type SizingGroup,
-  type SizingOption,
-} from './sizing';
+import type { GroupChoice, SizingGroup } from './sizing';
 import type {
   DesignBearing,
   DesignCombination,
@@ -37,52 +25,9 @@ import type {
 
 /**
  * Tallest heel analysed as a standard heel: 8 in (common practice). Such a heel is modelled with
- * the pointed line-model heel at the bearing; taller heels get the heel post and heel diagonal.
+ * the pointed line-model heel at the bearing; taller heels get the heel post and heel webs.
  */
 export const STANDARD_HEEL_MAX_MM = 8 * 25.4;
-
-/**
- * Most frame analyses per design. Member forces of the frame depend on the members' stiffness,
- * so the lumber sizing picks is analysed again until the choice repeats (usually 1–2 passes).
- */
-export const MAX_SIZING_PASSES = 4;
-
-/** The sizing outcome per member index. */
-interface Sized {
-  groups: { group: SizingGroup; choice: GroupChoice }[];
-  lumberOf: string[];
-  bracedOf: boolean[];
-  verdictOf: MemberVerdict[];
-}
-
-function sizeAll(ctx: SizingContext, input: EngineDesignInput, options: DesignOptions): Sized {
-  const m = ctx.profile.members.length;
-  const lumberOf = new Array<string>(m);
-  const bracedOf = new Array<boolean>(m).fill(false);
-  const verdictOf = new Array<MemberVerdict>(m);
-  const candidatesOf = new Map<string, string[]>();
-  const optionsOf = new Map<string, SizingOption[]>();
-  const groups = sizingGroups(ctx.profile).map((group) => {
-    let candidates = candidatesOf.get(group.role);
-    if (!candidates) {
-      candidates = lumberCandidates(group.role, input.lumber, options.defaultLumber);
-      candidatesOf.set(group.role, candidates);
-    }
-    const web = group.role === 'web';
-    const forced = web && group.members.some((k) => ctx.bracedWebs.has(ctx.profile.members[k].id));
-    const key = `${group.role}${forced}`;
-    let tries = optionsOf.get(key);
-    if (!tries) optionsOf.set(key, (tries = sizingOptions(candidates, web, forced)));
-    const choice = chooseForGroup(ctx, group.members, tries);
-    for (const k of group.members) {
-      lumberOf[k] = choice.lumber;
-      bracedOf[k] = choice.braced;
-      verdictOf[k] = choice.verdicts.get(k)!;
-    }
-    return { group, choice };
-  });
-  return { groups, lumberOf, bracedOf, verdictOf };
-}
 
 const bracingText = (role: string, braced: boolean) =>
   role === 'topChord'
@@ -225,65 +170,6 @@ const lumberLabelSafe = (id: string) => {
 };
 
 /**
- * Frame analysis and sizing, repeated while sizing changes the lumber the frame was analysed
- * with (the first pass assumes the cheapest allowed lumber of each role). The returned frame
- * carries the final lumber.
- */
-function analyseAndSize(
-  profile: TrussProfile,
-  combinations: CombinedLoads[],
-  input: EngineDesignInput,
-  options: DesignOptions,
-  warnings: string[],
-) {
-  const repetitive = chordRepetitive(input.spacing);
-  const cds = combinations.map((c) => c.cd);
-  const critical = (demands: MemberDemands) =>
-    profile.members.map((_, k) => criticalCombinations(demands, cds, k));
-  // First pass: every member of the cheapest allowed lumber of its role.
-  const cheapest = new Map<string, string>();
-  let lumberOf = profile.members.map((mb) => {
-    let id = cheapest.get(mb.role);
-    if (id === undefined) {
-      id = lumberCandidates(mb.role, input.lumber, options.defaultLumber)[0];
-      cheapest.set(mb.role, id);
-    }
-    return id;
-  });
-  let frame = designFrame(profile, lumberOf, input.plies);
-  let demands = memberDemands(profile, combinations, frame);
-  let ctx: SizingContext;
-  let sized: Sized;
-  let passes = 0;
-  for (;;) {
-    passes++;
-    ctx = {
-      profile,
-      demands,
-      cds,
-      plies: input.plies,
-      repetitive,
-      bracedWebs: new Set(input.webBraces),
-      critical: critical(demands),
-    };
-    sized = sizeAll(ctx, input, options);
-    const settled = sized.lumberOf.every((id, k) => id === lumberOf[k]);
-    lumberOf = sized.lumberOf;
-    if (settled) break;
-    frame = designFrame(profile, lumberOf, input.plies);
-    if (passes === MAX_SIZING_PASSES) {
-      warnings.push(
-        `Sizing did not settle in ${passes} frame analyses: member checks use the forces of ` +
-          'the previous lumber choice; review the chord and web sizes.',
-      );
-      break;
-    }
-    demands = memberDemands(profile, combinations, frame);
-  }
-  return { frame, demands, ctx, sized, passes };
-}
-
-/**
  * Designs one truss (SI in and out; pure): profile, loads and ASD combinations, member forces,
  * NDS member checks with auto-sizing per piece, bearing, deflection and plates. A design that
  * merely fails comes back with `ok: false` and the reasons in `warnings`; only a request that
@@ -300,6 +186,11 @@ export function designTruss(input: EngineDesignInput, options: DesignOptions = {
       'Standard heel (8 in. or less): analysed with the pointed line-model heel at the bearing.',
     );
   }
+  if (analysedHeel > 0) {
+    notes.push(
+      "Raised heel: a heel post at the bearing with the top chord bearing over it, a heel web from the bearing up to the top chord and a web down to the first bottom-chord panel point; the bottom chord's end panel ties the heel.",
+    );
+  }
   const profile = generateProfile({ ...input.profile, heelHeight: analysedHeel });
   const loads = designLoads(input, profile, options.edition ?? '7-16');
   const combos: DesignCombination[] = loads.combinations.map((c) => ({ name: c.name, cd: c.cd }));
@@ -308,13 +199,18 @@ export function designTruss(input: EngineDesignInput, options: DesignOptions = {
   if (unknownBraces.length > 0) {
     warnings.push(`Web brace ignored, no such web in this truss: ${unknownBraces.join(', ')}.`);
   }
-  const { frame, demands, ctx, sized, passes } = analyseAndSize(
+  const { frame, demands, ctx, sized, passes, settled } = analyseAndSize(
     profile,
     loads.combinations,
     input,
     options,
-    warnings,
   );
+  if (!settled) {
+    warnings.push(
+      `Sizing did not settle in ${passes} frame analyses: the last choice is analysed and ` +
+        'checked as it is; review the chord and web sizes.',
+    );
+  }
   for (const { group, choice } of sized.groups) {
     if (choice.pass) continue;
     const key = group.role === 'web' ? 'webs' : group.role;
@@ -352,7 +248,7 @@ export function designTruss(input: EngineDesignInput, options: DesignOptions = {
       : []),
     'Top chord braced out of plane by the sheathing, bottom chord by the ceiling; webs over their length unless braced.',
     'Forces, moments and shears from a plane frame (direct stiffness method, each member with its E, A and I): chords continuous through the panel points within each piece of lumber and hinged at splices, at the peak and at the heel (continuous into an overhang), webs pinned at both ends, roof and ceiling loads as line loads on the chord members (live and snow on the horizontal projection, dead along the member). Members are checked with the larger of the span and panel-point moments.',
-    `Frame analysed ${passes === 1 ? 'once' : `${passes} times`} with the lumber sizing chose (its stiffness sets the force distribution).`,
+    `Frame analysed ${passes === 1 ? 'once' : `${passes} times`}, until the lumber it was analysed with is the lumber sizing chose (stiffness sets the force distribution).`,
     ctx.repetitive
       ? 'Repetitive member factor Cr = 1.15 on chord bending (spacing 24 in. o.c. or less).'
       : 'No repetitive member factor: spacing over 24 in. o.c.',

@@ -184,11 +184,11 @@ describe('units', () => {
 });
 
 describe('raised heels', () => {
-  it('a heel over 8 in gets the heel post and heel diagonal', () => {
+  it('a heel over 8 in gets the heel post and heel webs', () => {
     const d = designTruss(engineInput(lightFink({ heelHeight: 12 })));
     expect(d.heelHeight.analysed).toBeWithin(12 * MM_PER_INCH, { rel: 1e-12 });
-    // Fink with raised heels: 4 W webs + 2 posts + 2 heel diagonals.
-    expect(d.members.filter((m) => m.role === 'web')).toHaveLength(8);
+    // Fink with raised heels: 4 W webs + 2 posts + 2 heel webs + 2 webs closing the end panels.
+    expect(d.members.filter((m) => m.role === 'web')).toHaveLength(10);
     expect(d.notes.some((n) => n.startsWith('Standard heel'))).toBe(false);
   });
 
