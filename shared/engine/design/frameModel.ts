@@ -92,9 +92,13 @@ export function designFrame(
 }
 
 /** Unit normal of a member toward its downward side (x > 0 on a vertical member). */
-function downNormal(profile: TrussProfile, from: string, to: string) {
-  const a = profile.joints.find((j) => j.id === from)!;
-  const b = profile.joints.find((j) => j.id === to)!;
+function downNormal(
+  joints: ReadonlyMap<string, { x: number; y: number }>,
+  from: string,
+  to: string,
+) {
+  const a = joints.get(from)!;
+  const b = joints.get(to)!;
   const len = Math.hypot(b.x - a.x, b.y - a.y);
   const n = { x: -(b.y - a.y) / len, y: (b.x - a.x) / len };
   const down = n.y < 0 || (n.y === 0 && n.x > 0) ? n : { x: -n.x, y: -n.y };
@@ -128,10 +132,11 @@ export function frameLoadsOf(
     j.fy! += l.fy ?? 0;
   }
   const members: FrameMemberLoad[] = [];
+  const byId = new Map(profile.joints.map((j) => [j.id, j]));
   profile.members.forEach((mb, k) => {
     const t = transverse[k];
     if (!t) return;
-    const n = downNormal(profile, mb.from, mb.to);
+    const n = downNormal(byId, mb.from, mb.to);
     for (const end of [mb.from, mb.to]) {
       const j = at(end);
       j.fx! -= (t * n.len * n.x) / 2;

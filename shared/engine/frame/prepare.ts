@@ -158,27 +158,23 @@ export function globalStiffness(
   s: number,
   out: Float64Array,
 ) {
-  // T per end: [c s 0; −s c 0; 0 0 1]. Build k·T, then Tᵀ·(k·T).
-  const t = (r: number, col: number): number => {
-    if (r >= 3 !== col >= 3) return 0;
-    const i = r % 3;
-    const j = col % 3;
-    if (i === 2 || j === 2) return i === j ? 1 : 0;
-    return i === j ? c : i === 0 ? s : -s;
-  };
-  const kt = new Float64Array(36);
-  for (let r = 0; r < 6; r++) {
-    for (let col = 0; col < 6; col++) {
-      let v = 0;
-      for (let m = 0; m < 6; m++) v += k[at + r * 6 + m] * t(m, col);
-      kt[r * 6 + col] = v;
-    }
-  }
-  for (let r = 0; r < 6; r++) {
-    for (let col = 0; col < 6; col++) {
-      let v = 0;
-      for (let m = 0; m < 6; m++) v += t(m, r) * kt[m * 6 + col];
-      out[r * 6 + col] = v;
+  // T per end: [c s 0; −s c 0; 0 0 1], block-diagonal. Tᵀ·k·T block by block.
+  const t = [c, s, 0, -s, c, 0, 0, 0, 1];
+  for (let bi = 0; bi < 2; bi++) {
+    for (let bj = 0; bj < 2; bj++) {
+      for (let r = 0; r < 3; r++) {
+        for (let col = 0; col < 3; col++) {
+          let v = 0;
+          for (let p = 0; p < 3; p++) {
+            const tpr = t[p * 3 + r];
+            if (tpr === 0) continue;
+            for (let q = 0; q < 3; q++) {
+              v += tpr * k[at + (3 * bi + p) * 6 + 3 * bj + q] * t[q * 3 + col];
+            }
+          }
+          out[(3 * bi + r) * 6 + 3 * bj + col] = v;
+        }
+      }
     }
   }
 }
