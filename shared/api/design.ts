@@ -300,9 +300,10 @@ export const toEngineInput = (input: DesignInput): EngineDesignInput => {
   // psf → kPa (exact by definition of lbf and ft), then kPa → N/mm².
   const area = (v: number): AreaLoad => ((imperial ? v * KPA_PER_PSF : v) / 1000) as AreaLoad;
   const optArea = (v: number | undefined) => (v === undefined ? undefined : area(v));
+  // One overhang number is both ends of a gable; a mono's tall end has none (low end only).
   const oh =
     typeof input.overhang === 'number'
-      ? { left: input.overhang, right: input.overhang }
+      ? { left: input.overhang, right: input.profile === 'mono' ? 0 : input.overhang }
       : input.overhang;
   const { snow } = input.loads;
   return {

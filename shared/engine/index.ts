@@ -10,6 +10,7 @@ export * from './members';
 export * from './plates';
 export * from './format';
 export * from './design';
+export * from './frame';
 export * from './units';
 export * from './cutting';
 export { EngineError, isEngineError, type EngineErrorCode } from './errors';

@@ -1,10 +1,9 @@
-import { prepareTruss, solveLoads, type PreparedTruss } from '../analysis';
-import type { JointLoad } from '../analysis/types';
+import { solveFrame, type PreparedFrame } from '../frame';
 import type { CaseLoads } from '../loads';
 import { designValues, parseLumberId, sectionProperties } from '../lumber';
 import type { TrussProfile } from '../profiles/types';
 import type { DesignCaseId } from './combinedLoads';
-import { profileModel } from './demands';
+import { caseFrameLoads } from './frameModel';
 import type { DeflectionCheck, DesignDeflection } from './types';
 
 /** Axial stiffness E·A of a lumber id with `plies` side by side, N (E in MPa × A in mm²). */
@@ -16,39 +15,17 @@ export function axialStiffness(lumberId: string, plies: number): number {
   );
 }
 
-/** The profile's model with each member's EA from its lumber, prepared for the stiffness method. */
-export function prepareWithStiffness(
-  profile: TrussProfile,
-  lumberOf: readonly string[],
-  plies: number,
-): PreparedTruss {
-  const base = profileModel(profile);
-  const ea = new Map<string, number>();
-  const members = base.members.map((m, k) => {
-    const key = lumberOf[k];
-    let value = ea.get(key);
-    if (value === undefined) ea.set(key, (value = axialStiffness(key, plies)));
-    return { ...m, ea: value };
-  });
-  return prepareTruss({ ...base, members });
-}
-
 const LIVE_CASES: DesignCaseId[] = ['Lr', 'S', 'L', 'Lbc'];
 const LABEL: Partial<Record<DesignCaseId, string>> = { Lr: 'Lr', S: 'S', L: 'L', Lbc: 'L(bc)' };
 
-/** Sum of unfactored case loads. */
-const sumLoads = (...sets: (JointLoad[] | undefined)[]): JointLoad[] =>
-  sets.flatMap((s) => s ?? []);
-
 /** Downward vertical displacement of each bottom-chord joint, mm (down +). */
 function bottomChordDrop(
-  prepared: PreparedTruss,
+  frame: PreparedFrame,
   profile: TrussProfile,
-  loads: JointLoad[],
+  terms: readonly (readonly [CaseLoads | undefined, number])[],
 ): number[] {
-  const result = solveLoads(prepared, loads);
-  const index = prepared.geometry.jointIndex;
-  return profile.bottomChordJoints.map((j) => -result.displacements![index.get(j)!].uy);
+  const result = solveFrame(frame, caseFrameLoads(profile, terms));
+  return profile.bottomChordJoints.map((j) => -result.displacements[frame.jointIndex.get(j)!].uy);
 }
 
 function check(
@@ -65,12 +42,13 @@ function check(
 }
 
 /**
- * Live and total-load deflection by the direct stiffness method with the chosen lumber (axial
- * strain only: no joint slip or creep). Live is the unfactored live case (Lr, S, L or L(bc))
- * that deflects most; total is dead plus that live case. Limits are span/n.
+ * Live and total-load deflection of the bottom-chord panel points from the design frame with
+ * the chosen lumber (the same factorised stiffness as the member forces: axial and bending
+ * strain, no joint slip or creep). Live is the unfactored live case (Lr, S, L or L(bc)) that
+ * deflects most; total is dead plus that live case. Limits are span/n.
  */
 export function designDeflection(
-  prepared: PreparedTruss,
+  frame: PreparedFrame,
   profile: TrussProfile,
   cases: Partial<Record<DesignCaseId, CaseLoads>>,
   limits: { live: number; total: number },
@@ -78,17 +56,17 @@ export function designDeflection(
   let liveCase: DesignCaseId | undefined;
   let liveDrops: number[] | undefined;
   for (const c of LIVE_CASES) {
-    const loads = cases[c]?.jointLoads;
-    if (!loads || loads.length === 0) continue;
-    const drops = bottomChordDrop(prepared, profile, loads);
+    if (!cases[c] || cases[c].jointLoads.length === 0) continue;
+    const drops = bottomChordDrop(frame, profile, [[cases[c], 1]]);
     if (!liveDrops || Math.max(...drops) > Math.max(...liveDrops)) {
       liveCase = c;
       liveDrops = drops;
     }
   }
-  const dead = cases.D?.jointLoads;
-  const totalLoads = sumLoads(dead, liveCase && cases[liveCase]!.jointLoads);
-  const totalDrops = bottomChordDrop(prepared, profile, totalLoads);
+  const totalDrops = bottomChordDrop(frame, profile, [
+    [cases.D, 1],
+    [liveCase && cases[liveCase], 1],
+  ]);
   const liveName = liveCase && LABEL[liveCase]!;
   return {
     ...(liveName && { liveCase: liveName }),

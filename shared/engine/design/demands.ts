@@ -1,12 +1,13 @@
-import { prepareTruss, solveLoads } from '../analysis';
 import type { TrussModel } from '../analysis/types';
+import { solveFrame, type PreparedFrame } from '../frame';
 import type { TrussProfile } from '../profiles/types';
-import { chordBeams, chordMoments } from './chordBending';
 import type { CombinedLoads } from './combinedLoads';
+import { frameLoadsOf } from './frameModel';
 
 /**
- * What every member carries under every combination. Row-major [combination][member]:
- * axial force N (tension +) and in-plane bending moments N·mm (≥ 0; 0 on webs).
+ * What every member carries under every combination, from one frame solution per combination.
+ * Row-major [combination][member]: axial force N (tension +), in-plane bending moments N·mm and
+ * shear N (magnitudes ≥ 0; 0 on the pinned webs).
  */
 export interface MemberDemands {
   combinations: number;
@@ -14,17 +15,19 @@ export interface MemberDemands {
   axial: Float64Array;
   /** Design moment: the larger of `spanMoment` and `supportMoment` (what the member check uses). */
   moment: Float64Array;
-  /** Largest |M| between the member's panel points, from the continuous chord. */
+  /** Largest |M| between the member's ends (at zero shear or under a point load). */
   spanMoment: Float64Array;
-  /** Largest |M| at the member's two panel points (support moments of the continuous chord). */
+  /** Largest |M| at the member's two ends (panel points; 0 at a hinge). */
   supportMoment: Float64Array;
+  /** Largest |V| along the member. */
+  shear: Float64Array;
   /** Reactions per support per combination: [combination][support] rx and ry, N. */
   rx: Float64Array;
   ry: Float64Array;
   supports: string[];
 }
 
-/** The analysis model of a profile: joints, members and supports, no stiffness. */
+/** The pin-jointed model of a profile (method of joints, `analyze`): joints, members, supports. */
 export const profileModel = (profile: TrussProfile): TrussModel => ({
   joints: profile.joints,
   members: profile.members.map((m) => ({ id: m.id, from: m.from, to: m.to })),
@@ -32,14 +35,15 @@ export const profileModel = (profile: TrussProfile): TrussModel => ({
 });
 
 /**
- * Solves every combination once on one prepared truss. The profile is determinate, so member
- * forces do not depend on EA and can be found before any lumber is chosen. Chord bending comes
- * from each chord piece as a continuous beam over its panel points (`chordMoments`), with the
- * overhang as a cantilever beyond the heel and a hinge at the peak and at splices; it is solved
- * for each combination's factored line loads, the same linear combination as the joint loads.
+ * Solves every combination on one factorised design frame (`designFrame`): chords continuous
+ * within each piece, webs pinned, line loads on the chord members, overhangs as heel forces and
+ * moments. Axial forces, moments, shears and reactions all come from that one solution.
  */
-export function memberDemands(profile: TrussProfile, combos: CombinedLoads[]): MemberDemands {
-  const prepared = prepareTruss(profileModel(profile));
+export function memberDemands(
+  profile: TrussProfile,
+  combos: readonly CombinedLoads[],
+  frame: PreparedFrame,
+): MemberDemands {
   const m = profile.members.length;
   const n = combos.length;
   const s = profile.supports.length;
@@ -47,17 +51,22 @@ export function memberDemands(profile: TrussProfile, combos: CombinedLoads[]): M
   const moment = new Float64Array(n * m);
   const spanMoment = new Float64Array(n * m);
   const supportMoment = new Float64Array(n * m);
-  const beams = chordBeams(profile);
-  const bending = { span: spanMoment, support: supportMoment };
+  const shear = new Float64Array(n * m);
   const rx = new Float64Array(n * s);
   const ry = new Float64Array(n * s);
   combos.forEach((c, i) => {
-    const result = solveLoads(prepared, c.jointLoads);
-    chordMoments(beams, c.transverse, c.overhangMoment, bending, i * m);
+    const result = solveFrame(
+      frame,
+      frameLoadsOf(profile, c.jointLoads, c.transverse, c.overhangMoment),
+    );
     for (let k = 0; k < m; k++) {
       const at = i * m + k;
-      axial[at] = result.members[k].force;
-      moment[at] = Math.max(spanMoment[at], supportMoment[at]);
+      const r = result.members[k];
+      axial[at] = r.axial;
+      spanMoment[at] = r.spanMoment;
+      supportMoment[at] = Math.max(Math.abs(r.startMoment), Math.abs(r.endMoment));
+      moment[at] = r.maxMoment;
+      shear[at] = r.maxShear;
     }
     result.reactions.forEach((r, j) => {
       rx[i * s + j] = r.rx;
@@ -71,6 +80,7 @@ export function memberDemands(profile: TrussProfile, combos: CombinedLoads[]): M
     moment,
     spanMoment,
     supportMoment,
+    shear,
     rx,
     ry,
     supports: profile.supports.map((sp) => sp.joint),

@@ -8,22 +8,11 @@ import { KPA_PER_PSF } from '../units';
 import { ENGINE_VERSION } from '../version';
 import { DESIGN_CAUTIONS } from './cautions';
 import { designLoads } from './combinedLoads';
-import { designDeflection, prepareWithStiffness } from './deflection';
-import { memberDemands, type MemberDemands } from './demands';
+import { designDeflection } from './deflection';
+import type { MemberDemands } from './demands';
+import { analyseAndSize, type Sized } from './frameSizing';
 import { designPlates } from './jointPlates';
-import { lumberCandidates } from './lumberChoice';
-import {
-  chooseForGroup,
-  chordRepetitive,
-  criticalCombinations,
-  sizingGroups,
-  sizingOptions,
-  type GroupChoice,
-  type MemberVerdict,
-  type SizingContext,
-  type SizingGroup,
-  type SizingOption,
-} from './sizing';
+import type { GroupChoice, SizingGroup } from './sizing';
 import type {
   DesignBearing,
   DesignCombination,
@@ -36,46 +25,9 @@ import type {
 
 /**
  * Tallest heel analysed as a standard heel: 8 in (common practice). Such a heel is modelled with
- * the pointed line-model heel at the bearing; taller heels get the heel post and heel diagonal.
+ * the pointed line-model heel at the bearing; taller heels get the heel post and heel webs.
  */
 export const STANDARD_HEEL_MAX_MM = 8 * 25.4;
-
-/** The sizing outcome per member index. */
-interface Sized {
-  groups: { group: SizingGroup; choice: GroupChoice }[];
-  lumberOf: string[];
-  bracedOf: boolean[];
-  verdictOf: MemberVerdict[];
-}
-
-function sizeAll(ctx: SizingContext, input: EngineDesignInput, options: DesignOptions): Sized {
-  const m = ctx.profile.members.length;
-  const lumberOf = new Array<string>(m);
-  const bracedOf = new Array<boolean>(m).fill(false);
-  const verdictOf = new Array<MemberVerdict>(m);
-  const candidatesOf = new Map<string, string[]>();
-  const optionsOf = new Map<string, SizingOption[]>();
-  const groups = sizingGroups(ctx.profile).map((group) => {
-    let candidates = candidatesOf.get(group.role);
-    if (!candidates) {
-      candidates = lumberCandidates(group.role, input.lumber, options.defaultLumber);
-      candidatesOf.set(group.role, candidates);
-    }
-    const web = group.role === 'web';
-    const forced = web && group.members.some((k) => ctx.bracedWebs.has(ctx.profile.members[k].id));
-    const key = `${group.role}${forced}`;
-    let tries = optionsOf.get(key);
-    if (!tries) optionsOf.set(key, (tries = sizingOptions(candidates, web, forced)));
-    const choice = chooseForGroup(ctx, group.members, tries);
-    for (const k of group.members) {
-      lumberOf[k] = choice.lumber;
-      bracedOf[k] = choice.braced;
-      verdictOf[k] = choice.verdicts.get(k)!;
-    }
-    return { group, choice };
-  });
-  return { groups, lumberOf, bracedOf, verdictOf };
-}
 
 const bracingText = (role: string, braced: boolean) =>
   role === 'topChord'
@@ -98,8 +50,11 @@ function designMembers(
   return profile.members.map((mb, k) => {
     const forces = combos.map((_, i) => demands.axial[i * m + k]);
     let maxMoment = 0;
-    for (let i = 0; i < combos.length; i++)
+    let maxShear = 0;
+    for (let i = 0; i < combos.length; i++) {
       maxMoment = Math.max(maxMoment, demands.moment[i * m + k]);
+      maxShear = Math.max(maxShear, demands.shear[i * m + k]);
+    }
     const v = sized.verdictOf[k];
     return {
       id: mb.id,
@@ -114,6 +69,7 @@ function designMembers(
       maxTension: Math.max(0, ...forces),
       maxCompression: Math.max(0, ...forces.map((f) => -f)),
       maxMoment,
+      maxShear,
       csi: v.csi,
       governingCombination: combos[v.combination].name,
       governingCheck: v.governing,
@@ -230,28 +186,31 @@ export function designTruss(input: EngineDesignInput, options: DesignOptions = {
       'Standard heel (8 in. or less): analysed with the pointed line-model heel at the bearing.',
     );
   }
+  if (analysedHeel > 0) {
+    notes.push(
+      "Raised heel: a heel post at the bearing with the top chord bearing over it, a heel web from the bearing up to the top chord and a web down to the first bottom-chord panel point; the bottom chord's end panel ties the heel.",
+    );
+  }
   const profile = generateProfile({ ...input.profile, heelHeight: analysedHeel });
   const loads = designLoads(input, profile, options.edition ?? '7-16');
   const combos: DesignCombination[] = loads.combinations.map((c) => ({ name: c.name, cd: c.cd }));
-  const demands = memberDemands(profile, loads.combinations);
-
   const webIds = new Set(profile.members.filter((mb) => mb.role === 'web').map((mb) => mb.id));
   const unknownBraces = input.webBraces.filter((id) => !webIds.has(id));
   if (unknownBraces.length > 0) {
     warnings.push(`Web brace ignored, no such web in this truss: ${unknownBraces.join(', ')}.`);
   }
-  const repetitive = chordRepetitive(input.spacing);
-  const cds = combos.map((c) => c.cd);
-  const ctx: SizingContext = {
+  const { frame, demands, ctx, sized, passes, settled } = analyseAndSize(
     profile,
-    demands,
-    cds,
-    plies: input.plies,
-    repetitive,
-    bracedWebs: new Set(input.webBraces),
-    critical: profile.members.map((_, k) => criticalCombinations(demands, cds, k)),
-  };
-  const sized = sizeAll(ctx, input, options);
+    loads.combinations,
+    input,
+    options,
+  );
+  if (!settled) {
+    warnings.push(
+      `Sizing did not settle in ${passes} frame analyses: the last choice is analysed and ` +
+        'checked as it is; review the chord and web sizes.',
+    );
+  }
   for (const { group, choice } of sized.groups) {
     if (choice.pass) continue;
     const key = group.role === 'web' ? 'webs' : group.role;
@@ -268,8 +227,7 @@ export function designTruss(input: EngineDesignInput, options: DesignOptions = {
         'bottom chord; use a wider bearing or a bearing block.',
     );
   }
-  const stiff = prepareWithStiffness(profile, sized.lumberOf, input.plies);
-  const deflection = designDeflection(stiff, profile, loads.cases, input.deflection);
+  const deflection = designDeflection(frame, profile, loads.cases, input.deflection);
   for (const d of [deflection.live, deflection.total]) {
     if (d && !d.pass) {
       warnings.push(
@@ -289,11 +247,12 @@ export function designTruss(input: EngineDesignInput, options: DesignOptions = {
         ]
       : []),
     'Top chord braced out of plane by the sheathing, bottom chord by the ceiling; webs over their length unless braced.',
-    'Chord bending from each chord piece as a continuous beam on rigid supports at its panel points, the overhang a cantilever beyond the heel; hinges at the peak and at splices (conservative: a splice plate carries no moment). Members are checked with the larger of the span and panel-point moments.',
-    repetitive
+    'Forces, moments and shears from a plane frame (direct stiffness method, each member with its E, A and I): chords continuous through the panel points within each piece of lumber and hinged at splices, at the peak and at the heel (continuous into an overhang), webs pinned at both ends, roof and ceiling loads as line loads on the chord members (live and snow on the horizontal projection, dead along the member). Members are checked with the larger of the span and panel-point moments.',
+    `Frame analysed ${passes === 1 ? 'once' : `${passes} times`}, until the lumber it was analysed with is the lumber sizing chose (stiffness sets the force distribution).`,
+    ctx.repetitive
       ? 'Repetitive member factor Cr = 1.15 on chord bending (spacing 24 in. o.c. or less).'
       : 'No repetitive member factor: spacing over 24 in. o.c.',
-    'Deflection from member axial strain of the line model (no joint slip or creep).',
+    'Deflection of the bottom-chord panel points from the same frame (axial and bending strain; no joint slip or creep).',
     ...(catalog.demo ? [catalog.label] : []),
   );
   const ok =

@@ -66,6 +66,8 @@ export interface PresentedDesign {
     maxTension: number;
     maxCompression: number;
     maxMoment: number;
+    /** Largest shear along the member. */
+    maxShear: number;
     csi: number;
     governingCombination: string;
     governingCheck: string;
@@ -193,6 +195,7 @@ export function presentDesign(design: TrussDesign, units: PresentUnits): Present
       maxTension: force(m.maxTension),
       maxCompression: force(m.maxCompression),
       maxMoment: moment(m.maxMoment),
+      maxShear: force(m.maxShear),
       csi: ratio(m.csi),
       governingCombination: m.governingCombination,
       governingCheck: m.governingCheck,

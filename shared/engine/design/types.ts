@@ -49,6 +49,8 @@ export interface DesignMember {
   maxCompression: number;
   /** Largest in-plane bending moment (in a span or at a panel point) over the combinations, N·mm (≥ 0; chords only). */
   maxMoment: number;
+  /** Largest transverse shear along the member over the combinations, N (≥ 0; chords only). */
+  maxShear: number;
   /** Combined stress index of the governing combination (≤ 1 passes). */
   csi: number;
   /** Name of the governing combination. */

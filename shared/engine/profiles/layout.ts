@@ -1,5 +1,3 @@
-import { EngineError } from '../errors';
-import { MIN_JOINT_ANGLE_DEG, describeLength } from './limits';
 import type { ProfileParams } from './types';
 
 /** A point of the line model, mm. */
@@ -53,9 +51,13 @@ export interface PitchedSpec {
 
 /**
  * Builds a pitched layout from its interior panel points and adds the heels: with heelHeight 0
- * the top and bottom chords meet at the bearing joint; with a raised heel a heel post runs up to
- * the top chord and a heel diagonal from its top to the first interior bottom-chord panel point
- * triangulates the end panel (without it the end panel would be a four-sided mechanism).
+ * the top and bottom chords meet at the bearing joint. A raised heel is built as the trade
+ * builds it (common practice): a heel post stands on the bottom chord at the bearing, the top
+ * chord bears over its top (and runs on into the overhang), a heel web rises from the bearing
+ * to a top-chord panel point a quarter of the way to the first one, and a web from there down
+ * to the first bottom-chord panel point closes the end panel (a quarter keeps both webs steep
+ * enough to plate on a 12 in heel; chosen by trial on the demo catalog). The roof thrust comes down the heel web to the
+ * bearing and the bottom chord's end panel ties it.
  */
 export const pitchedLayout = (spec: PitchedSpec): Layout => {
   const points: Point[] = [];
@@ -67,26 +69,27 @@ export const pitchedLayout = (spec: PitchedSpec): Layout => {
   const bottom = [add(0, 0)];
   for (const x of spec.bottomXs) bottom.push(add(x, spec.bottomY(x)));
   bottom.push(add(span, 0));
-  const firstInterior = bottom[1];
-  const lastInterior = bottom[bottom.length - 2];
   const rightBearing = bottom[bottom.length - 1];
 
-  if (raised) {
-    checkHeelPanel(heelHeight, spec.bottomXs[0]);
-    if (spec.rightEnd === 'heel')
-      checkHeelPanel(heelHeight, span - spec.bottomXs[spec.bottomXs.length - 1]);
-  }
+  // Horizontal run from each raised heel to the heel web's top-chord panel point.
+  const heelRun = (run: number) => run / 4;
+  const topXs = raised
+    ? [
+        heelRun(spec.topXs[0]),
+        ...spec.topXs,
+        ...(spec.rightEnd === 'heel' ? [span - heelRun(span - spec.topXs.at(-1)!)] : []),
+      ]
+    : spec.topXs;
 
   const top: number[] = [];
-  if (raised) {
-    const heel = add(0, heelHeight);
-    top.push(heel);
-    webs.push([bottom[0], heel], [heel, firstInterior]);
-  } else {
-    top.push(bottom[0]);
-  }
-  const topInterior = spec.topXs.map((x) => add(x, spec.topY(x)));
-  top.push(...topInterior);
+  const leftHeel = raised ? add(0, heelHeight) : bottom[0];
+  top.push(leftHeel);
+  const topPoints = topXs.map((x) => add(x, spec.topY(x)));
+  // The spec's webs index its own interior points, after the heel web's point when raised.
+  const topInterior = raised ? topPoints.slice(1, 1 + spec.topXs.length) : topPoints;
+  if (raised)
+    webs.push([bottom[0], leftHeel], [bottom[0], topPoints[0]], [topPoints[0], bottom[1]]);
+  top.push(...topPoints);
   if (spec.rightEnd === 'tallEnd') {
     const end = add(span, spec.topY(span));
     top.push(end);
@@ -94,7 +97,8 @@ export const pitchedLayout = (spec: PitchedSpec): Layout => {
   } else if (raised) {
     const heel = add(span, heelHeight);
     top.push(heel);
-    webs.push([lastInterior, heel], [rightBearing, heel]);
+    const point = topPoints[topPoints.length - 1];
+    webs.push([point, bottom[bottom.length - 2]], [point, rightBearing], [rightBearing, heel]);
   } else {
     top.push(rightBearing);
   }
@@ -107,29 +111,11 @@ export const pitchedLayout = (spec: PitchedSpec): Layout => {
     top,
     bottom,
     webs,
-    // +1: position 0 of each chord list is the heel.
-    topBreaks: spec.peak === undefined ? [] : [spec.peak + 1],
+    // +1: position 0 of each chord list is the heel (+1 more for a raised heel's web point).
+    topBreaks: spec.peak === undefined ? [] : [spec.peak + (raised ? 2 : 1)],
     bottomBreaks: spec.bottomPeak === undefined ? [] : [spec.bottomPeak + 1],
     rise: spec.rise,
   };
-};
-
-/**
- * The heel diagonal meets the bottom chord at atan(heel / run); a heel too low for the run makes a
- * sliver panel. Caught here, before the general joint-angle check, to say which heel would do.
- */
-const checkHeelPanel = (heelHeight: number, run: number): void => {
-  const tan = Math.tan((MIN_JOINT_ANGLE_DEG * Math.PI) / 180);
-  if (heelHeight >= run * tan) return;
-  // Suggest a heel rounded up to the next half inch, the way the trade measures it.
-  const suggestion = Math.ceil((run * tan) / 12.7) * 12.7;
-  throw new EngineError(
-    'geometry',
-    `A raised heel of ${describeLength(heelHeight)} is too low for this span: the end panel ` +
-      `would be a sliver. Use a heel of at least ${describeLength(suggestion)}, or 0 for a ` +
-      `pointed heel.`,
-    { field: 'heelHeight', value: heelHeight, min: suggestion },
-  );
 };
 
 /** Top chord line of a symmetric pitched truss: heel height plus slope × distance to the nearer heel. */

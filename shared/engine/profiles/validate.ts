@@ -1,4 +1,5 @@
 import { EngineError } from '../errors';
+import { TOLERANCE } from '../units';
 import {
   DEFAULT_STOCK_LENGTH,
   FLAT_DEPTH_RANGE,
@@ -27,7 +28,10 @@ const requireFinite = (field: string, value: unknown, what: string): number => {
 };
 
 const requireLengthIn = (field: string, value: number, range: Range, what: string): void => {
-  if (value < range.min || value > range.max) {
+  // The engine's one tolerance: a limit reached through a unit conversion (4 ft = 1219.2 mm)
+  // may arrive a rounding error outside it.
+  const slack = TOLERANCE * Math.max(Math.abs(range.min), Math.abs(range.max));
+  if (value < range.min - slack || value > range.max + slack) {
     fail(
       `${what} ${describeLength(value)} is outside the allowed ${describeLength(range.min)} – ` +
         `${describeLength(range.max)}.`,

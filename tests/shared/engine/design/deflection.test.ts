@@ -1,7 +1,14 @@
 import { describe, expect, it } from 'vitest';
-import { solveLoads, unitLoadDeflection } from '../../../../shared/engine/analysis';
+import { prepareTruss, solveLoads, unitLoadDeflection } from '../../../../shared/engine/analysis';
 import { designLoads } from '../../../../shared/engine/design/combinedLoads';
-import { axialStiffness, prepareWithStiffness } from '../../../../shared/engine/design/deflection';
+import { axialStiffness } from '../../../../shared/engine/design/deflection';
+import { profileModel } from '../../../../shared/engine/design/demands';
+import {
+  caseFrameLoads,
+  designFrame,
+  memberSection,
+} from '../../../../shared/engine/design/frameModel';
+import { prepareFrame, solveFrame } from '../../../../shared/engine/frame';
 import { designTruss } from '../../../../shared/engine/design';
 import { designValues, sectionProperties } from '../../../../shared/engine/lumber';
 import { generateProfile } from '../../../../shared/engine/profiles';
@@ -29,23 +36,58 @@ describe('deflection', () => {
     expect(d.deflection.total.limit).toBe(180);
   });
 
-  it('the stiffness Δ at each bottom-chord joint equals the unit-load (virtual work) Δ', () => {
-    const prepared = prepareWithStiffness(
+  it('reports the frame Δ of D + S with the designed lumber at every bottom-chord joint', () => {
+    const frame = designFrame(
       profile,
       d.members.map((m) => m.lumber),
       input.plies,
     );
-    const loads = [...cases.D!.jointLoads, ...cases.S!.jointLoads];
-    const result = solveLoads(prepared, loads);
-    // A Fink's bottom chord has panel points at the third-points (B, C), nearest mid-span.
+    const result = solveFrame(
+      frame,
+      caseFrameLoads(profile, [
+        [cases.D, 1],
+        [cases.S, 1],
+      ]),
+    );
     for (const joint of profile.bottomChordJoints) {
-      const virtualWork = unitLoadDeflection(prepared, result.members, joint, 'y');
-      const stiffness = result.displacements!.find((u) => u.joint === joint)!.uy;
-      expect(stiffness).toBeWithin(virtualWork, { rel: 1e-9, abs: 1e-12 });
+      const uy = result.displacements.find((u) => u.joint === joint)!.uy;
       const reported = d.deflection.bottomChord.find((b) => b.joint === joint)!;
-      expect(reported.total).toBeWithin(-virtualWork, { rel: 1e-9, abs: 1e-12 });
+      expect(reported.total).toBeWithin(-uy, { rel: 1e-12, abs: 1e-12 });
     }
     expect(d.deflection.total.max).toBeGreaterThan(0);
+  });
+
+  it('with every moment released the frame Δ is the unit-load (virtual work) Δ of the truss', () => {
+    const lumber = d.members.map((m) => m.lumber);
+    const frame = prepareFrame({
+      joints: profile.joints,
+      supports: profile.supports,
+      members: profile.members.map((m, k) => ({
+        id: m.id,
+        from: m.from,
+        to: m.to,
+        ...memberSection(lumber[k], input.plies),
+        releaseStart: true,
+        releaseEnd: true,
+      })),
+    });
+    const loads = [...cases.D!.jointLoads, ...cases.S!.jointLoads];
+    const truss = prepareTruss({
+      ...profileModel(profile),
+      members: profile.members.map((m, k) => ({
+        id: m.id,
+        from: m.from,
+        to: m.to,
+        ea: axialStiffness(lumber[k], input.plies),
+      })),
+    });
+    const forces = solveLoads(truss, loads).members;
+    const frameResult = solveFrame(frame, { joints: loads });
+    for (const joint of profile.bottomChordJoints) {
+      const virtualWork = unitLoadDeflection(truss, forces, joint, 'y');
+      const uy = frameResult.displacements.find((u) => u.joint === joint)!.uy;
+      expect(uy).toBeWithin(virtualWork, { rel: 1e-9, abs: 1e-12 });
+    }
   });
 
   it('reports the largest drop, where, span/Δ and the pass against span/n', () => {

@@ -9,6 +9,7 @@ import {
   sizingOptions,
   type SizingContext,
 } from '../../../../shared/engine/design/sizing';
+import { designFrame } from '../../../../shared/engine/design/frameModel';
 import { lumberCandidates } from '../../../../shared/engine/design/lumberChoice';
 import { generateProfile } from '../../../../shared/engine/profiles';
 import type { TrussProfile } from '../../../../shared/engine/profiles/types';
@@ -33,6 +34,7 @@ function context(axial: number[][], moment: number[][], cds: number[]): SizingCo
     moment: Float64Array.from(moment.flat()),
     spanMoment: Float64Array.from(moment.flat()),
     supportMoment: new Float64Array(moment.flat().length),
+    shear: new Float64Array(moment.flat().length),
     rx: new Float64Array(2 * cds.length),
     ry: new Float64Array(2 * cds.length),
     supports: ['A', 'D'],
@@ -148,7 +150,11 @@ describe('memberDemands', () => {
       transverse: new Float64Array(m),
       overhangMoment: new Float64Array(m),
     });
-    const d = memberDemands(profile, [combo(1000), combo(3000)]);
+    const d = memberDemands(
+      profile,
+      [combo(1000), combo(3000)],
+      designFrame(profile, new Array<string>(m).fill('2x4 SPF-1/2'), 1),
+    );
     for (let k = 0; k < m; k++) {
       expect(d.axial[m + k]).toBeWithin(3 * d.axial[k], { rel: 1e-9, abs: 1e-9 });
     }

@@ -38,7 +38,7 @@ describe('fink', () => {
     expect(len('AE')).toBeWithin(6 * Math.sqrt(1 + 1 / 9), { rel: 1e-12 });
   });
 
-  it('raised heel: heel post plus heel diagonal to the first bottom third-point', () => {
+  it('raised heel: heel post, heel web from the bearing, web down to the first third-point', () => {
     const p = generateProfile({
       kind: 'fink',
       span: 24 * FT,
@@ -47,9 +47,12 @@ describe('fink', () => {
       overhangLeft: 0,
       overhangRight: 0,
     });
-    const heel = p.topChordJoints[0];
-    const webs = p.members.filter((m) => m.role === 'web').map((m) => m.id);
-    expect(webs.slice(0, 2)).toEqual([`A${heel}`, `B${heel}`]);
+    const [heel, point] = p.topChordJoints;
+    const at = new Map(p.joints.map((j) => [j.id, j]));
+    // The heel web's top-chord point sits a quarter of the way to the first quarter-point (L/4).
+    expect(at.get(point)!.x).toBeWithin((24 * FT) / 16, { rel: 1e-12 });
+    const webs = new Set(p.members.filter((m) => m.role === 'web').map((m) => m.id));
+    for (const id of [`A${heel}`, `A${point}`, `B${point}`]) expect(webs.has(id)).toBe(true);
     expect(p.rise).toBeWithin(5 * FT);
   });
 });

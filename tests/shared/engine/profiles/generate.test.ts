@@ -309,9 +309,10 @@ describe('generateProfile: web layouts', () => {
       const p = generateProfile(base(kind, { heelHeight: 0 }));
       const count = (role: string) => p.members.filter((m) => m.role === role).length;
       expect([count('web'), count('topChord'), count('bottomChord')]).toEqual([webs, tc, bc]);
-      // A raised heel adds a heel post and a heel diagonal at each heel (mono: at the low heel).
+      // A raised heel adds a heel post, a heel web and a web closing the end panel at each heel
+      // (mono: at the low heel).
       const raised = generateProfile(base(kind, { heelHeight: 12 * IN }));
-      const extra = kind === 'mono' ? 2 : 4;
+      const extra = kind === 'mono' ? 3 : 6;
       expect(raised.members.filter((m) => m.role === 'web').length).toBe(webs + extra);
     },
   );

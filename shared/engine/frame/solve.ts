@@ -1,0 +1,216 @@
+import { choleskySolve } from '../analysis/dense';
+import { RESIDUAL_LIMIT } from '../analysis/solve';
+import { EngineError } from '../errors';
+import { addPointFixedEnd, addUniformFixedEnd, alongMember, type LocalPoint } from './element';
+import type { PreparedFrame } from './prepare';
+import type { FrameLoads, FrameMemberResult, FrameResult } from './types';
+
+/** Local loads of one member collected from a load set. */
+interface Local {
+  px: Float64Array;
+  py: Float64Array;
+  points: Map<number, LocalPoint[]>;
+  q0: Float64Array;
+}
+
+/** +1 when the member's local y points to its downward side (away from +y), else −1. */
+const downSign = (c: number, s: number) => {
+  // Local y = (−s, c); the downward normal has y < 0, or x > 0 on a vertical member.
+  const yDown = c < 0 || (c === 0 && -s > 0);
+  return yDown ? 1 : -1;
+};
+
+function localLoads(p: PreparedFrame, loads: FrameLoads): Local {
+  const nm = p.from.length;
+  const out: Local = {
+    px: new Float64Array(nm),
+    py: new Float64Array(nm),
+    points: new Map(),
+    q0: new Float64Array(6 * nm),
+  };
+  for (const l of loads.members ?? []) {
+    const e = p.memberIndex.get(l.member);
+    if (e === undefined) {
+      throw new EngineError('invalid', `A load is on member "${l.member}", which does not exist.`, {
+        member: l.member,
+      });
+    }
+    const c = p.cos[e];
+    const s = p.sin[e];
+    const L = p.length[e];
+    if (l.kind === 'uniform') {
+      const scale = l.per === 'horizontal' ? Math.abs(c) : 1;
+      const wx = (l.wx ?? 0) * scale;
+      const wy = (l.wy ?? 0) * scale;
+      const px = wx * c + wy * s + (l.axial ?? 0);
+      const py = -wx * s + wy * c + downSign(c, s) * (l.transverse ?? 0);
+      if (![px, py].every(Number.isFinite)) {
+        throw new EngineError('invalid', `The load on member "${l.member}" is not finite.`, {
+          member: l.member,
+        });
+      }
+      out.px[e] += px;
+      out.py[e] += py;
+      addUniformFixedEnd(out.q0, 6 * e, L, px, py);
+    } else {
+      const fx = l.fx ?? 0;
+      const fy = l.fy ?? 0;
+      if (!(l.at >= 0 && l.at <= L) || ![fx, fy].every(Number.isFinite)) {
+        throw new EngineError(
+          'invalid',
+          `A point load on member "${l.member}" must be finite and lie on the member (0–${L.toFixed(0)} mm).`,
+          { member: l.member, at: l.at },
+        );
+      }
+      const px = fx * c + fy * s;
+      const py = -fx * s + fy * c;
+      addPointFixedEnd(out.q0, 6 * e, L, l.at, px, py);
+      const list = out.points.get(e) ?? [];
+      list.push({ a: l.at, py });
+      out.points.set(e, list);
+    }
+  }
+  return out;
+}
+
+/**
+ * Solves one load set on a prepared frame (one forward/back substitution on the stored factors):
+ * joint displacements, member end forces from k·u plus the fixed-end forces of the member loads,
+ * moments and shears along each member, reactions, and an equilibrium check at every free
+ * degree of freedom. Throws EngineError `invalid` for a load on an unknown joint or member, and
+ * `unstable` when the check fails.
+ */
+export function solveFrame(p: PreparedFrame, loads: FrameLoads): FrameResult {
+  const nj = p.model.joints.length;
+  const nm = p.from.length;
+  const nodal = new Float64Array(3 * nj);
+  let largest = 0;
+  for (const l of loads.joints ?? []) {
+    const j = p.jointIndex.get(l.joint);
+    const f = [l.fx ?? 0, l.fy ?? 0, l.m ?? 0];
+    if (j === undefined || !f.every(Number.isFinite)) {
+      throw new EngineError('invalid', `Invalid load at joint "${l.joint}".`, { joint: l.joint });
+    }
+    nodal[3 * j] += f[0];
+    nodal[3 * j + 1] += f[1];
+    nodal[3 * j + 2] += f[2];
+  }
+  const local = localLoads(p, loads);
+  // Equivalent joint loads: −Tᵀ·G·q₀ of every loaded member.
+  const q = new Float64Array(6 * nm);
+  const rhsFull = Float64Array.from(nodal);
+  for (let e = 0; e < nm; e++) {
+    const at = 6 * e;
+    for (let r = 0; r < 6; r++) {
+      let v = 0;
+      for (let c = 0; c < 6; c++) v += p.g[36 * e + r * 6 + c] * local.q0[at + c];
+      q[at + r] = v;
+    }
+    scatter(p, e, q, at, rhsFull, -1);
+  }
+  for (let d = 0; d < rhsFull.length; d++) {
+    if (d % 3 === 2) largest = Math.max(largest, Math.abs(rhsFull[d]) / p.size);
+    else largest = Math.max(largest, Math.abs(rhsFull[d]));
+  }
+  const n = p.factors.n;
+  const rhs = new Float64Array(n);
+  for (let d = 0; d < p.free.length; d++) if (p.free[d] >= 0) rhs[p.free[d]] = rhsFull[d];
+  const uFree = new Float64Array(n);
+  choleskySolve(p.factors, rhs, uFree);
+  const u = new Float64Array(3 * nj);
+  for (let d = 0; d < u.length; d++) if (p.free[d] >= 0) u[d] = uFree[p.free[d]];
+
+  // q = k*·T·u + G·q₀ per member. Σ Tᵀ·q − loads is 0 at a free dof and the reaction at a
+  // restrained one.
+  const balance = Float64Array.from(nodal, (v) => -v);
+  const members: FrameMemberResult[] = new Array(nm);
+  const ul = new Float64Array(6);
+  for (let e = 0; e < nm; e++) {
+    const at = 6 * e;
+    const c = p.cos[e];
+    const s = p.sin[e];
+    for (const [end, j] of [
+      [0, p.from[e]],
+      [3, p.to[e]],
+    ] as const) {
+      ul[end] = c * u[3 * j] + s * u[3 * j + 1];
+      ul[end + 1] = -s * u[3 * j] + c * u[3 * j + 1];
+      ul[end + 2] = u[3 * j + 2];
+    }
+    for (let r = 0; r < 6; r++) {
+      let v = q[at + r];
+      for (let col = 0; col < 6; col++) v += p.k[36 * e + r * 6 + col] * ul[col];
+      q[at + r] = v;
+    }
+    scatter(p, e, q, at, balance, 1);
+    const L = p.length[e];
+    const along = alongMember(q, at, L, local.py[e], local.points.get(e) ?? []);
+    const sign = downSign(c, s);
+    // Sagging about local y is tension on the −y face; flip when local y points down.
+    members[e] = {
+      id: p.model.members[e].id,
+      axial: (q[at + 3] - q[at]) / 2,
+      startMoment: -sign * -q[at + 2],
+      endMoment: -sign * q[at + 5],
+      spanMoment: along.spanMoment,
+      maxMoment: along.maxMoment,
+      startShear: Math.abs(q[at + 1]),
+      endShear: Math.abs(q[at + 4]),
+      maxShear: along.maxShear,
+    };
+  }
+  let residual = 0;
+  for (let d = 0; d < balance.length; d++) {
+    if (p.free[d] < 0) continue;
+    const v = Math.abs(balance[d]) / (d % 3 === 2 ? p.size : 1);
+    residual = Math.max(residual, v);
+  }
+  residual /= Math.max(1, largest);
+  if (!(residual <= RESIDUAL_LIMIT)) {
+    throw new EngineError(
+      'unstable',
+      `The frame's equilibrium check failed (residual ${residual.toExponential(2)}): it is too ` +
+        'close to a mechanism to analyse reliably.',
+      { residual },
+    );
+  }
+  return {
+    members,
+    reactions: p.supports.map((sp) => {
+      const j = p.jointIndex.get(sp.joint)!;
+      return {
+        joint: sp.joint,
+        rx: sp.x ? balance[3 * j] : 0,
+        ry: sp.y ? balance[3 * j + 1] : 0,
+      };
+    }),
+    displacements: p.model.joints.map((jt, j) => ({
+      joint: jt.id,
+      ux: u[3 * j],
+      uy: u[3 * j + 1],
+      rz: u[3 * j + 2],
+    })),
+    residual,
+  };
+}
+
+/** Adds sign·Tᵀ·q (member end forces, global) of member e into the joint vector `into`. */
+function scatter(
+  p: PreparedFrame,
+  e: number,
+  q: Float64Array,
+  at: number,
+  into: Float64Array,
+  sign: number,
+) {
+  const c = p.cos[e];
+  const s = p.sin[e];
+  for (const [end, j] of [
+    [0, p.from[e]],
+    [3, p.to[e]],
+  ] as const) {
+    into[3 * j] += sign * (c * q[at + end] - s * q[at + end + 1]);
+    into[3 * j + 1] += sign * (s * q[at + end] + c * q[at + end + 1]);
+    into[3 * j + 2] += sign * q[at + end + 2];
+  }
+}
