@@ -288,6 +288,7 @@ export function designTruss(input: EngineDesignInput, options: DesignOptions = {
           `Roof snow ps = ${loads.snow.toFixed(3)} kPa (${(loads.snow / KPA_PER_PSF).toFixed(1)} psf) from the ground snow load, ASCE ${loads.edition}.`,
         ]
       : []),
+    ...loads.notes,
     'Top chord braced out of plane by the sheathing, bottom chord by the ceiling; webs over their length unless braced.',
     'Chord bending from each chord piece as a continuous beam on rigid supports at its panel points, the overhang a cantilever beyond the heel; hinges at the peak and at splices (conservative: a splice plate carries no moment). Members are checked with the larger of the span and panel-point moments.',
     repetitive

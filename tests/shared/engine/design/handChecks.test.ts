@@ -139,9 +139,7 @@ describe('spacing over 24 in. o.c.: no repetitive member factor (NDS 2018 4.3.9)
     engineInput(lightFink({ lumber, loads: { tcll: 20, tcdl: 10, bcll: 0, bcdl: 10 } })),
   );
   const at48 = designTruss(
-    engineInput(
-      lightFink({ lumber, spacing: 48, loads: { tcll: 10, tcdl: 5, bcll: 0, bcdl: 5 } }),
-    ),
+    engineInput(lightFink({ lumber, spacing: 48, loads: { tcll: 10, tcdl: 5, bcll: 0, bcdl: 5 } })),
   );
 
   it('carries the same forces', () => {
@@ -173,5 +171,93 @@ describe('spacing over 24 in. o.c.: no repetitive member factor (NDS 2018 4.3.9)
     });
     expect(at48.notes.join(' ')).toMatch(/No repetitive member factor/);
     expect(at24.notes.join(' ')).toMatch(/Cr = 1\.15/);
+  });
+});
+
+describe('minimum and unbalanced snow on the design (ASCE 7-16 §7.3.4, §7.6.1), by hand', () => {
+  it('a 3/12 roof with pg = 15 psf carries pm = 15 psf, not pf = 10.5 psf', () => {
+    const d = designTruss(
+      engineInput(
+        lightFink({ pitch: 3, loads: { tcll: 0, tcdl: 10, bcll: 0, bcdl: 10, snow: { pg: 15 } } }),
+      ),
+    );
+    expect(reaction(d, 'D + S') - reaction(d, 'D')).toBeWithin((15 * SPACING_FT * 26) / 2, {
+      rel: 1e-6,
+    });
+    expect(d.notes.join(' ')).toMatch(/Minimum roof snow pm = 15\.0 psf/);
+  });
+
+  it('40 ft 6/12 Fink, pg = 30: unbalanced reactions by statics, both directions', () => {
+    const d = designTruss(
+      engineInput({
+        units: 'imperial',
+        profile: 'fink',
+        span: 40 * 12,
+        pitch: 6,
+        overhang: 0,
+        loads: { tcll: 0, tcdl: 10, bcll: 0, bcdl: 10, snow: { pg: 30 } },
+      }),
+    );
+    // Wind from the left: 6.3 psf on x = 0–20 ft, 21 psf on 20–40 ft, surcharge
+    // hd·γ/√2 over 8·hd·√2/3 from the ridge (see tests/shared/engine/loads/snowCases.test.ts).
+    const hd = 0.43 * Math.cbrt(20) * 40 ** 0.25 - 1.5;
+    const q = (hd * 17.9) / Math.SQRT2;
+    const e = (8 * hd * Math.SQRT2) / 3;
+    const loads: [number, number][] = [
+      [6.3 * SPACING_FT * 20, 10],
+      [21 * SPACING_FT * 20, 30],
+      [q * SPACING_FT * e, 20 + e / 2],
+    ];
+    const total = loads.reduce((s, [f]) => s + f, 0);
+    const right = loads.reduce((s, [f, x]) => s + (f * x) / 40, 0);
+    const left = total - right;
+    const i = combo(d, 'D + S[unbal. L]');
+    const j = combo(d, 'D + S[unbal. R]');
+    const dead = d.combinations.findIndex((c) => c.name === 'D');
+    const r = (k: number, at: number) =>
+      lb(d.reactions[k].vertical[at] - d.reactions[k].vertical[dead]);
+    expect(r(0, i)).toBeWithin(left, { rel: 1e-6 });
+    expect(r(1, i)).toBeWithin(right, { rel: 1e-6 });
+    expect(r(0, j)).toBeWithin(right, { rel: 1e-6 });
+    expect(r(1, j)).toBeWithin(left, { rel: 1e-6 });
+    expect(d.combinations.map((c) => c.name)).toContain('D + S');
+  });
+});
+
+describe('wind on the design (ASCE 7-16 Ch. 28 envelope), by hand', () => {
+  it('24 ft 4/12 Fink, no overhang, 115 mph, exposure C, h = 15 ft: case A from the left, +GCpi', () => {
+    const d = designTruss(
+      engineInput(
+        lightFink({
+          overhang: 0,
+          loads: {
+            tcll: 20,
+            tcdl: 10,
+            bcll: 0,
+            bcdl: 10,
+            wind: { speed: 115, exposure: 'C', meanRoofHeight: 15 * 12 },
+          },
+        }),
+      ),
+    );
+    const qh = 0.00256 * 2.01 * (15 / 900) ** (2 / 9.5) * 0.85 * 115 ** 2; // psf
+    const theta = (Math.atan(4 / 12) * 180) / Math.PI;
+    const zone3 = -0.37 - (0.11 * (theta - 5)) / 15;
+    const pw = qh * (-0.69 - 0.18); // net, + toward the roof
+    const pl = qh * (zone3 - 0.18);
+    // Normal pressure on a slope: its vertical part per unit horizontal run is p; its horizontal
+    // part per unit rise is p. Run 12 ft each side, rise 4 ft, spacing 2 ft.
+    const up = -(pw + pl) * 12 * SPACING_FT;
+    const i = combo(d, 'D + 0.6W[AL+]');
+    const dead = combo(d, 'D');
+    const sumV = (k: number) => lb(d.reactions[0].vertical[k] + d.reactions[1].vertical[k]);
+    expect(sumV(dead) - sumV(i)).toBeWithin(0.6 * up, { rel: 1e-6 });
+    // Horizontal: windward suction pulls the left slope up-left, leeward suction the right slope
+    // up-right; the pin at the left heel takes the difference.
+    const fx = (pw - pl) * 4 * SPACING_FT; // |pw|·rise toward −x, |pl|·rise toward +x
+    const h = d.reactions.reduce((s, r) => s + lb(r.horizontal[i]), 0);
+    expect(h).toBeWithin(-0.6 * fx, { rel: 1e-6 });
+    expect(d.notes.join(' ')).toMatch(/Ch\. 28 envelope/);
+    expect(d.combinations.filter((c) => /W\[/.test(c.name)).length).toBeGreaterThanOrEqual(16);
   });
 });
