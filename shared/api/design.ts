@@ -52,6 +52,18 @@ const lumberChoice = z.union([
   z.array(lumberId).min(1, 'Allow at least one lumber size and grade'),
 ]);
 
+/**
+ * Wind site data for the ASCE 7-16 Ch. 28 envelope cases: basic wind speed (mph imperial, m/s
+ * metric), exposure B/C/D, mean roof height (in or mm), optional Kzt and ground elevation (ft or m).
+ */
+const windSchema = z.object({
+  speed: num('Wind speed'),
+  exposure: z.enum(['B', 'C', 'D'], { error: 'Wind exposure must be B, C or D' }),
+  meanRoofHeight: num('Mean roof height'),
+  kzt: num('Topographic factor Kzt').optional(),
+  groundElevation: num('Ground elevation').optional(),
+});
+
 const baseSchema = z.object({
   units: z.enum(['imperial', 'metric'], { error: 'Units must be imperial or metric' }),
   profile: z.enum(PROFILE_KINDS, {
@@ -96,9 +108,11 @@ const baseSchema = z.object({
           edition: z
             .enum(SNOW_EDITIONS, { error: 'ASCE 7 edition must be 7-16 or 7-22' })
             .optional(),
+          unbalanced: z.boolean({ error: 'Unbalanced snow must be yes or no' }).optional(),
         })
         .optional(),
       windUplift: num('Wind uplift').optional(),
+      wind: windSchema.optional(),
     },
     { error: 'Enter the design loads (TCLL, TCDL, BCLL, BCDL)' },
   ),
@@ -242,6 +256,28 @@ const checkRanges = (v: Base, ctx: z.RefinementCtx): void => {
   for (const key of ['tcll', 'tcdl', 'bcll', 'bcdl', 'bcllNonConcurrent', 'windUplift'] as const) {
     within(['loads', key], v.loads[key], LIMITS.areaLoad, LOAD_LABELS[key]);
   }
+  const wind = v.loads.wind;
+  if (wind) {
+    // 85–200 mph: the ASCE 7-16 Fig. 26.5-1 maps' range, about (from memory); h ≤ 60 ft for Ch. 28.
+    const [vlo, vhi, vu] = v.units === 'imperial' ? [85, 200, 'mph'] : [38, 89, 'm/s'];
+    if (wind.speed < vlo || wind.speed > vhi) {
+      ctx.addIssue({
+        code: 'custom',
+        path: ['loads', 'wind', 'speed'],
+        message: `Wind speed must be between ${vlo} and ${vhi} ${vu}`,
+      });
+    }
+    const [hlo, hhi, hu] =
+      v.units === 'imperial' ? [96, 720, ['8 ft', '60 ft']] : [2400, 18300, ['2.4 m', '18.3 m']];
+    if (wind.meanRoofHeight < hlo || wind.meanRoofHeight > hhi) {
+      ctx.addIssue({
+        code: 'custom',
+        path: ['loads', 'wind', 'meanRoofHeight'],
+        message: `Mean roof height must be between ${hu[0]} and ${hu[1]} (low-rise buildings)`,
+      });
+    }
+    factor(['loads', 'wind', 'kzt'], wind.kzt, 1, 3, 'Topographic factor Kzt');
+  }
   const snow = v.loads.snow;
   if (snow) {
     within(['loads', 'snow', 'pg'], snow.pg, LIMITS.snowLoad);
@@ -337,6 +373,19 @@ export const toEngineInput = (input: DesignInput): EngineDesignInput => {
           is: snow.is ?? 1,
           slippery: snow.slippery ?? false,
           edition: snow.edition ?? '7-16',
+          ...(snow.unbalanced !== undefined && { unbalanced: snow.unbalanced }),
+        },
+      }),
+      ...(input.loads.wind && {
+        wind: {
+          // mph → m/s (exact: 1 mph = 0.44704 m/s); heights in, mm; elevation ft or m → mm.
+          speed: imperial ? input.loads.wind.speed * 0.44704 : input.loads.wind.speed,
+          exposure: input.loads.wind.exposure,
+          meanRoofHeight: len(input.loads.wind.meanRoofHeight),
+          ...(input.loads.wind.kzt !== undefined && { kzt: input.loads.wind.kzt }),
+          ...(input.loads.wind.groundElevation !== undefined && {
+            groundElevation: mm(input.loads.wind.groundElevation * (imperial ? 304.8 : 1000)),
+          }),
         },
       }),
       ...(input.loads.windUplift !== undefined && { windUplift: optArea(input.loads.windUplift) }),

@@ -1,19 +1,21 @@
 import type { EngineDesignInput } from './input';
 import type { JointLoad } from '../analysis/types';
 import {
+  LOAD_CASES as LOAD_CASE_IDS,
   areaLoadCases,
+  designRoofSnowLoad,
   loadCombinations,
-  slopedRoofSnowLoad,
   type AreaLoads,
   type AsceEdition,
   type CaseLoads,
   type LoadCaseId,
 } from '../loads';
 import type { TrussProfile } from '../profiles/types';
-import { kpa, type KPa } from '../units';
+import { KPA_PER_PSF, kpa, type KPa } from '../units';
+import { expandCombinations, extraCaseLabel, extraCases, type ExtraCaseId } from './extraCases';
 
 /** A load case of the design: the five ASCE cases, plus the non-concurrent attic live load. */
-export type DesignCaseId = LoadCaseId | 'Lbc';
+export type DesignCaseId = LoadCaseId | 'Lbc' | ExtraCaseId;
 
 /** A combination ready to solve: factored case loads summed, per member and per joint. */
 export interface CombinedLoads {
@@ -34,6 +36,8 @@ export interface DesignLoads {
   /** Sloped-roof snow ps used, kPa, when ground snow was given. */
   snow?: KPa;
   edition: AsceEdition;
+  /** What the loads assumed beyond the basic cases (minimum snow, unbalanced snow, wind). */
+  notes: string[];
 }
 
 // The engine input carries area loads in N/mm²; the loads module speaks kPa (1 N/mm² = 1000 kPa).
@@ -44,7 +48,7 @@ const toKpa = (nPerMm2: number | undefined) =>
 const roofSlopeDeg = (profile: TrussProfile) =>
   profile.params.kind === 'flat' ? 0 : (Math.atan(profile.params.pitch / 12) * 180) / Math.PI;
 
-const LABEL: Record<DesignCaseId, string> = {
+const LABEL: Record<LoadCaseId | 'Lbc', string> = {
   D: 'D',
   L: 'L',
   Lr: 'Lr',
@@ -55,7 +59,12 @@ const LABEL: Record<DesignCaseId, string> = {
 
 /** Name of a combination from its terms, in the order the loads module writes them. */
 const nameOf = (terms: [DesignCaseId, number][]) =>
-  terms.map(([c, f]) => (f === 1 ? LABEL[c] : `${f}${LABEL[c]}`)).join(' + ');
+  terms
+    .map(([c, f]) => {
+      const label = c in LABEL ? LABEL[c as keyof typeof LABEL] : extraCaseLabel(c as ExtraCaseId);
+      return f === 1 ? label : `${f}${label}`;
+    })
+    .join(' + ');
 
 /**
  * Area loads × spacing to per-case truss loads, snow from ground snow (ASCE 7 ps with the
@@ -69,17 +78,25 @@ export function designLoads(
 ): DesignLoads {
   const { loads } = input;
   const edition = loads.snow?.edition ?? defaultEdition;
-  const snow = loads.snow
-    ? slopedRoofSnowLoad({
+  const slopeDeg = roofSlopeDeg(profile);
+  const notes: string[] = [];
+  const roofSnow = loads.snow
+    ? designRoofSnowLoad({
         pg: toKpa(loads.snow.pg)!,
         ce: loads.snow.ce,
         ct: loads.snow.ct,
         is: loads.snow.is,
         edition,
-        slopeDeg: roofSlopeDeg(profile),
+        slopeDeg,
         slippery: loads.snow.slippery,
       })
     : undefined;
+  const snow = roofSnow && kpa(Math.max(roofSnow.ps, roofSnow.pm));
+  if (roofSnow?.governs === 'pm') {
+    notes.push(
+      `Minimum roof snow pm = ${(roofSnow.pm / KPA_PER_PSF).toFixed(1)} psf governs over ps = ${(roofSnow.ps / KPA_PER_PSF).toFixed(1)} psf (ASCE ${edition} minimum snow load, slope under 15°).`,
+    );
+  }
   const area: AreaLoads = {
     tcll: toKpa(loads.tcll),
     tcdl: toKpa(loads.tcdl),
@@ -97,14 +114,21 @@ export function designLoads(
   if (nonConcurrent > 0) {
     cases.Lbc = areaLoadCases(profile, input.spacing, { bcll: toKpa(nonConcurrent) }).L;
   }
-  const present = (Object.keys(cases) as DesignCaseId[]).filter(
-    (c): c is LoadCaseId => c !== 'Lbc',
+  const extra = extraCases(input, profile, roofSnow?.ps, slopeDeg);
+  Object.assign(cases, extra.cases);
+  notes.push(...extra.notes);
+  const present = (Object.keys(cases) as DesignCaseId[]).filter((c): c is LoadCaseId =>
+    (LOAD_CASE_IDS as readonly string[]).includes(c),
   );
-  const combos = loadCombinations(present, { edition }).map((c) => ({
+  if (extra.wind.length > 0) present.push('W');
+  const basic = loadCombinations(present, { edition }).map((c) => ({
     name: c.name,
     cd: c.cd,
     terms: Object.entries(c.factors) as [DesignCaseId, number][],
   }));
+  const combos = expandCombinations(basic, extra, cases.W !== undefined).map((c) =>
+    c.terms.some(([k]) => !(k in LABEL)) ? { ...c, name: nameOf(c.terms) } : c,
+  );
   if (cases.Lbc) {
     // Attic live, ten-year duration (NDS 2018 Table 2.3.2): CD 1.0, alone with dead load.
     const terms: [DesignCaseId, number][] = [
@@ -119,6 +143,7 @@ export function designLoads(
     combinations: combos.map((c) => combine(c, cases, memberIndex, profile.members.length)),
     ...(snow !== undefined && { snow }),
     edition,
+    notes,
   };
 }
 

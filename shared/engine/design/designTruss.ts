@@ -246,6 +246,7 @@ export function designTruss(input: EngineDesignInput, options: DesignOptions = {
           `Roof snow ps = ${loads.snow.toFixed(3)} kPa (${(loads.snow / KPA_PER_PSF).toFixed(1)} psf) from the ground snow load, ASCE ${loads.edition}.`,
         ]
       : []),
+    ...loads.notes,
     'Top chord braced out of plane by the sheathing, bottom chord by the ceiling; webs over their length unless braced.',
     'Forces, moments and shears from a plane frame (direct stiffness method, each member with its E, A and I): chords continuous through the panel points within each piece of lumber and hinged at splices, at the peak and at the heel (continuous into an overhang), webs pinned at both ends, roof and ceiling loads as line loads on the chord members (live and snow on the horizontal projection, dead along the member). Members are checked with the larger of the span and panel-point moments.',
     `Frame analysed ${passes === 1 ? 'once' : `${passes} times`}, until the lumber it was analysed with is the lumber sizing chose (stiffness sets the force distribution).`,

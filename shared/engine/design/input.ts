@@ -1,4 +1,5 @@
 import type { AsceEdition } from '../loads/snow';
+import type { WindSite } from '../loads/wind';
 import type { ProfileParams } from '../profiles/types';
 import type { MPa, Mm } from '../units';
 
@@ -23,8 +24,12 @@ export interface EngineDesignInput {
       is: number;
       slippery: boolean;
       edition: AsceEdition;
+      /** Unbalanced snow on gable roofs (ASCE 7-16 §7.6.1); default true. */
+      unbalanced?: boolean;
     };
     windUplift?: AreaLoad;
+    /** Wind site data: the ASCE 7-16 Ch. 28 envelope cases (besides any net uplift). */
+    wind?: WindSite;
   };
   /** Allowed lumber ids per role, cheapest-first choice left to sizing; absent = plant default. */
   lumber: { topChord?: string[]; bottomChord?: string[]; webs?: string[] };

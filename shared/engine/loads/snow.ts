@@ -1,5 +1,5 @@
 import { EngineError } from '../errors';
-import { kpa, type KPa } from '../units';
+import { KPA_PER_PSF, kpa, type KPa } from '../units';
 
 /** ASCE 7 edition; 7-22 drops the importance factor from the flat-roof snow load. */
 export type AsceEdition = '7-16' | '7-22';
@@ -101,4 +101,39 @@ export function slopedRoofSnowLoad(input: FlatRoofSnowInput & Omit<SlopeFactorIn
   return kpa(
     slopeFactor({ slopeDeg: input.slopeDeg, ct: input.ct, slippery: input.slippery }) * pf,
   );
+}
+
+/** 20 psf in kPa: the cap on pg in the minimum roof snow load (ASCE 7-16 §7.3.4). */
+const PM_CAP_KPA = 20 * KPA_PER_PSF;
+
+/** Slopes below which the minimum roof snow load applies: 15° (ASCE 7-16 §7.3.4). */
+export const MINIMUM_SNOW_MAX_SLOPE_DEG = 15;
+
+/**
+ * Minimum roof snow load pm, ASCE 7-16 §7.3.4 (7-22 §7.3.3; text from memory, agreeing with
+ * published summaries): on monoslope, hip and gable roofs sloped under 15°, pm = Is·pg where
+ * pg ≤ 20 psf and Is·20 psf where pg > 20 psf (7-22: no Is). It is a separate uniform load case,
+ * not combined with drift, sliding, unbalanced or partial loads; returns 0 at 15° and steeper.
+ */
+export function minimumRoofSnowLoad(
+  input: Pick<FlatRoofSnowInput, 'pg' | 'is' | 'edition'> & { slopeDeg: number },
+): KPa {
+  const { pg, is = 1, edition = '7-16', slopeDeg } = input;
+  if (!(slopeDeg < MINIMUM_SNOW_MAX_SLOPE_DEG)) return kpa(0);
+  const importance = edition === '7-22' ? 1 : is;
+  return kpa(importance * Math.min(pg, PM_CAP_KPA));
+}
+
+/**
+ * The uniform design roof snow load on the horizontal projection: the larger of ps = Cs·pf and,
+ * under 15°, the minimum pm (a separate uniform case, so the larger uniform load governs).
+ */
+export function designRoofSnowLoad(input: FlatRoofSnowInput & Omit<SlopeFactorInput, 'ct'>): {
+  ps: KPa;
+  pm: KPa;
+  governs: 'ps' | 'pm';
+} {
+  const ps = slopedRoofSnowLoad(input);
+  const pm = minimumRoofSnowLoad(input);
+  return pm > ps ? { ps, pm, governs: 'pm' } : { ps, pm, governs: 'ps' };
 }
