@@ -13,3 +13,4 @@ export * from './design';
 export * from './units';
 export { EngineError, isEngineError, type EngineErrorCode } from './errors';
 export { ENGINE_VERSION } from './version';
+export * from './schedule';
