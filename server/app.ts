@@ -24,6 +24,9 @@ import { priceBookRouter } from './routes/priceBook/router';
 import { quotesRouter } from './routes/quotes/router';
 import { filesRouter } from './routes/files/router';
 import type { Mailer } from './services/mail';
+import { productionRouter } from './routes/production/router';
+import { orderProductionRouter } from './routes/orderProduction/router';
+import { floorRouter } from './routes/floor/router';
 
 export interface AppOptions {
   sequelize: Sequelize;
@@ -104,6 +107,9 @@ export function createApp(opts: AppOptions) {
   app.use('/api/price-book', priceBookRouter());
   app.use('/api/reviews', reviewsRouter());
   app.use('/api/designs', designsRouter());
+  app.use('/api/orders', orderProductionRouter());
+  app.use('/api', productionRouter());
+  app.use('/api/floor', floorRouter());
   app.use('/api/dev', devRouter(opts.mailer ?? null));
   app.use('/api', filesRouter());
   app.use('/api', apiNotFound);

@@ -9,6 +9,10 @@ import { OrderLine } from './OrderLine';
 import { PriceBook } from './PriceBook';
 import { Quote } from './Quote';
 import { StoredFile } from './StoredFile';
+import { ProductionSettings } from './ProductionSettings';
+import { SchedulePlacement } from './SchedulePlacement';
+import { ProgressEvent } from './ProgressEvent';
+import { Inspection } from './Inspection';
 
 let initialised: Sequelize | null = null;
 
@@ -27,6 +31,10 @@ export function initModels(sequelize: Sequelize) {
     PriceBook,
     Quote,
     StoredFile,
+    ProductionSettings,
+    SchedulePlacement,
+    ProgressEvent,
+    Inspection,
   ])
     m.initModel(sequelize);
   Plant.hasMany(Customer, { foreignKey: 'plantId' });
@@ -50,6 +58,8 @@ export function initModels(sequelize: Sequelize) {
   Quote.belongsTo(Order, { foreignKey: 'orderId', as: 'order' });
   Quote.belongsTo(User, { foreignKey: 'createdBy', as: 'creator', constraints: false });
   StoredFile.belongsTo(User, { foreignKey: 'uploadedBy', as: 'uploader', constraints: false });
+  Inspection.belongsTo(User, { foreignKey: 'inspectorId', as: 'inspector', constraints: false });
 }
 
 export { Plant, Customer, User, Job, AuditEvent, Order, OrderLine, PriceBook, Quote, StoredFile };
+export { ProductionSettings, SchedulePlacement, ProgressEvent, Inspection };

@@ -3,3 +3,4 @@ export * from './types';
 export { dayNumber, isoDay, addCalendarDays, workingDates, tableDayMinutes } from './calendar';
 export { trussMinutes, calibrationFactor, type LabourModel, type TrussWork } from './minutes';
 export { planSchedule } from './plan';
+export { plannedDelivery } from './delivery';
