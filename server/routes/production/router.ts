@@ -73,7 +73,10 @@ export function productionRouter() {
         where: { [Op.and]: [{ id: body.orderId }, orderPolicy.scope(req.user!)] },
       });
       if (!order) throw notFound('Order');
-      const { plan, changes } = await moveOrder(req.user!, order, body);
+      const { plan, changes } = await moveOrder(req.user!, order, {
+        tableId: body.tableId,
+        date: body.date,
+      });
       await sendBuilderMail(req.app.locals.mailer ?? null, await deliveryChangeMails(changes));
       const mine = plan.orders.find((o) => o.orderId === order.id);
       res.json({
