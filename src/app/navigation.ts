@@ -27,6 +27,8 @@ export const SECTION_ROLES = {
   quotes: ['admin', 'sales', 'builder'],
   'price-book': ['admin', 'sales'],
   inbox: ['admin'],
+  schedule: ['admin', 'foreman', 'sales'],
+  floor: ['admin', 'foreman'],
 } as const satisfies Record<string, readonly Role[]>;
 
 const may = (section: keyof typeof SECTION_ROLES, role: Role) =>
@@ -43,6 +45,8 @@ export function navForRole(role: Role): NavItem[] {
   if (may('builders', role)) items.push({ to: '/builders', label: 'Builders' });
   if (may('jobs', role)) items.push({ to: '/jobs', label: 'Jobs' });
   if (may('price-book', role)) items.push({ to: '/price-book', label: 'Price book' });
+  if (may('schedule', role)) items.push({ to: '/schedule', label: 'Schedule' });
+  if (may('floor', role)) items.push({ to: '/floor', label: 'Floor' });
   if (may('inbox', role)) items.push({ to: '/inbox', label: 'Demo inbox' });
   return items;
 }

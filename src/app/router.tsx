@@ -34,6 +34,8 @@ import { planFileRoutes } from '../features/plan-files/routes';
 import { priceBookRoutes } from '../features/price-book/routes';
 import { quoteRoutes } from '../features/quotes/routes';
 import { inboxRoutes } from '../features/inbox/routes';
+import { scheduleRoutes } from '../features/schedule/routes';
+import { floorRoutes } from '../features/floor/routes';
 import { usersQueryOptions } from '../features/users/api/list-users';
 import { UsersPage } from '../features/users/components/UsersPage';
 import { Spinner } from '../components/ui';
@@ -264,6 +266,8 @@ export function createAppRouter(queryClient: QueryClient) {
             ...priceBookRoutes(queryClient),
             ...quoteRoutes(queryClient),
             ...inboxRoutes(queryClient),
+            ...scheduleRoutes(queryClient),
+            ...floorRoutes(queryClient),
             { path: '*', element: <NotFoundPage /> },
           ],
         },

@@ -13,11 +13,20 @@ describe('role navigation (product brief for the client shell and the sales desk
       'Builders',
       'Jobs',
       'Price book',
+      'Schedule',
+      'Floor',
       'Demo inbox',
     ]);
-    expect(labels('sales')).toEqual(['Sales desk', 'Orders', 'Builders', 'Jobs', 'Price book']);
+    expect(labels('sales')).toEqual([
+      'Sales desk',
+      'Orders',
+      'Builders',
+      'Jobs',
+      'Price book',
+      'Schedule',
+    ]);
     expect(labels('engineer')).toEqual(['Design review', 'Review queue', 'Orders', 'Jobs']);
-    expect(labels('foreman')).toEqual(['Shop floor', 'Orders', 'Jobs']);
+    expect(labels('foreman')).toEqual(['Shop floor', 'Orders', 'Jobs', 'Schedule', 'Floor']);
     expect(labels('builder')).toEqual(['Your jobs', 'Your orders']);
   });
 
