@@ -9,7 +9,8 @@ import { lineCounts, recordProgress } from '../../commands/progress';
 import { plantToday } from '../../commands/schedule';
 import { settingsFor } from '../../commands/productionSettings';
 import { Customer, Order, OrderLine, SchedulePlacement } from '../../models';
-import { progressSchema, type FloorDay } from '../../../shared/api/production';
+import { inspectionSchema, progressSchema, type FloorDay } from '../../../shared/api/production';
+import { inspectionLog, recordInspection } from '../../commands/inspections';
 import { handle } from '../load';
 
 const dayQuery = z.object({
@@ -93,6 +94,26 @@ export function floorRouter() {
         orderStatus: order.status,
         replayed,
       });
+    }),
+  );
+
+  router.get(
+    '/inspections',
+    requireUser,
+    authorize(productionPolicy.floor),
+    handle(async (req, res) => {
+      res.json(await inspectionLog(req.user!.plantId));
+    }),
+  );
+
+  router.post(
+    '/inspections',
+    requireUser,
+    validate(inspectionSchema),
+    authorize(productionPolicy.floor),
+    handle(async (req, res) => {
+      await recordInspection(req.user!, res.locals.body);
+      res.status(201).json(await inspectionLog(req.user!.plantId));
     }),
   );
 

@@ -4,3 +4,9 @@ export { dayNumber, isoDay, addCalendarDays, workingDates, tableDayMinutes } fro
 export { trussMinutes, calibrationFactor, type LabourModel, type TrussWork } from './minutes';
 export { planSchedule } from './plan';
 export { plannedDelivery } from './delivery';
+export {
+  INSPECTIONS_PER_SHIFT_PER_WEEK,
+  weekStart,
+  inspectionsDue,
+  type StationDue,
+} from './inspections';
