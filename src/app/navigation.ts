@@ -29,6 +29,7 @@ export const SECTION_ROLES = {
   inbox: ['admin'],
   schedule: ['admin', 'foreman', 'sales'],
   floor: ['admin', 'foreman'],
+  quality: ['admin', 'foreman'],
 } as const satisfies Record<string, readonly Role[]>;
 
 const may = (section: keyof typeof SECTION_ROLES, role: Role) =>
@@ -47,6 +48,7 @@ export function navForRole(role: Role): NavItem[] {
   if (may('price-book', role)) items.push({ to: '/price-book', label: 'Price book' });
   if (may('schedule', role)) items.push({ to: '/schedule', label: 'Schedule' });
   if (may('floor', role)) items.push({ to: '/floor', label: 'Floor' });
+  if (may('quality', role)) items.push({ to: '/quality', label: 'Quality' });
   if (may('inbox', role)) items.push({ to: '/inbox', label: 'Demo inbox' });
   return items;
 }

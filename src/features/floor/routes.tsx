@@ -17,5 +17,13 @@ export function floorRoutes(queryClient: QueryClient): RouteObject[] {
       },
       lazy: async () => ({ Component: (await import('./components/FloorPage')).FloorPage }),
     },
+    {
+      path: 'quality',
+      loader: async ({ request }: LoaderFunctionArgs) => {
+        await requireRole(queryClient, request, FLOOR_ROLES);
+        return null;
+      },
+      lazy: async () => ({ Component: (await import('./components/QualityPage')).QualityPage }),
+    },
   ];
 }

@@ -15,6 +15,7 @@ describe('role navigation (product brief for the client shell and the sales desk
       'Price book',
       'Schedule',
       'Floor',
+      'Quality',
       'Demo inbox',
     ]);
     expect(labels('sales')).toEqual([
@@ -26,7 +27,14 @@ describe('role navigation (product brief for the client shell and the sales desk
       'Schedule',
     ]);
     expect(labels('engineer')).toEqual(['Design review', 'Review queue', 'Orders', 'Jobs']);
-    expect(labels('foreman')).toEqual(['Shop floor', 'Orders', 'Jobs', 'Schedule', 'Floor']);
+    expect(labels('foreman')).toEqual([
+      'Shop floor',
+      'Orders',
+      'Jobs',
+      'Schedule',
+      'Floor',
+      'Quality',
+    ]);
     expect(labels('builder')).toEqual(['Your jobs', 'Your orders']);
   });
 
