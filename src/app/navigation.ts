@@ -30,6 +30,7 @@ export const SECTION_ROLES = {
   schedule: ['admin', 'foreman', 'sales'],
   floor: ['admin', 'foreman'],
   quality: ['admin', 'foreman'],
+  'production-settings': ['admin'],
 } as const satisfies Record<string, readonly Role[]>;
 
 const may = (section: keyof typeof SECTION_ROLES, role: Role) =>
@@ -49,6 +50,8 @@ export function navForRole(role: Role): NavItem[] {
   if (may('schedule', role)) items.push({ to: '/schedule', label: 'Schedule' });
   if (may('floor', role)) items.push({ to: '/floor', label: 'Floor' });
   if (may('quality', role)) items.push({ to: '/quality', label: 'Quality' });
+  if (may('production-settings', role))
+    items.push({ to: '/production-settings', label: 'Production' });
   if (may('inbox', role)) items.push({ to: '/inbox', label: 'Demo inbox' });
   return items;
 }

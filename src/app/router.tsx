@@ -36,6 +36,7 @@ import { quoteRoutes } from '../features/quotes/routes';
 import { inboxRoutes } from '../features/inbox/routes';
 import { scheduleRoutes } from '../features/schedule/routes';
 import { floorRoutes } from '../features/floor/routes';
+import { productionSettingsRoutes } from '../features/production-settings/routes';
 import { usersQueryOptions } from '../features/users/api/list-users';
 import { UsersPage } from '../features/users/components/UsersPage';
 import { Spinner } from '../components/ui';
@@ -268,6 +269,7 @@ export function createAppRouter(queryClient: QueryClient) {
             ...inboxRoutes(queryClient),
             ...scheduleRoutes(queryClient),
             ...floorRoutes(queryClient),
+            ...productionSettingsRoutes(queryClient),
             { path: '*', element: <NotFoundPage /> },
           ],
         },

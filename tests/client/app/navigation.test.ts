@@ -16,6 +16,7 @@ describe('role navigation (product brief for the client shell and the sales desk
       'Schedule',
       'Floor',
       'Quality',
+      'Production',
       'Demo inbox',
     ]);
     expect(labels('sales')).toEqual([
