@@ -40,6 +40,9 @@ import { mailProbe } from './services/mailQueue';
 import { paymentsProbe, type Payments } from './services/payments';
 import { stockRouter } from './routes/stock/router';
 import { lumberPlanRouter } from './routes/lumberPlan/router';
+import { productionRouter } from './routes/production/router';
+import { orderProductionRouter } from './routes/orderProduction/router';
+import { floorRouter } from './routes/floor/router';
 
 export interface AppOptions {
   sequelize: Sequelize;
@@ -169,6 +172,9 @@ export function createApp(opts: AppOptions) {
   app.use('/api/designs', designsRouter());
   app.use('/api/stock', stockRouter());
   app.use('/api/shop/orders', lumberPlanRouter());
+  app.use('/api/orders', orderProductionRouter());
+  app.use('/api', productionRouter());
+  app.use('/api/floor', floorRouter());
   app.use('/api/dev', devRouter(opts.mailer ?? null));
   app.use('/api/shop', shopRouter());
   app.use('/api', filesRouter());

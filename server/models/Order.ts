@@ -22,6 +22,13 @@ export class Order extends Model<InferAttributes<Order>, InferCreationAttributes
   declare number: string;
   declare status: CreationOptional<OrderStatus>;
   declare createdBy: number | null;
+  declare promisedOn: CreationOptional<string | null>;
+  declare releasedAt: CreationOptional<Date | null>;
+  declare onHold: CreationOptional<boolean>;
+  declare holdReason: CreationOptional<string | null>;
+  declare schedulePin: CreationOptional<{ tableId: number; date: string } | null>;
+  declare plannedFinishOn: CreationOptional<string | null>;
+  declare plannedLate: CreationOptional<boolean>;
   declare createdAt: CreationOptional<Date>;
   declare updatedAt: CreationOptional<Date>;
   declare job?: NonAttribute<Job>;
@@ -36,6 +43,13 @@ export class Order extends Model<InferAttributes<Order>, InferCreationAttributes
         number: { type: DataTypes.STRING(20), allowNull: false },
         status: { type: DataTypes.STRING(20), allowNull: false, defaultValue: 'draft' },
         createdBy: { type: DataTypes.INTEGER, allowNull: true },
+        promisedOn: { type: DataTypes.DATEONLY, allowNull: true },
+        releasedAt: { type: DataTypes.DATE, allowNull: true },
+        onHold: { type: DataTypes.BOOLEAN, allowNull: false, defaultValue: false },
+        holdReason: { type: DataTypes.TEXT, allowNull: true },
+        schedulePin: { type: DataTypes.JSONB, allowNull: true },
+        plannedFinishOn: { type: DataTypes.DATEONLY, allowNull: true },
+        plannedLate: { type: DataTypes.BOOLEAN, allowNull: false, defaultValue: false },
         createdAt: DataTypes.DATE,
         updatedAt: DataTypes.DATE,
       },

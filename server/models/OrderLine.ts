@@ -40,6 +40,11 @@ export class OrderLine extends Model<
   declare reviewComment: CreationOptional<string | null>;
   declare reviewedBy: CreationOptional<number | null>;
   declare reviewedAt: CreationOptional<Date | null>;
+  declare cutCount: CreationOptional<number>;
+  declare assembledCount: CreationOptional<number>;
+  declare bandedCount: CreationOptional<number>;
+  declare loadedCount: CreationOptional<number>;
+  declare deliveredCount: CreationOptional<number>;
   declare createdAt: CreationOptional<Date>;
   declare updatedAt: CreationOptional<Date>;
   declare order?: NonAttribute<Order>;
@@ -66,6 +71,11 @@ export class OrderLine extends Model<
         reviewComment: { type: DataTypes.TEXT, allowNull: true },
         reviewedBy: { type: DataTypes.INTEGER, allowNull: true },
         reviewedAt: { type: DataTypes.DATE, allowNull: true },
+        cutCount: { type: DataTypes.INTEGER, allowNull: false, defaultValue: 0 },
+        assembledCount: { type: DataTypes.INTEGER, allowNull: false, defaultValue: 0 },
+        bandedCount: { type: DataTypes.INTEGER, allowNull: false, defaultValue: 0 },
+        loadedCount: { type: DataTypes.INTEGER, allowNull: false, defaultValue: 0 },
+        deliveredCount: { type: DataTypes.INTEGER, allowNull: false, defaultValue: 0 },
         createdAt: DataTypes.DATE,
         updatedAt: DataTypes.DATE,
       },

@@ -14,6 +14,10 @@ import { Payment } from './Payment';
 import { PaymentEvent } from './PaymentEvent';
 import { MailMessage } from './MailMessage';
 import { StockSettings } from './StockSettings';
+import { ProductionSettings } from './ProductionSettings';
+import { SchedulePlacement } from './SchedulePlacement';
+import { ProgressEvent } from './ProgressEvent';
+import { Inspection } from './Inspection';
 
 let initialised: Sequelize | null = null;
 
@@ -36,6 +40,10 @@ export function initModels(sequelize: Sequelize) {
     Payment,
     PaymentEvent,
     MailMessage,
+    ProductionSettings,
+    SchedulePlacement,
+    ProgressEvent,
+    Inspection,
   ])
     m.initModel(sequelize);
   Plant.hasMany(Customer, { foreignKey: 'plantId' });
@@ -62,8 +70,10 @@ export function initModels(sequelize: Sequelize) {
   QuoteAcceptance.belongsTo(Quote, { foreignKey: 'quoteId', as: 'quote' });
   StockSettings.initModel(sequelize);
   StockSettings.belongsTo(User, { foreignKey: 'updatedBy', as: 'editor', constraints: false });
+  Inspection.belongsTo(User, { foreignKey: 'inspectorId', as: 'inspector', constraints: false });
 }
 
 export { Plant, Customer, User, Job, AuditEvent, Order, OrderLine, PriceBook, Quote, StoredFile };
 export { QuoteAcceptance, Payment, PaymentEvent, MailMessage };
 export { StockSettings };
+export { ProductionSettings, SchedulePlacement, ProgressEvent, Inspection };

@@ -8,6 +8,7 @@ import type {
 } from '../../shared/api/orders';
 import type { AuditEvent, Order, OrderLine, User } from '../models';
 import { summarizePortalEvent } from './portal';
+import { plannedDelivery } from '../../shared/engine/schedule';
 
 type Counted = Order & { get(k: 'lineCount' | 'trussCount'): unknown };
 
@@ -22,6 +23,13 @@ export function presentOrderSummary(o: Counted): OrderSummary {
     trussCount: Number(o.get('trussCount') ?? 0),
     createdAt: o.createdAt.toISOString(),
     updatedAt: o.updatedAt.toISOString(),
+    promisedOn: o.promisedOn ?? null,
+    plannedDeliveryOn: plannedDelivery({
+      promisedOn: o.promisedOn ?? null,
+      plannedFinishOn: o.plannedFinishOn ?? null,
+      plannedLate: o.plannedLate ?? false,
+    }),
+    onHold: o.onHold ?? false,
   };
 }
 
@@ -91,6 +99,26 @@ export function summarizeEvent(e: AuditEvent): string {
       return 'Back to draft: lines changed after quoting; the next quote is a new revision';
     case 'line.returned':
       return `Sent ${d(e, 'mark')} back: ${d(e, 'comment')}`;
+    case 'order.released':
+      return e.data.manual ? `Released by hand: ${d(e, 'reason')}` : 'Released to production';
+    case 'order.held':
+      return `Held: ${d(e, 'reason')}`;
+    case 'order.hold_lifted':
+      return `Hold lifted: ${d(e, 'reason')}`;
+    case 'order.promised':
+      return e.data.from
+        ? `Promised date ${d(e, 'from')} → ${d(e, 'to')}: ${d(e, 'reason')}`
+        : `Promised delivery on ${d(e, 'to')}`;
+    case 'order.moved':
+      return `Moved on the schedule to table ${d(e, 'tableId')} from ${d(e, 'date')}`;
+    case 'line.progress':
+      return `${d(e, 'mark')}: ${d(e, 'count')} of ${d(e, 'quantity')} ${d(e, 'stage')}`;
+    case 'order.in_production':
+      return 'In production (first cut)';
+    case 'order.ready':
+      return 'Ready: every truss banded';
+    case 'order.delivered':
+      return `Delivered, signed for by ${d(e, 'receivedBy')}`;
     default:
       return summarizePortalEvent(e) ?? e.action;
   }

@@ -130,6 +130,10 @@ export const orderSummarySchema = z.object({
   trussCount: z.number().int(),
   createdAt: z.string(),
   updatedAt: z.string(),
+  /** Production planning: the date promised to the builder, and the date the plan now gives. */
+  promisedOn: z.string().nullable().default(null),
+  plannedDeliveryOn: z.string().nullable().default(null),
+  onHold: z.boolean().default(false),
 });
 export type OrderSummary = z.infer<typeof orderSummarySchema>;
 

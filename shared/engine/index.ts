@@ -16,3 +16,4 @@ export * from './cutting';
 export { EngineError, isEngineError, type EngineErrorCode } from './errors';
 export { ENGINE_VERSION } from './version';
 export * from './pieces';
+export * from './schedule';

@@ -31,6 +31,10 @@ export const SECTION_ROLES = {
   shop: ['foreman', 'sales', 'admin'],
   /** Shop paper of orders whose designs are all approved (never a builder). */
   'shop-paper': ['admin', 'sales', 'foreman'],
+  schedule: ['admin', 'foreman', 'sales'],
+  floor: ['admin', 'foreman'],
+  quality: ['admin', 'foreman'],
+  'production-settings': ['admin'],
 } as const satisfies Record<string, readonly Role[]>;
 
 const may = (section: keyof typeof SECTION_ROLES, role: Role) =>
@@ -48,6 +52,11 @@ export function navForRole(role: Role): NavItem[] {
   if (may('builders', role)) items.push({ to: '/builders', label: 'Builders' });
   if (may('jobs', role)) items.push({ to: '/jobs', label: 'Jobs' });
   if (may('price-book', role)) items.push({ to: '/price-book', label: 'Price book' });
+  if (may('schedule', role)) items.push({ to: '/schedule', label: 'Schedule' });
+  if (may('floor', role)) items.push({ to: '/floor', label: 'Floor' });
+  if (may('quality', role)) items.push({ to: '/quality', label: 'Quality' });
+  if (may('production-settings', role))
+    items.push({ to: '/production-settings', label: 'Production' });
   if (may('inbox', role)) items.push({ to: '/inbox', label: 'Demo inbox' });
   if (may('stock', role)) items.push({ to: '/stock', label: 'Lumber stock' });
   return items;

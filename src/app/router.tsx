@@ -38,6 +38,9 @@ import { quoteRoutes } from '../features/quotes/routes';
 import { inboxRoutes } from '../features/inbox/routes';
 import { shopRoutes } from '../features/shop/routes';
 import { shopPaperRoutes } from '../features/shop-paper/routes';
+import { scheduleRoutes } from '../features/schedule/routes';
+import { floorRoutes } from '../features/floor/routes';
+import { productionSettingsRoutes } from '../features/production-settings/routes';
 import { usersQueryOptions } from '../features/users/api/list-users';
 import { UsersPage } from '../features/users/components/UsersPage';
 import { Spinner } from '../components/ui';
@@ -277,6 +280,9 @@ export function createAppRouter(queryClient: QueryClient) {
             ...lumberPlanRoutes(queryClient),
             ...shopRoutes(queryClient),
             ...shopPaperRoutes(queryClient),
+            ...scheduleRoutes(queryClient),
+            ...floorRoutes(queryClient),
+            ...productionSettingsRoutes(queryClient),
             { path: '*', element: <NotFoundPage /> },
           ],
         },

@@ -14,6 +14,7 @@ import {
   updateLine,
 } from '../../commands/orders';
 import { Order, type OrderLine } from '../../models';
+import { releaseIfReady } from '../../commands/release';
 import { conflict, notFound } from '../../errors';
 import { presentLine, presentOrderSummary } from '../../presenters/order';
 import { presentPage } from '../../presenters/page';
@@ -205,6 +206,9 @@ export function ordersRouter() {
     authorize(orderPolicy.review),
     handle(async (req, res) => {
       const line = await reviewLine(req.user!, res.locals.record, res.locals.line, res.locals.body);
+      // An approval may complete the release gate (production planning).
+      if (line.reviewState === 'approved')
+        await releaseIfReady(req.user!, line.orderId, req.app.locals.mailer ?? null);
       res.json(presentLine((await findLine(line.orderId, line.id))!));
     }),
   );

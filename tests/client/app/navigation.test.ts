@@ -14,6 +14,10 @@ describe('role navigation (product brief for the client shell and the sales desk
       'Builders',
       'Jobs',
       'Price book',
+      'Schedule',
+      'Floor',
+      'Quality',
+      'Production',
       'Demo inbox',
       'Lumber stock',
     ]);
@@ -24,9 +28,18 @@ describe('role navigation (product brief for the client shell and the sales desk
       'Builders',
       'Jobs',
       'Price book',
+      'Schedule',
     ]);
     expect(labels('engineer')).toEqual(['Design review', 'Review queue', 'Orders', 'Jobs']);
-    expect(labels('foreman')).toEqual(['Shop floor', 'Orders', 'Cut lists', 'Jobs']);
+    expect(labels('foreman')).toEqual([
+      'Shop floor',
+      'Orders',
+      'Cut lists',
+      'Jobs',
+      'Schedule',
+      'Floor',
+      'Quality',
+    ]);
     expect(labels('builder')).toEqual(['Your jobs', 'Your orders']);
   });
 

@@ -1,0 +1,175 @@
+import type { Transaction } from 'sequelize';
+import { Customer, Order, OrderLine, type User } from '../models';
+import { badRequest, conflict } from '../errors';
+import { releaseBlockers, type ReleaseFacts } from '../policies/release';
+import type { Mailer, OutgoingMail } from '../services/mail';
+import { formatDay, sendBuilderMail } from '../services/productionMail';
+import { audit } from './audit';
+import { deliveryChangeMails, plannedDelivery, replan, SCHEDULED_STATUSES } from './schedule';
+
+/** Lock the order, then read what the release gate needs (order, then lines: the lock order). */
+async function lockFacts(orderId: number, t: Transaction) {
+  const order = await Order.findByPk(orderId, { transaction: t, lock: t.LOCK.UPDATE });
+  if (!order) throw conflict('The order no longer exists.');
+  const lines = await OrderLine.findAll({
+    where: { orderId },
+    attributes: ['id', 'reviewState'],
+    transaction: t,
+    lock: t.LOCK.UPDATE,
+  });
+  const customer = await Customer.findByPk(order.customerId, { transaction: t });
+  const facts: ReleaseFacts = {
+    status: order.status,
+    onHold: order.onHold,
+    reviewStates: lines.map((l) => l.reviewState),
+    terms: customer!.terms,
+  };
+  return { order, customer: customer!, facts };
+}
+
+const event = (t: Transaction, actor: User | null, order: Order, action: string, data: object) =>
+  audit(t, {
+    plantId: order.plantId,
+    actorId: actor?.id ?? null,
+    action,
+    subjectType: 'order',
+    subjectId: order.id,
+    data: data as Record<string, unknown>,
+  });
+
+/** Release inside the transaction: status, time, audit, re-plan; returns the builder's e-mail. */
+async function release(
+  t: Transaction,
+  actor: User | null,
+  order: Order,
+  customer: Customer,
+  data: Record<string, unknown>,
+): Promise<OutgoingMail[]> {
+  await order.update(
+    { status: 'released', releasedAt: new Date(), onHold: false, holdReason: null },
+    { transaction: t },
+  );
+  await event(t, actor, order, 'order.released', data);
+  const { changes } = await replan(t, order.plantId);
+  await order.reload({ transaction: t });
+  const planned = plannedDelivery(order);
+  return [
+    {
+      to: customer.email,
+      subject: `Order ${order.number} is released to production`,
+      text:
+        `Your order ${order.number} is released to production.` +
+        (planned ? ` Planned delivery: ${formatDay(planned)}.` : '') +
+        '\n\nWe will tell you if the date changes.',
+    },
+    ...(await deliveryChangeMails(
+      changes.filter((c) => c.order.id !== order.id),
+      t,
+    )),
+  ];
+}
+
+/**
+ * Release the order by itself if the gate (`releaseBlockers`) allows: call it after anything that
+ * may complete the gate — a design approved, a deposit paid, terms changed. One transaction;
+ * `actor` is null for the system (a payment event). Returns whether it released.
+ */
+export async function releaseIfReady(actor: User | null, orderId: number, mailer: Mailer | null) {
+  const mails = await Order.sequelize!.transaction(async (t) => {
+    const { order, customer, facts } = await lockFacts(orderId, t);
+    if (releaseBlockers(facts).length > 0) return null;
+    return release(t, actor, order, customer, { automatic: true });
+  });
+  if (mails) await sendBuilderMail(mailer, mails);
+  return mails !== null;
+}
+
+/**
+ * The plant manager releases by hand with a reason: overrides the deposit and a hold, never the
+ * design review. On an already released order it lifts a hold and puts it back on the schedule.
+ */
+export async function releaseByHand(
+  actor: User,
+  orderId: number,
+  reason: string,
+  mailer: Mailer | null,
+) {
+  const mails = await Order.sequelize!.transaction(async (t) => {
+    const { order, customer, facts } = await lockFacts(orderId, t);
+    if (SCHEDULED_STATUSES.includes(order.status as never)) {
+      if (!order.onHold) throw conflict(`Order ${order.number} is already released.`);
+      await order.update({ onHold: false, holdReason: null }, { transaction: t });
+      await event(t, actor, order, 'order.hold_lifted', { reason });
+      const { changes } = await replan(t, order.plantId);
+      return deliveryChangeMails(changes, t);
+    }
+    const why = releaseBlockers(facts, { ignorePayment: true });
+    if (why.length) throw conflict(why.join(' '));
+    return release(t, actor, order, customer, { manual: true, reason });
+  });
+  await sendBuilderMail(mailer, mails);
+}
+
+/** The plant manager holds an order with a reason: no automatic release, off the schedule. */
+export async function holdOrder(
+  actor: User,
+  orderId: number,
+  reason: string,
+  mailer: Mailer | null,
+) {
+  const mails = await Order.sequelize!.transaction(async (t) => {
+    const { order } = await lockFacts(orderId, t);
+    if (order.onHold) throw conflict(`Order ${order.number} is already on hold.`);
+    if (!['accepted', 'deposit_paid', ...SCHEDULED_STATUSES].includes(order.status))
+      throw conflict(`A ${order.status.replace('_', ' ')} order cannot be held.`);
+    await order.update({ onHold: true, holdReason: reason }, { transaction: t });
+    await event(t, actor, order, 'order.held', { reason });
+    const { changes } = await replan(t, order.plantId);
+    return deliveryChangeMails(changes, t);
+  });
+  await sendBuilderMail(mailer, mails);
+}
+
+const PROMISABLE = ['accepted', 'deposit_paid', 'released', 'in_production', 'ready'];
+
+/**
+ * The desk sets the promised delivery date (when the order is accepted) or changes it with a
+ * reason; audited, re-planned, and the builder is told of a change.
+ */
+export async function setPromisedDate(
+  actor: User,
+  orderId: number,
+  input: { promisedOn: string; reason: string },
+  mailer: Mailer | null,
+) {
+  const mails = await Order.sequelize!.transaction(async (t) => {
+    const { order, customer } = await lockFacts(orderId, t);
+    if (!PROMISABLE.includes(order.status))
+      throw conflict('A delivery date is promised once the builder has accepted the order.');
+    const before = order.promisedOn;
+    if (before === input.promisedOn) return [];
+    if (before && input.reason.length < 3)
+      throw badRequest('Say why the promised date changes.', { reason: 'Give a reason' });
+    await order.update({ promisedOn: input.promisedOn }, { transaction: t });
+    await event(t, actor, order, 'order.promised', {
+      from: before,
+      to: input.promisedOn,
+      reason: input.reason || undefined,
+    });
+    const { changes } = await replan(t, order.plantId);
+    const out: OutgoingMail[] = await deliveryChangeMails(
+      changes.filter((c) => c.order.id !== order.id),
+      t,
+    );
+    if (before)
+      out.push({
+        to: customer.email,
+        subject: `Order ${order.number}: delivery date changed to ${formatDay(input.promisedOn)}`,
+        text:
+          `The promised delivery date of your order ${order.number} changed from ` +
+          `${formatDay(before)} to ${formatDay(input.promisedOn)}.\nReason: ${input.reason}`,
+      });
+    return out;
+  });
+  await sendBuilderMail(mailer, mails);
+}

@@ -1,0 +1,8 @@
+/** Query keys of the production schedule: one prefix a move invalidates. */
+const all = ['schedule'] as const;
+
+export const scheduleKeys = {
+  all,
+  board: (from: string | undefined, days: number) =>
+    [...all, 'board', from ?? 'today', days] as const,
+};
