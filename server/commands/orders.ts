@@ -4,13 +4,14 @@ import { Order, OrderLine, Plant, type Job, type User } from '../models';
 import { AppError, badRequest, conflict } from '../errors';
 import { computeDesign, type ComputedDesign } from '../services/design';
 import { orderEvent } from './audit';
+import { assertMarkFree, isNoChange } from './lineMarks';
 
 /**
  * Lock the order row so concurrent line writes keep positions and numbers consistent. A quoted
  * order's lines may change too: it goes back to draft (its quotes stay as written; the next quote
  * is a new revision) and its history says so.
  */
-const lockOrder = async (order: Order, t: Transaction, actor: User) => {
+export const lockOrder = async (order: Order, t: Transaction, actor: User) => {
   const o = await Order.findByPk(order.id, { transaction: t, lock: t.LOCK.UPDATE });
   if (!o) throw conflict('The order no longer exists.');
   if (o.status === 'quoted') {
@@ -26,7 +27,7 @@ const lockOrder = async (order: Order, t: Transaction, actor: User) => {
   return o;
 };
 
-const designColumns = (d: ComputedDesign) => ({
+export const designColumns = (d: ComputedDesign) => ({
   profile: d.profile,
   designInput: d.input as unknown as Record<string, unknown>,
   designResult: d.result as unknown as Record<string, unknown>,
@@ -35,6 +36,8 @@ const designColumns = (d: ComputedDesign) => ({
   maxCsi: d.maxCsi,
   warningCount: d.warningCount,
   description: d.description,
+  loadsOutOfDate: false,
+  outOfDateReason: null,
 });
 
 /** Open a draft order for a job, numbered per plant ("2026-0001"). */
@@ -63,6 +66,7 @@ export async function addLine(actor: User, order: Order, input: CreateLineInput)
   const design = computeDesign(input.design, { plies: input.plies });
   return Order.sequelize!.transaction(async (t) => {
     await lockOrder(order, t, actor);
+    await assertMarkFree(order.id, input.mark, t);
     const max = (await OrderLine.max('position', {
       where: { orderId: order.id },
       transaction: t,
@@ -96,6 +100,7 @@ export async function updateLine(
   line: OrderLine,
   input: UpdateLineInput,
 ) {
+  if (isNoChange(line, input)) return line; // a save that changes nothing records nothing
   const redesign =
     input.design !== undefined || (input.plies !== undefined && input.plies !== line.plies);
   if (redesign && line.reviewState === 'approved') {
@@ -105,6 +110,8 @@ export async function updateLine(
   const design = redesign ? computeDesign(input.design ?? line.designInput, { plies }) : null;
   return Order.sequelize!.transaction(async (t) => {
     await lockOrder(order, t, actor);
+    if (input.mark !== undefined && input.mark.toUpperCase() !== line.mark.toUpperCase())
+      await assertMarkFree(order.id, input.mark, t, line.id);
     const changes: Partial<OrderLine> = {};
     if (input.mark !== undefined) changes.mark = input.mark;
     if (input.quantity !== undefined) changes.quantity = input.quantity;

@@ -38,6 +38,9 @@ export class OrderLine extends Model<
   declare reviewComment: CreationOptional<string | null>;
   declare reviewedBy: CreationOptional<number | null>;
   declare reviewedAt: CreationOptional<Date | null>;
+  /** The job's design loads changed after this design was made: redesign before quoting. */
+  declare loadsOutOfDate: CreationOptional<boolean>;
+  declare outOfDateReason: CreationOptional<string | null>;
   declare createdAt: CreationOptional<Date>;
   declare updatedAt: CreationOptional<Date>;
   declare order?: NonAttribute<Order>;
@@ -63,6 +66,8 @@ export class OrderLine extends Model<
         reviewComment: { type: DataTypes.TEXT, allowNull: true },
         reviewedBy: { type: DataTypes.INTEGER, allowNull: true },
         reviewedAt: { type: DataTypes.DATE, allowNull: true },
+        loadsOutOfDate: { type: DataTypes.BOOLEAN, allowNull: false, defaultValue: false },
+        outOfDateReason: { type: DataTypes.TEXT, allowNull: true },
         createdAt: DataTypes.DATE,
         updatedAt: DataTypes.DATE,
       },

@@ -37,6 +37,8 @@ const customerFields = z.object({
 /** Body of `POST /api/customers` — a builder company. */
 export const createCustomerSchema = customerFields.extend({
   contacts: customerFields.shape.contacts.default([]),
+  /** Create even though a builder with the same name or e-mail exists (the desk was asked). */
+  confirmDuplicate: z.boolean().optional(),
 });
 export type CreateCustomerInput = z.infer<typeof createCustomerSchema>;
 

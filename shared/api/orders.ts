@@ -99,6 +99,9 @@ export const lineSummarySchema = z.object({
   reviewedBy: z.string().nullable(),
   reviewedAt: z.string().nullable(),
   engineVersion: z.string(),
+  /** The job's loads changed after this design: redesign before quoting. */
+  loadsOutOfDate: z.boolean(),
+  outOfDateReason: z.string().nullable(),
   updatedAt: z.string(),
 });
 export type LineSummary = z.infer<typeof lineSummarySchema>;
