@@ -53,12 +53,13 @@ async function refuseLikelyDuplicate(plantId: number, input: CreateCustomerInput
     transaction: t,
   });
   if (!match) return;
-  const same = match.email === input.email ? `the e-mail ${match.email}` : 'that name';
+  const sameMail = match.email === input.email;
+  const field = sameMail ? 'email' : 'name';
   throw new AppError(
     409,
     'possible_duplicate',
-    `${match.name} already exists with ${same}. Open it, or create this builder anyway.`,
-    { id: String(match.id), name: match.name },
+    `${match.name} already exists with ${sameMail ? `the e-mail ${match.email}` : 'that name'}. Open it, or create this builder anyway.`,
+    { [field]: `Already used by ${match.name}`, existingId: String(match.id) },
   );
 }
 

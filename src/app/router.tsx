@@ -40,6 +40,7 @@ import { Spinner } from '../components/ui';
 import { listParamsFromSearch } from '../lib/list-params';
 import { canManageSales } from '../lib/permissions';
 import { AppFrame } from './AppFrame';
+import { markLinkFor } from './mark-links';
 import { ErrorPage, NotFoundPage } from './ErrorPages';
 import { redirectIfSignedIn, requireRole, requireSession } from './guards';
 import { SECTION_ROLES } from './navigation';
@@ -253,6 +254,7 @@ export function createAppRouter(queryClient: QueryClient) {
                       canSeeQuotes={(SECTION_ROLES.quotes as readonly string[]).includes(
                         me.user.role,
                       )}
+                      markHref={markLinkFor(me.user.role)}
                     />
                   )}
                 />

@@ -1,4 +1,5 @@
 import { useState } from 'react';
+import { useLocation } from 'react-router';
 import type { LineSummary, OrderDetail } from '../../../../shared/api/orders';
 import {
   Alert,
@@ -17,6 +18,7 @@ import { movedLineIds } from '../line-order';
 import { LineTable } from './LineTable';
 import { OrderHistory } from './OrderHistory';
 import { OrderStatusBadge } from './StatusBadge';
+import { OutOfDateLines } from './OutOfDateLines';
 
 /** Props of {@link OrderPage}. */
 export interface OrderPageProps {
@@ -27,6 +29,8 @@ export interface OrderPageProps {
   canOpenJob: boolean;
   /** Sales, admin and the order's builder read its quotes. */
   canSeeQuotes?: boolean;
+  /** Where a line's mark leads (its design, or its review); none for builders. */
+  markHref?: (orderId: number, line: LineSummary) => string;
 }
 
 function Header({
@@ -67,7 +71,15 @@ function Header({
   );
 }
 
-function Lines({ order, canEdit }: { order: OrderDetail; canEdit: boolean }) {
+function Lines({
+  order,
+  canEdit,
+  markHref,
+}: {
+  order: OrderDetail;
+  canEdit: boolean;
+  markHref?: (line: LineSummary) => string;
+}) {
   const copy = useCopyLine(order.id);
   const remove = useDeleteLine(order.id);
   const reorder = useReorderLines(order.id);
@@ -102,6 +114,7 @@ function Lines({ order, canEdit }: { order: OrderDetail; canEdit: boolean }) {
         </Alert>
       ) : null}
       {failed ? <ErrorMessage className="m-4" title="That did not work" error={failed} /> : null}
+      <OutOfDateLines orderId={order.id} lines={order.lines} canEdit={canEdit} />
       {order.lines.length === 0 ? (
         <EmptyState
           title="No trusses on this order yet"
@@ -115,6 +128,7 @@ function Lines({ order, canEdit }: { order: OrderDetail; canEdit: boolean }) {
         <LineTable
           orderId={order.id}
           lines={order.lines}
+          markHref={markHref}
           actions={
             canEdit
               ? {
@@ -162,8 +176,15 @@ function Lines({ order, canEdit }: { order: OrderDetail; canEdit: boolean }) {
 }
 
 /** `/orders/:id`: the order's header, its truss lines and their actions, and its history. */
-export function OrderPage({ id, canEdit, canOpenJob, canSeeQuotes = false }: OrderPageProps) {
+export function OrderPage({
+  id,
+  canEdit,
+  canOpenJob,
+  canSeeQuotes = false,
+  markHref,
+}: OrderPageProps) {
   const order = useOrder(id);
+  const saved = (useLocation().state as { saved?: string } | null)?.saved;
   return (
     <QueryState query={order} what="the order">
       {(o) => (
@@ -172,13 +193,22 @@ export function OrderPage({ id, canEdit, canOpenJob, canSeeQuotes = false }: Ord
             <TextLink to="/orders">← Orders</TextLink>
           </p>
           <Header order={o} canEdit={canEdit} canOpenJob={canOpenJob} canSeeQuotes={canSeeQuotes} />
+          {saved ? (
+            <Alert tone="success" className="mb-4">
+              {saved}
+            </Alert>
+          ) : null}
           {!canEdit ? (
             <Alert className="mb-4">
               You can follow this order here; the plant’s sales desk makes the changes.
             </Alert>
           ) : null}
           <div className="grid gap-6">
-            <Lines order={o} canEdit={canEdit} />
+            <Lines
+              order={o}
+              canEdit={canEdit}
+              markHref={markHref ? (line) => markHref(o.id, line) : undefined}
+            />
             <OrderHistory entries={o.history} />
           </div>
         </>
