@@ -21,6 +21,7 @@ import { useSaveLine } from '../api/save-line';
 import { formToRequest, serverFieldErrors, type FormUnits } from '../form/convert';
 import type { TrussFormErrors, TrussFormField, TrussFormValues } from '../form/values';
 import type { FieldContext } from './FormFields';
+import { CompareProfiles } from './CompareProfiles';
 import { ProfilePicker } from './ProfilePicker';
 import { GeometryFields, LineFields, LoadFields, LumberFields } from './TrussFields';
 import { useLiveDesign } from './use-live-design';
@@ -249,6 +250,12 @@ export function TrussEditor({
                 )}
               </div>
             </Card>
+            <CompareProfiles
+              input={reading.input}
+              current={values.profile}
+              disabled={readOnly}
+              onPick={onProfile}
+            />
             {presented ? (
               <div>
                 {live.stale && !fallback ? (
