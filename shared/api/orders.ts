@@ -67,14 +67,14 @@ export type UpdateLineInput = z.infer<typeof updateLineSchema>;
 
 /** Body of `POST /api/orders/:id/lines/reorder`: every line id of the order in the new order. */
 export const reorderLinesSchema = z.object({
-  lineIds: z.array(z.number().int().positive()).min(1),
+  lineIds: z.array(z.number().int().positive()).min(1, 'Send every line of this order'),
 });
 
 /** Body of `POST /api/orders/:id/lines/:lineId/review`. A return needs a comment. */
 export const reviewSchema = z
   .object({
     decision: z.enum(['approve', 'return'], { message: 'Approve or return' }),
-    comment: z.string().trim().max(2000).default(''),
+    comment: z.string().trim().max(2000, 'Use at most 2000 characters').default(''),
   })
   .refine((r) => r.decision === 'approve' || r.comment.length > 0, {
     message: 'Say what needs to change when you send a design back',

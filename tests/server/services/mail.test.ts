@@ -9,10 +9,19 @@ describe('mail through the local SMTP fake', () => {
       to,
       subject: 'Your truss quote',
       text: 'Attached.',
-      attachments: [{ filename: 'quote.pdf', content: Buffer.from('%PDF-1.4 test'), contentType: 'application/pdf' }],
+      attachments: [
+        {
+          filename: 'quote.pdf',
+          content: Buffer.from('%PDF-1.4 test'),
+          contentType: 'application/pdf',
+        },
+      ],
     });
     const got = mailer.fake!.messages().find((m) => m.to.includes(to));
-    expect(got).toMatchObject({ subject: 'Your truss quote', attachments: [{ filename: 'quote.pdf', contentType: 'application/pdf' }] });
+    expect(got).toMatchObject({
+      subject: 'Your truss quote',
+      attachments: [{ filename: 'quote.pdf', contentType: 'application/pdf' }],
+    });
     expect(got!.text).toContain('Attached.');
   });
 });
