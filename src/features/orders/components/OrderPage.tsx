@@ -71,6 +71,19 @@ function Header({
   );
 }
 
+/**
+ * After a move the row is re-rendered (its buttons were disabled meanwhile): put keyboard focus
+ * back on the same move button of the moved line, or its other one at the top or bottom.
+ */
+function keepFocusOnMove(mark: string, step: -1 | 1) {
+  requestAnimationFrame(() => {
+    const button = (dir: string) =>
+      document.querySelector<HTMLButtonElement>(`button[aria-label="Move ${mark} ${dir}"]`);
+    const same = button(step < 0 ? 'up' : 'down');
+    (same && !same.disabled ? same : button(step < 0 ? 'down' : 'up'))?.focus();
+  });
+}
+
 function Lines({
   order,
   canEdit,
@@ -94,7 +107,7 @@ function Lines({
 
   const onMove = (line: LineSummary, step: -1 | 1) => {
     const lineIds = movedLineIds(order.lines, line.id, step);
-    if (lineIds) reorder.mutate(lineIds);
+    if (lineIds) reorder.mutate(lineIds, { onSettled: () => keepFocusOnMove(line.mark, step) });
   };
   const confirmDelete = () => {
     if (!deleting) return;
