@@ -43,6 +43,9 @@ const config: Config = {
       danger: { 50: '#fcefed', 200: '#f2bcb4', 600: '#b4281a', 700: '#962014', 800: '#741a10' },
       info: { 50: '#ebf3f9', 200: '#b4d2e8', 700: '#1b5a86', 800: '#15476a' },
       focus: '#2f6fb0',
+      // The CSI ramp, lightest to darkest in order of severity: cool and pale while a member has
+      // room, warm and dark as it nears capacity; red (and hatched) when it fails.
+      csi: { 1: '#dbe7f0', 2: '#a9c6de', 3: '#d99a2b', 4: '#b86614', 5: '#b4281a' },
     },
     fontFamily: {
       sans: ['Inter', 'system-ui', 'sans-serif'],

@@ -1,11 +1,16 @@
 import type { CreateCustomerInput, UpdateCustomerInput } from '../../shared/api/customers';
 import type { CreateJobInput, UpdateJobInput } from '../../shared/api/jobs';
-import { Customer, Job, type User } from '../models';
+import { Op, col, fn, where, type Transaction } from 'sequelize';
+import { Customer, Job, Plant, type User } from '../models';
+import { AppError } from '../errors';
+import { jobDesignLoadsOf } from '../presenters/plant';
 import { audit } from './audit';
+import { markStaleLines } from './staleLines';
 
 /** The sales desk adds a builder company to its plant. */
 export async function createCustomer(actor: User, input: CreateCustomerInput) {
   return Customer.sequelize!.transaction(async (t) => {
+    if (!input.confirmDuplicate) await refuseLikelyDuplicate(actor.plantId, input, t);
     const customer = await Customer.create(
       {
         plantId: actor.plantId,
@@ -29,6 +34,33 @@ export async function createCustomer(actor: User, input: CreateCustomerInput) {
     });
     return customer;
   });
+}
+
+/**
+ * Builders are not duplicated silently: the same name (ignoring case and spacing) or e-mail as an
+ * existing builder of the plant answers 409 `possible_duplicate` naming it, and the desk confirms.
+ */
+async function refuseLikelyDuplicate(plantId: number, input: CreateCustomerInput, t: Transaction) {
+  const name = input.name.replace(/\s+/g, ' ').toLowerCase();
+  const match = await Customer.findOne({
+    where: {
+      plantId,
+      [Op.or]: [
+        where(fn('lower', fn('regexp_replace', col('name'), '\\s+', ' ', 'g')), name),
+        { email: input.email },
+      ],
+    },
+    transaction: t,
+  });
+  if (!match) return;
+  const sameMail = match.email === input.email;
+  const field = sameMail ? 'email' : 'name';
+  throw new AppError(
+    409,
+    'possible_duplicate',
+    `${match.name} already exists with ${sameMail ? `the e-mail ${match.email}` : 'that name'}. Open it, or create this builder anyway.`,
+    { [field]: `Already used by ${match.name}`, existingId: String(match.id) },
+  );
 }
 
 /** Edit a builder company's details, terms or contacts. */
@@ -76,7 +108,11 @@ export async function createJob(actor: User, customer: Customer, input: CreateJo
 /** Edit a job: address, plan revision or its design criteria. */
 export async function updateJob(actor: User, job: Job, input: UpdateJobInput) {
   return Job.sequelize!.transaction(async (t) => {
+    const plant = await Plant.findByPk(job.plantId, { transaction: t });
+    const before = jobDesignLoadsOf(plant!, job.criteria ?? {});
     await job.update(input, { transaction: t });
+    const after = jobDesignLoadsOf(plant!, job.criteria ?? {});
+    await markStaleLines(t, actor, job, before, after, plant!.units === 'imperial' ? 'psf' : 'kPa');
     await audit(t, {
       plantId: actor.plantId,
       actorId: actor.id,

@@ -4,6 +4,7 @@ import { Order, OrderLine, Plant, type Job, type User } from '../models';
 import { AppError, badRequest, conflict, notFound } from '../errors';
 import { computeDesign, type ComputedDesign } from '../services/design';
 import { orderEvent } from './audit';
+import { assertMarkFree, isNoChange } from './lineMarks';
 
 /**
  * Lock order: every command that touches an order and its lines locks the order row first, then the
@@ -31,7 +32,7 @@ const lockLine = async (orderId: number, lineId: number, t: Transaction) => {
  * order's lines may change too: it goes back to draft (its quotes stay as written; the next quote
  * is a new revision) and its history says so.
  */
-const lockOrder = async (order: Order, t: Transaction, actor: User) => {
+export const lockOrder = async (order: Order, t: Transaction, actor: User) => {
   const o = await lockOrderRow(order.id, t);
   if (o.status === 'quoted') {
     await o.update({ status: 'draft' }, { transaction: t });
@@ -46,7 +47,7 @@ const lockOrder = async (order: Order, t: Transaction, actor: User) => {
   return o;
 };
 
-const designColumns = (d: ComputedDesign) => ({
+export const designColumns = (d: ComputedDesign) => ({
   profile: d.profile,
   designInput: d.input as unknown as Record<string, unknown>,
   designResult: d.result as unknown as Record<string, unknown>,
@@ -55,6 +56,8 @@ const designColumns = (d: ComputedDesign) => ({
   maxCsi: d.maxCsi,
   warningCount: d.warningCount,
   description: d.description,
+  loadsOutOfDate: false,
+  outOfDateReason: null,
 });
 
 /** Open a draft order for a job, numbered per plant ("2026-0001"). */
@@ -83,6 +86,7 @@ export async function addLine(actor: User, order: Order, input: CreateLineInput)
   const design = computeDesign(input.design, { plies: input.plies });
   return Order.sequelize!.transaction(async (t) => {
     await lockOrder(order, t, actor);
+    await assertMarkFree(order.id, input.mark, t);
     const max = (await OrderLine.max('position', {
       where: { orderId: order.id },
       transaction: t,
@@ -119,6 +123,7 @@ export async function updateLine(
   loaded: OrderLine,
   input: UpdateLineInput,
 ) {
+  if (isNoChange(loaded, input)) return loaded; // a save that changes nothing records nothing
   const redesignOf = (l: OrderLine) =>
     input.design !== undefined || (input.plies !== undefined && input.plies !== l.plies);
   const designFor = (l: OrderLine) =>
@@ -134,6 +139,8 @@ export async function updateLine(
     const plies = input.plies ?? line.plies;
     const unchanged = line.designVersion === loaded.designVersion && line.plies === loaded.plies;
     const design = !redesign ? null : early && unchanged ? early : designFor(line);
+    if (input.mark !== undefined && input.mark.toUpperCase() !== line.mark.toUpperCase())
+      await assertMarkFree(order.id, input.mark, t, line.id);
     const changes: Partial<OrderLine> = {};
     if (input.mark !== undefined) changes.mark = input.mark;
     if (input.quantity !== undefined) changes.quantity = input.quantity;

@@ -1,10 +1,11 @@
 import { DESIGN_CAUTIONS, type PresentedDesign } from '../../shared/engine/design';
 import { Customer, Job, Order, OrderLine, Plant, Quote, type User } from '../models';
-import { conflict } from '../errors';
+import { AppError, conflict } from '../errors';
 import { queueMail } from '../services/mailQueue';
 import { priceQuote, summarizeDesign, type QuoteSnapshot } from '../services/pricing';
 import { formatMoney, formatDate } from '../services/quotePdf/format';
 import { orderEvent } from './audit';
+import { stableJson } from './lineMarks';
 import { pricesFor } from './priceBook';
 
 /** Orders that may take a new quote revision: a draft, or one already quoted. */
@@ -13,9 +14,16 @@ const QUOTABLE = new Set(['draft', 'quoted']);
 const isoDate = (d: Date) => d.toISOString().slice(0, 10);
 const addDays = (d: Date, days: number) => new Date(d.getTime() + days * 86_400_000);
 
+/** A new snapshot that says exactly what the stored revision says. */
+const sameQuote = (previous: Quote, snapshot: QuoteSnapshot) =>
+  stableJson(previous.snapshot) === stableJson(snapshot);
+
 /** Why an order's lines cannot be quoted yet, or null when they can. */
 function quoteRefusal(lines: OrderLine[]): string | null {
   if (lines.length === 0) return 'This order has no truss lines to quote yet.';
+  const stale = lines.filter((l) => l.loadsOutOfDate).map((l) => l.mark);
+  if (stale.length)
+    return `The job’s loads changed after ${stale.join(', ')} ${stale.length === 1 ? 'was' : 'were'} designed. Redesign ${stale.length === 1 ? 'it' : 'them'} with the current loads before quoting.`;
   const failing = lines.filter((l) => !l.designOk).map((l) => l.mark);
   if (failing.length === 0) return null;
   const which = failing.length === 1 ? `the design of ${failing[0]} fails` : '';
@@ -98,6 +106,16 @@ export async function createQuote(actor: User, order: Order) {
       cautions: [...DESIGN_CAUTIONS],
       demoPrices: prices.demo,
     };
+    const previous = last
+      ? await Quote.findOne({ where: { orderId: order.id, number: last }, transaction: t })
+      : null;
+    if (previous && previous.validUntil >= isoDate(new Date()) && sameQuote(previous, snapshot))
+      throw new AppError(
+        409,
+        'quote_unchanged',
+        `Nothing has changed since ${previous.reference} (valid until ${previous.validUntil}). Open that revision instead of making an identical one.`,
+        { number: String(previous.number) },
+      );
     const number = (last ?? 0) + 1;
     const createdAt = new Date();
     const quote = await Quote.create(

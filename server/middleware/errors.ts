@@ -14,6 +14,19 @@ export const errorHandler: ErrorRequestHandler = (err, _req, res, _next) => {
       .json({ error: { code: err.code, message: err.message, fields: err.fields } });
     return;
   }
+  // Two writers raced for one mark: the database's unique index decided.
+  if (
+    (err as { parent?: { constraint?: string } }).parent?.constraint === 'order_lines_mark_unique'
+  ) {
+    res.status(409).json({
+      error: {
+        code: 'duplicate_mark',
+        message: 'That mark is already used in this order.',
+        fields: { mark: 'That mark is already used in this order — pick another mark' },
+      },
+    });
+    return;
+  }
   // Body-parser errors (malformed JSON, too large) are the client's mistake.
   const status = (err as { status?: number; type?: string }).status;
   if (status && status >= 400 && status < 500) {

@@ -45,6 +45,9 @@ export class OrderLine extends Model<
   declare bandedCount: CreationOptional<number>;
   declare loadedCount: CreationOptional<number>;
   declare deliveredCount: CreationOptional<number>;
+  /** The job's design loads changed after this design was made: redesign before quoting. */
+  declare loadsOutOfDate: CreationOptional<boolean>;
+  declare outOfDateReason: CreationOptional<string | null>;
   declare createdAt: CreationOptional<Date>;
   declare updatedAt: CreationOptional<Date>;
   declare order?: NonAttribute<Order>;
@@ -76,6 +79,8 @@ export class OrderLine extends Model<
         bandedCount: { type: DataTypes.INTEGER, allowNull: false, defaultValue: 0 },
         loadedCount: { type: DataTypes.INTEGER, allowNull: false, defaultValue: 0 },
         deliveredCount: { type: DataTypes.INTEGER, allowNull: false, defaultValue: 0 },
+        loadsOutOfDate: { type: DataTypes.BOOLEAN, allowNull: false, defaultValue: false },
+        outOfDateReason: { type: DataTypes.TEXT, allowNull: true },
         createdAt: DataTypes.DATE,
         updatedAt: DataTypes.DATE,
       },

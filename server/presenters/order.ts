@@ -50,6 +50,8 @@ export function presentLineSummary(l: OrderLine): LineSummary {
     reviewedBy: l.reviewer?.name ?? null,
     reviewedAt: l.reviewedAt?.toISOString() ?? null,
     engineVersion: l.engineVersion,
+    loadsOutOfDate: l.loadsOutOfDate,
+    outOfDateReason: l.outOfDateReason,
     updatedAt: l.updatedAt.toISOString(),
     designVersion: l.designVersion,
   };
@@ -97,6 +99,10 @@ export function summarizeEvent(e: AuditEvent): string {
       return `Sent ${d(e, 'reference')} to ${d(e, 'to') ?? 'the builder'}`;
     case 'order.reopened':
       return 'Back to draft: lines changed after quoting; the next quote is a new revision';
+    case 'lines.out_of_date':
+      return `Job loads changed (${d(e, 'change')}): ${((e.data.marks as string[]) ?? []).join(', ')} out of date`;
+    case 'line.redesigned':
+      return `Redesigned ${d(e, 'mark')} with the job’s current loads${e.data.wasApproved ? '; its approval no longer applies' : ''}${e.data.ok === false ? ' (design fails its checks)' : ''}`;
     case 'line.returned':
       return `Sent ${d(e, 'mark')} back: ${d(e, 'comment')}`;
     case 'order.released':

@@ -1,4 +1,5 @@
-import type { AreaLoads } from '../../shared/api/jobs';
+import type { AreaLoads, DesignCriteria } from '../../shared/api/jobs';
+import { jobDesignLoads } from '../../shared/api/jobLoads';
 import type { PlantDetail } from '../../shared/api/plant';
 import type { Plant } from '../models';
 
@@ -7,6 +8,10 @@ export const DEFAULT_LOADS: Record<'imperial' | 'metric', AreaLoads> = {
   imperial: { tcll: 20, tcdl: 10, bcll: 0, bcdl: 10 },
   metric: { tcll: 0.96, tcdl: 0.48, bcll: 0, bcdl: 0.48 },
 };
+
+/** A job's loads for its trusses: the plant's defaults with the job's overrides, snow and wind. */
+export const jobDesignLoadsOf = (plant: Plant, criteria: DesignCriteria) =>
+  jobDesignLoads(plantDefaultLoads(plant), criteria);
 
 export const plantDefaultLoads = (plant: Plant): AreaLoads => ({
   ...DEFAULT_LOADS[plant.units],

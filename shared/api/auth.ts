@@ -4,7 +4,7 @@ import { ROLES } from './roles';
 /** Body of `POST /api/auth/login`. */
 export const loginSchema = z.object({
   email: z.string().trim().toLowerCase().email('Enter a valid e-mail address'),
-  password: z.string().min(1, 'Enter your password').max(200),
+  password: z.string().min(1, 'Enter your password').max(200, 'Use at most 200 characters'),
 });
 export type LoginInput = z.infer<typeof loginSchema>;
 

@@ -10,7 +10,7 @@ const optionalText = (max: number) =>
     .optional();
 
 export const contactSchema = z.object({
-  name: z.string().trim().min(1, 'Enter the contact’s name').max(120),
+  name: z.string().trim().min(1, 'Enter the contact’s name').max(120, 'Use at most 120 characters'),
   title: optionalText(80),
   email: z
     .string()
@@ -25,7 +25,7 @@ export const contactSchema = z.object({
 export type Contact = z.infer<typeof contactSchema>;
 
 const customerFields = z.object({
-  name: z.string().trim().min(1, 'Enter the company name').max(160),
+  name: z.string().trim().min(1, 'Enter the company name').max(160, 'Use at most 160 characters'),
   email: z.string().trim().toLowerCase().email('Enter a valid e-mail address'),
   phone: optionalText(40),
   terms: z.enum(['account', 'deposit'], { message: 'Pick credit account or deposit required' }),
@@ -37,6 +37,8 @@ const customerFields = z.object({
 /** Body of `POST /api/customers` — a builder company. */
 export const createCustomerSchema = customerFields.extend({
   contacts: customerFields.shape.contacts.default([]),
+  /** Create even though a builder with the same name or e-mail exists (the desk was asked). */
+  confirmDuplicate: z.boolean().optional(),
 });
 export type CreateCustomerInput = z.infer<typeof createCustomerSchema>;
 

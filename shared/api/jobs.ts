@@ -13,7 +13,7 @@ const load = (label: string) =>
 export const designCriteriaSchema = z.object({
   groundSnow: load('Ground snow load').nullable().optional(),
   windUplift: load('Wind uplift').nullable().optional(),
-  exposureNotes: z.string().trim().max(1000).nullable().optional(),
+  exposureNotes: z.string().trim().max(1000, 'Use at most 1000 characters').nullable().optional(),
   loads: z
     .object({
       tcll: load('TCLL').optional(),
@@ -26,9 +26,13 @@ export const designCriteriaSchema = z.object({
 export type DesignCriteria = z.infer<typeof designCriteriaSchema>;
 
 const jobFields = z.object({
-  name: z.string().trim().min(1, 'Enter a job name').max(160),
-  address: z.string().trim().min(1, 'Enter the site address').max(400),
-  planRevision: z.string().trim().max(40).nullable().optional(),
+  name: z.string().trim().min(1, 'Enter a job name').max(160, 'Use at most 160 characters'),
+  address: z
+    .string()
+    .trim()
+    .min(1, 'Enter the site address')
+    .max(400, 'Use at most 400 characters'),
+  planRevision: z.string().trim().max(40, 'Use at most 40 characters').nullable().optional(),
   criteria: designCriteriaSchema,
 });
 

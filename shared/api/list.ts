@@ -2,9 +2,14 @@ import { z } from 'zod';
 
 /** Query of every paged list endpoint. */
 export const listQuerySchema = z.object({
-  q: z.string().trim().max(100).optional(),
-  page: z.coerce.number().int().min(1).default(1),
-  pageSize: z.coerce.number().int().min(1).max(100).default(25),
+  q: z.string().trim().max(100, 'Use at most 100 characters').optional(),
+  page: z.coerce.number().int().min(1, 'Pages start at 1').default(1),
+  pageSize: z.coerce
+    .number()
+    .int()
+    .min(1, 'At least 1 per page')
+    .max(100, 'At most 100 per page')
+    .default(25),
   sort: z
     .string()
     .regex(/^-?[a-zA-Z]+$/, 'Sort by a column name, with - for descending')

@@ -68,14 +68,14 @@ export type UpdateLineInput = z.infer<typeof updateLineSchema>;
 
 /** Body of `POST /api/orders/:id/lines/reorder`: every line id of the order in the new order. */
 export const reorderLinesSchema = z.object({
-  lineIds: z.array(z.number().int().positive()).min(1),
+  lineIds: z.array(z.number().int().positive()).min(1, 'Send every line of this order'),
 });
 
 /** Body of `POST /api/orders/:id/lines/:lineId/review`. A return needs a comment. */
 export const reviewSchema = z
   .object({
     decision: z.enum(['approve', 'return'], { message: 'Approve or return' }),
-    comment: z.string().trim().max(2000).default(''),
+    comment: z.string().trim().max(2000, 'Use at most 2000 characters').default(''),
     /** The line's `designVersion` the reviewer looked at; a newer design answers 409 `stale`. */
     designVersion: z
       .number({ message: 'Reload the design: the review must name the version you looked at' })
@@ -105,6 +105,9 @@ export const lineSummarySchema = z.object({
   reviewedBy: z.string().nullable(),
   reviewedAt: z.string().nullable(),
   engineVersion: z.string(),
+  /** The job's loads changed after this design: redesign before quoting. */
+  loadsOutOfDate: z.boolean(),
+  outOfDateReason: z.string().nullable(),
   updatedAt: z.string(),
   /** Raised by every design change; `POST …/review` must name the current one. */
   designVersion: z.number().int(),

@@ -52,7 +52,7 @@ export const priceBookSchema = z.object({
     .min(1, 'At least 1 day')
     .max(365, 'At most 365 days')
     .default(30),
-  terms: z.string().trim().max(4000).default(''),
+  terms: z.string().trim().max(4000, 'Use at most 4000 characters').default(''),
 });
 export type PriceBook = z.infer<typeof priceBookSchema>;
 

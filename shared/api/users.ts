@@ -10,7 +10,7 @@ const password = z
 export const createUserSchema = z
   .object({
     email: z.string().trim().toLowerCase().email('Enter a valid e-mail address'),
-    name: z.string().trim().min(1, 'Enter a name').max(120),
+    name: z.string().trim().min(1, 'Enter a name').max(120, 'Use at most 120 characters'),
     role: z.enum(ROLES, { message: 'Pick a role' }),
     password,
     customerId: z.number().int().positive().nullable().optional(),
@@ -24,7 +24,12 @@ export type CreateUserInput = z.infer<typeof createUserSchema>;
 /** Body of `PATCH /api/users/:id`. */
 export const updateUserSchema = z
   .object({
-    name: z.string().trim().min(1, 'Enter a name').max(120).optional(),
+    name: z
+      .string()
+      .trim()
+      .min(1, 'Enter a name')
+      .max(120, 'Use at most 120 characters')
+      .optional(),
     role: z.enum(ROLES).optional(),
     active: z.boolean().optional(),
     password: password.optional(),

@@ -47,6 +47,7 @@ import { Spinner } from '../components/ui';
 import { listParamsFromSearch } from '../lib/list-params';
 import { canManageSales } from '../lib/permissions';
 import { AppFrame } from './AppFrame';
+import { markLinkFor } from './mark-links';
 import { ErrorPage, NotFoundPage } from './ErrorPages';
 import { redirectIfSignedIn, requireRole, requireSession } from './guards';
 import { SECTION_ROLES } from './navigation';
@@ -264,6 +265,7 @@ export function createAppRouter(queryClient: QueryClient) {
                         me.user.role,
                       )}
                       canSeeShop={['admin', 'sales', 'foreman'].includes(me.user.role)}
+                      markHref={markLinkFor(me.user.role)}
                     />
                   )}
                 />

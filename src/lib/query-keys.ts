@@ -49,6 +49,7 @@ export const reviewKeys = resourceKeys('reviews');
 export const designKeys = {
   all: ['designs'] as const,
   preview: (input: unknown) => ['designs', 'preview', input] as const,
+  compare: (input: unknown) => ['designs', 'compare', input] as const,
 };
 
 /** Query keys of the signed-in user's plant. */

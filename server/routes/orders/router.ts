@@ -13,6 +13,7 @@ import {
   reviewLine,
   updateLine,
 } from '../../commands/orders';
+import { redesignWithJobLoads } from '../../commands/staleLines';
 import { Order, type OrderLine } from '../../models';
 import { releaseIfReady } from '../../commands/release';
 import { conflict, notFound } from '../../errors';
@@ -194,6 +195,19 @@ export function ordersRouter() {
     handle(async (req, res) => {
       const copy = await copyLine(req.user!, res.locals.record, res.locals.line as OrderLine);
       res.status(201).json(presentLine((await findLine(copy.orderId, copy.id))!));
+    }),
+  );
+
+  router.post(
+    '/:id/lines/:lineId/redesign',
+    requireUser,
+    order,
+    loadLine,
+    authorize(orderPolicy.editLines),
+    requireDraft,
+    handle(async (req, res) => {
+      const line = await redesignWithJobLoads(req.user!, res.locals.record, res.locals.line);
+      res.json(presentLine((await findLine(line.orderId, line.id))!));
     }),
   );
 

@@ -15,6 +15,7 @@ export type LengthUnits = 'imperial' | 'metric';
 const DECIMAL = /^(?:\d+(?:\.\d*)?|\.\d+)$/;
 const MIXED = /^(\d+)[\s-]+(\d+)\/(\d+)$/;
 const FRACTION = /^(\d+)\/(\d+)$/;
+const FEET_DASH_INCHES = /^(\d+)-(\d+(?:\.\d+)?(?: \d+\/\d+)?)$/;
 
 /** Typographic primes and words become the two marks the grammar knows: ' and ". */
 const normalizeImperial = (text: string): string =>
@@ -47,6 +48,10 @@ const imperialHint = (text: string) =>
 /** Imperial text → inches. Bare numbers are inches (a sales desk types 342 1/2 for 28'-6 1/2"). */
 const parseImperial = (raw: string): number | ParseError => {
   let s = normalizeImperial(raw);
+  // "28-6" and "28-6 1/2" are feet-dash-inches as the trade writes them without marks ("6-1/2",
+  // a whole number dashed to a fraction, stays inches).
+  const dashed = FEET_DASH_INCHES.exec(s);
+  if (dashed) s = `${dashed[1]}'${dashed[2]}"`;
   const negative = s.startsWith('-');
   if (negative) s = s.slice(1).trim();
   let feet = 0;

@@ -4,3 +4,4 @@ export * from './ids';
 export * from './factors';
 export * from './designValues';
 export * from './cost';
+export * from './weight';

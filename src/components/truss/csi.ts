@@ -1,9 +1,10 @@
 /**
- * The stress-index ramp of the drawing and tables. Our own ramp: blue for comfortable members,
- * amber as a member approaches its capacity and red with hatching when it fails. Blue against
- * amber stays distinct for the common colour-vision deficiencies, each hue has a light and a
- * dark step, and a failing member is also hatched and tagged so colour is never the only cue.
- * Classes are Tailwind tokens of tailwind.config.ts.
+ * The stress-index ramp of the drawing and tables. Our own sequential ramp (tokens `csi-1` …
+ * `csi-5` of tailwind.config.ts): each band darker than the one below it, so the heaviest-looking
+ * member is the most stressed; pale blue while a member has room, amber to burnt orange as it nears
+ * capacity, red with hatching when it fails. Blue against amber stays distinct for the common
+ * colour-vision deficiencies, and a failing member is also hatched and tagged so colour is never
+ * the only cue.
  */
 
 /** One band of the ramp. `upTo` is inclusive; the failing band has `upTo: Infinity`. */
@@ -25,40 +26,40 @@ export const CSI_BANDS: readonly CsiBand[] = [
     id: 'low',
     upTo: 0.5,
     label: '≤ 0.50',
-    stroke: 'stroke-info-200',
-    fill: 'fill-info-200',
+    stroke: 'stroke-csi-1',
+    fill: 'fill-csi-1',
     fails: false,
   },
   {
     id: 'moderate',
     upTo: 0.75,
     label: '≤ 0.75',
-    stroke: 'stroke-info-700',
-    fill: 'fill-info-700',
+    stroke: 'stroke-csi-2',
+    fill: 'fill-csi-2',
     fails: false,
   },
   {
     id: 'high',
     upTo: 0.9,
     label: '≤ 0.90',
-    stroke: 'stroke-warning-200',
-    fill: 'fill-warning-200',
+    stroke: 'stroke-csi-3',
+    fill: 'fill-csi-3',
     fails: false,
   },
   {
     id: 'near',
     upTo: 1,
     label: '≤ 1.00',
-    stroke: 'stroke-warning-700',
-    fill: 'fill-warning-700',
+    stroke: 'stroke-csi-4',
+    fill: 'fill-csi-4',
     fails: false,
   },
   {
     id: 'fails',
     upTo: Infinity,
     label: '> 1.00 fails',
-    stroke: 'stroke-danger-600',
-    fill: 'fill-danger-600',
+    stroke: 'stroke-csi-5',
+    fill: 'fill-csi-5',
     fails: true,
   },
 ];

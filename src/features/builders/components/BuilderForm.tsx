@@ -21,7 +21,7 @@ import { ContactRows } from './ContactRows';
 
 /** What the builder form edits (the create schema's input: every field present). */
 export type BuilderFormValues = z.input<typeof createCustomerSchema>;
-type BuilderFormOutput = z.output<typeof createCustomerSchema>;
+export type BuilderFormOutput = z.output<typeof createCustomerSchema>;
 
 const FIELD_NAMES = Object.keys(createCustomerSchema.shape);
 

@@ -14,7 +14,8 @@ import { useListParams } from '../../../lib/use-list-params';
 import { useCreateCustomer } from '../api/customer';
 import { customerListParamsFromSearch, useCustomers } from '../api/list-customers';
 import { BUILDER_SORT_COLUMNS, builderColumns } from './builder-columns';
-import { BuilderForm, EMPTY_BUILDER } from './BuilderForm';
+import { BuilderForm, EMPTY_BUILDER, type BuilderFormOutput } from './BuilderForm';
+import { DuplicateBuilder, duplicateOf } from './DuplicateBuilder';
 
 /** `/builders`: the plant's builder companies; sort, filter, search and page through the URL. */
 export function BuildersPage() {
@@ -24,6 +25,13 @@ export function BuildersPage() {
   const create = useCreateCustomer();
   const navigate = useNavigate();
   const [adding, setAdding] = useState(false);
+  const [lastValues, setLastValues] = useState<BuilderFormOutput | null>(null);
+  const submit = (values: BuilderFormOutput) => {
+    setLastValues(values);
+    create.mutate(values, {
+      onSuccess: (customer) => void navigate(`/builders/${customer.id}`),
+    });
+  };
 
   const close = () => {
     setAdding(false);
@@ -80,17 +88,18 @@ export function BuildersPage() {
         onPage={(p) => update({ page: p })}
       />
       <Dialog open={adding} title="New builder" onClose={close} wide>
+        <DuplicateBuilder
+          error={create.error}
+          busy={create.isPending}
+          onCreateAnyway={() => lastValues && submit({ ...lastValues, confirmDuplicate: true })}
+        />
         <BuilderForm
           mode="create"
           defaultValues={EMPTY_BUILDER}
           busy={create.isPending}
-          error={create.error}
+          error={duplicateOf(create.error) ? null : create.error}
           onCancel={close}
-          onSubmit={(values) =>
-            create.mutate(values, {
-              onSuccess: (customer) => void navigate(`/builders/${customer.id}`),
-            })
-          }
+          onSubmit={submit}
         />
       </Dialog>
     </>

@@ -1,4 +1,5 @@
 import { useMemo } from 'react';
+import { Link } from 'react-router';
 import type { LineSummary } from '../../../../shared/api/orders';
 import { DataTable, tableColumnHelper, type TableColumn } from '../../../components/ui';
 import { designStateText } from '../line-order';
@@ -38,13 +39,23 @@ function ReviewCell({ line }: { line: LineSummary }) {
   );
 }
 
-const baseColumns = [
+const markColumn = (href?: (line: LineSummary) => string) =>
   column.accessor('mark', {
     header: 'Mark',
-    cell: (info) => (
-      <span className="font-mono font-semibold text-sand-900">{info.getValue()}</span>
-    ),
-  }),
+    cell: (info) =>
+      href ? (
+        <Link
+          to={href(info.row.original)}
+          className="font-mono font-semibold text-timber-700 underline underline-offset-2"
+        >
+          {info.getValue()}
+        </Link>
+      ) : (
+        <span className="font-mono font-semibold text-sand-900">{info.getValue()}</span>
+      ),
+  });
+
+const restColumns = [
   column.accessor('quantity', {
     header: 'Qty',
     cell: (info) => <span className="tabular-nums">{info.getValue()}</span>,
@@ -61,8 +72,15 @@ const baseColumns = [
     id: 'design',
     header: 'Design',
     cell: ({ row }) => (
-      <span className={row.original.designOk ? 'text-success-800' : 'font-medium text-danger-700'}>
-        {designStateText(row.original)}
+      <span className="flex flex-col gap-0.5">
+        <span
+          className={row.original.designOk ? 'text-success-800' : 'font-medium text-danger-700'}
+        >
+          {designStateText(row.original)}
+        </span>
+        {row.original.loadsOutOfDate ? (
+          <span className="text-xs font-medium text-warning-800">Old loads · redesign</span>
+        ) : null}
       </span>
     ),
   }),
@@ -80,18 +98,21 @@ export interface LineTableProps {
   actions?: Omit<LineActionsProps, 'orderId' | 'line' | 'first' | 'last' | 'busy'> & {
     busyLineId: number | null;
   };
+  /** Makes each mark a link (to its design or its review). */
+  markHref?: (line: LineSummary) => string;
 }
 
 /** The order's truss lines in their order, with design and review state. */
-export function LineTable({ orderId, lines, actions }: LineTableProps) {
+export function LineTable({ orderId, lines, actions, markHref }: LineTableProps) {
   const sorted = useMemo(() => [...lines].sort((a, b) => a.position - b.position), [lines]);
   const lastId = sorted.at(-1)?.id;
   const firstId = sorted[0]?.id;
   const columns = useMemo(() => {
-    if (!actions) return baseColumns;
+    const base = [markColumn(markHref), ...restColumns] as TableColumn<LineSummary>[];
+    if (!actions) return base;
     const { busyLineId, ...handlers } = actions;
     return [
-      ...baseColumns,
+      ...base,
       column.display({
         id: 'actions',
         header: () => <span className="sr-only">Actions</span>,
@@ -107,7 +128,7 @@ export function LineTable({ orderId, lines, actions }: LineTableProps) {
         ),
       }),
     ] as TableColumn<LineSummary>[];
-  }, [actions, orderId, firstId, lastId]);
+  }, [actions, orderId, firstId, lastId, markHref]);
 
   return (
     <DataTable

@@ -1,4 +1,5 @@
 import { useState } from 'react';
+import { useLocation } from 'react-router';
 import type { LineSummary, OrderDetail } from '../../../../shared/api/orders';
 import {
   Alert,
@@ -17,6 +18,7 @@ import { movedLineIds } from '../line-order';
 import { LineTable } from './LineTable';
 import { OrderHistory } from './OrderHistory';
 import { OrderStatusBadge } from './StatusBadge';
+import { OutOfDateLines } from './OutOfDateLines';
 
 /** Props of {@link OrderPage}. */
 export interface OrderPageProps {
@@ -29,6 +31,8 @@ export interface OrderPageProps {
   canSeeQuotes?: boolean;
   /** The foreman, sales and admin open shop paper (cut lists, lumber plan, plates, tags) once every line is approved. */
   canSeeShop?: boolean;
+  /** Where a line's mark leads (its design, or its review); none for builders. */
+  markHref?: (orderId: number, line: LineSummary) => string;
 }
 
 function Header({
@@ -81,7 +85,28 @@ function Header({
   );
 }
 
-function Lines({ order, canEdit }: { order: OrderDetail; canEdit: boolean }) {
+/**
+ * After a move the row is re-rendered (its buttons were disabled meanwhile): put keyboard focus
+ * back on the same move button of the moved line, or its other one at the top or bottom.
+ */
+function keepFocusOnMove(mark: string, step: -1 | 1) {
+  requestAnimationFrame(() => {
+    const button = (dir: string) =>
+      document.querySelector<HTMLButtonElement>(`button[aria-label="Move ${mark} ${dir}"]`);
+    const same = button(step < 0 ? 'up' : 'down');
+    (same && !same.disabled ? same : button(step < 0 ? 'down' : 'up'))?.focus();
+  });
+}
+
+function Lines({
+  order,
+  canEdit,
+  markHref,
+}: {
+  order: OrderDetail;
+  canEdit: boolean;
+  markHref?: (line: LineSummary) => string;
+}) {
   const copy = useCopyLine(order.id);
   const remove = useDeleteLine(order.id);
   const reorder = useReorderLines(order.id);
@@ -96,7 +121,7 @@ function Lines({ order, canEdit }: { order: OrderDetail; canEdit: boolean }) {
 
   const onMove = (line: LineSummary, step: -1 | 1) => {
     const lineIds = movedLineIds(order.lines, line.id, step);
-    if (lineIds) reorder.mutate(lineIds);
+    if (lineIds) reorder.mutate(lineIds, { onSettled: () => keepFocusOnMove(line.mark, step) });
   };
   const confirmDelete = () => {
     if (!deleting) return;
@@ -116,6 +141,7 @@ function Lines({ order, canEdit }: { order: OrderDetail; canEdit: boolean }) {
         </Alert>
       ) : null}
       {failed ? <ErrorMessage className="m-4" title="That did not work" error={failed} /> : null}
+      <OutOfDateLines orderId={order.id} lines={order.lines} canEdit={canEdit} />
       {order.lines.length === 0 ? (
         <EmptyState
           title="No trusses on this order yet"
@@ -129,6 +155,7 @@ function Lines({ order, canEdit }: { order: OrderDetail; canEdit: boolean }) {
         <LineTable
           orderId={order.id}
           lines={order.lines}
+          markHref={markHref}
           actions={
             canEdit
               ? {
@@ -182,8 +209,10 @@ export function OrderPage({
   canOpenJob,
   canSeeQuotes = false,
   canSeeShop = false,
+  markHref,
 }: OrderPageProps) {
   const order = useOrder(id);
+  const saved = (useLocation().state as { saved?: string } | null)?.saved;
   return (
     <QueryState query={order} what="the order">
       {(o) => (
@@ -198,13 +227,22 @@ export function OrderPage({
             canSeeQuotes={canSeeQuotes}
             canSeeShop={canSeeShop}
           />
+          {saved ? (
+            <Alert tone="success" className="mb-4">
+              {saved}
+            </Alert>
+          ) : null}
           {!canEdit ? (
             <Alert className="mb-4">
               You can follow this order here; the plant’s sales desk makes the changes.
             </Alert>
           ) : null}
           <div className="grid gap-6">
-            <Lines order={o} canEdit={canEdit} />
+            <Lines
+              order={o}
+              canEdit={canEdit}
+              markHref={markHref ? (line) => markHref(o.id, line) : undefined}
+            />
             <OrderHistory entries={o.history} />
           </div>
         </>

@@ -1,5 +1,6 @@
 import { useNavigate } from 'react-router';
-import { Button, Card, ErrorMessage, QueryState, TextLink } from '../../../components/ui';
+import { Alert, Button, Card, ErrorMessage, QueryState, TextLink } from '../../../components/ui';
+import { isApiError } from '../../../lib/api-client';
 import { useCreateQuote } from '../api/create-quote';
 import { useOrder } from '../api/get-order';
 import { useQuotes } from '../api/list-quotes';
@@ -19,6 +20,10 @@ export function QuotesPage({ orderId, canCreate }: QuotesPageProps) {
   const quotes = useQuotes(orderId);
   const create = useCreateQuote(orderId);
   const navigate = useNavigate();
+  const unchanged =
+    isApiError(create.error) && create.error.code === 'quote_unchanged'
+      ? { message: create.error.message, number: Number(create.error.fields?.number) }
+      : null;
   // A new revision opens at once: the next step is reading it and sending it to the builder.
   const onCreate = () =>
     create.mutate(undefined, {
@@ -49,7 +54,16 @@ export function QuotesPage({ orderId, canCreate }: QuotesPageProps) {
               </Button>
             ) : null}
           </div>
-          {create.error ? (
+          {unchanged ? (
+            <Alert tone="info" title="Nothing has changed" className="mb-4">
+              <p>{unchanged.message}</p>
+              <p className="mt-2">
+                <TextLink to={quotePath(orderId, unchanged.number)}>
+                  Open revision {unchanged.number}
+                </TextLink>
+              </p>
+            </Alert>
+          ) : create.error ? (
             <ErrorMessage className="mb-4" title="The quote was not created" error={create.error} />
           ) : null}
           <Card title="Revisions" flush>

@@ -1,18 +1,27 @@
-import { useCallback, useDeferredValue, useLayoutEffect, useMemo, useRef, useState } from 'react';
+import {
+  useCallback,
+  useDeferredValue,
+  useEffect,
+  useLayoutEffect,
+  useMemo,
+  useRef,
+  useState,
+} from 'react';
 import { useForm, useWatch, type FieldErrors, type Resolver } from 'react-hook-form';
-import { Link, useNavigate } from 'react-router';
+import { Link, useBlocker, useNavigate } from 'react-router';
 import { PROFILE_KIND_LABELS } from '../../../../shared/engine/profiles';
 import { drawingTitle } from '../../../components/truss/dimensions';
 import { DesignResults } from '../../../components/truss/DesignResults';
 import { drawingOfStoredLine } from '../../../components/truss/run-design';
 import { TrussDrawing } from '../../../components/truss/TrussDrawing';
-import { Alert, Button, Card, errorText, PageHeader } from '../../../components/ui';
+import { Alert, Button, Card, Dialog, errorText, PageHeader } from '../../../components/ui';
 import { isApiError } from '../../../lib/api-client';
 import { useServerPreview } from '../api/preview-design';
 import { useSaveLine } from '../api/save-line';
 import { formToRequest, serverFieldErrors, type FormUnits } from '../form/convert';
 import type { TrussFormErrors, TrussFormField, TrussFormValues } from '../form/values';
 import type { FieldContext } from './FormFields';
+import { CompareProfiles } from './CompareProfiles';
 import { ProfilePicker } from './ProfilePicker';
 import { GeometryFields, LineFields, LoadFields, LumberFields } from './TrussFields';
 import { useLiveDesign } from './use-live-design';
@@ -73,6 +82,21 @@ export function TrussEditor({
   const live = useLiveDesign(reading.input);
   const server = useServerPreview(reading.input, live.crashed);
   const save = useSaveLine(orderId, lineId);
+  // Leaving with unsaved edits asks first; a successful save leaves without asking.
+  const leaving = useRef(false);
+  const blocker = useBlocker(
+    ({ currentLocation, nextLocation }) =>
+      !readOnly &&
+      !leaving.current &&
+      formState.isDirty &&
+      currentLocation.pathname !== nextLocation.pathname,
+  );
+  useEffect(() => {
+    if (readOnly || !formState.isDirty) return;
+    const warn = (e: BeforeUnloadEvent) => e.preventDefault();
+    window.addEventListener('beforeunload', warn);
+    return () => window.removeEventListener('beforeunload', warn);
+  }, [readOnly, formState.isDirty]);
 
   // Field messages: design fields speak at once (they drive the drawing); line fields once
   // touched or after a save attempt; the server's messages (set with setError) win.
@@ -127,7 +151,14 @@ export function TrussEditor({
     if (!request) return;
     setSaveError([]);
     save.mutate(request, {
-      onSuccess: () => void navigate(`/orders/${orderId}`),
+      onSuccess: (line) => {
+        leaving.current = true;
+        void navigate(`/orders/${orderId}`, {
+          state: {
+            saved: `Saved ${line.mark}: ${line.description} — ${line.designOk ? 'the design passes' : 'the design fails its checks'}.`,
+          },
+        });
+      },
       onError: (error) => {
         if (isApiError(error) && error.status === 409 && error.code === 'locked') {
           setLocked(error.message);
@@ -219,6 +250,12 @@ export function TrussEditor({
                 )}
               </div>
             </Card>
+            <CompareProfiles
+              input={reading.input}
+              current={values.profile}
+              disabled={readOnly}
+              onPick={onProfile}
+            />
             {presented ? (
               <div>
                 {live.stale && !fallback ? (
@@ -234,6 +271,23 @@ export function TrussEditor({
           </div>
         </div>
       </form>
+      <Dialog
+        open={blocker.state === 'blocked'}
+        title="Leave without saving?"
+        onClose={() => blocker.reset?.()}
+        footer={
+          <>
+            <Button variant="secondary" onClick={() => blocker.reset?.()}>
+              Keep editing
+            </Button>
+            <Button variant="danger" onClick={() => blocker.proceed?.()}>
+              Leave and discard changes
+            </Button>
+          </>
+        }
+      >
+        <p>This truss has changes that are not saved. They are lost if you leave now.</p>
+      </Dialog>
     </>
   );
 }

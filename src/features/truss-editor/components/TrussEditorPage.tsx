@@ -5,7 +5,7 @@ import { useLine } from '../api/get-line';
 import { useOrder } from '../api/get-order';
 import { usePlant } from '../api/get-plant';
 import { designToFormValues } from '../form/convert';
-import { newTrussFormValues } from '../form/values';
+import { newTrussFormValues, nextFreeMark } from '../form/values';
 import { TrussEditor } from './TrussEditor';
 
 const positiveId = (text: string | undefined) => {
@@ -50,11 +50,14 @@ export function TrussEditorPage() {
   }
   const units = plant.data.units;
   const { effectiveLoads, criteria } = job.data;
-  const base = newTrussFormValues(units, {
-    ...effectiveLoads,
-    groundSnow: criteria.groundSnow,
-    windUplift: criteria.windUplift,
-  });
+  const base = {
+    ...newTrussFormValues(units, {
+      ...effectiveLoads,
+      groundSnow: criteria.groundSnow,
+      windUplift: criteria.windUplift,
+    }),
+    mark: nextFreeMark(order.data.lines.map((l) => l.mark)),
+  };
   const stored = line.data;
   const initial = stored ? designToFormValues(stored.design, stored, base) : base;
   const label = `Order ${order.data.number} · ${order.data.job.name} · ${order.data.customer.name}${

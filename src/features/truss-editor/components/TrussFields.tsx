@@ -6,7 +6,11 @@ import { FieldGroup, SelectField, TextField, type FieldContext } from './FormFie
 /** Hints in the plant's units, so the user sees what a bare number means. */
 const hints = (units: 'imperial' | 'metric') =>
   units === 'imperial'
-    ? { long: `e.g. 28'-6 1/2" or 342 1/2 (inches)`, short: 'inches, e.g. 3 1/2', load: 'psf' }
+    ? {
+        long: `e.g. 28'-6 1/2", 28-6 or 342 1/2 (inches)`,
+        short: 'inches, e.g. 3 1/2',
+        load: 'psf',
+      }
     : { long: 'millimetres, e.g. 8687', short: 'millimetres', load: 'kPa' };
 
 /** Mark, quantity and plies of the line. */
@@ -14,7 +18,7 @@ export const LineFields = memo(function LineFields({ ctx }: { ctx: FieldContext 
   return (
     <FieldGroup title="Line">
       <div className="grid grid-cols-3 gap-3">
-        <TextField ctx={ctx} name="mark" label="Mark" placeholder="T1" />
+        <TextField ctx={ctx} name="mark" label="Mark" hint="e.g. T1 or G2-A" />
         <TextField ctx={ctx} name="quantity" label="Quantity" inputMode="numeric" />
         <TextField ctx={ctx} name="plies" label="Plies" inputMode="numeric" />
       </div>

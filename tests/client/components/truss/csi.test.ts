@@ -30,3 +30,20 @@ describe('CSI colour bands', () => {
     expect(CSI_BANDS.filter((b) => b.fails).map((b) => b.id)).toEqual(['fails']);
   });
 });
+
+describe('the CSI ramp reads in order of severity', () => {
+  it('gets darker with every band (relative luminance, WCAG 2.x definition)', async () => {
+    const { default: config } = await import('../../../../tailwind.config');
+    const ramp = (config.theme!.colors as Record<string, Record<string, string>>).csi;
+    const luminance = (hex: string) => {
+      const [r, g, b] = [1, 3, 5].map((i) => {
+        const c = parseInt(hex.slice(i, i + 2), 16) / 255;
+        return c <= 0.04045 ? c / 12.92 : ((c + 0.055) / 1.055) ** 2.4;
+      });
+      return 0.2126 * r + 0.7152 * g + 0.0722 * b;
+    };
+    const token = (cls: string) => cls.replace(/^(stroke|fill)-csi-/, '');
+    const steps = CSI_BANDS.map((b) => luminance(ramp[token(b.stroke)]));
+    for (let i = 1; i < steps.length; i++) expect(steps[i]).toBeLessThan(steps[i - 1]);
+  });
+});

@@ -11,7 +11,14 @@ import {
 } from '../../../support/factories';
 import { signedIn } from '../../../support/session';
 import type { Role } from '../../../../shared/api/roles';
-import { Quote, type Customer, type Order, type Plant, type User } from '../../../../server/models';
+import {
+  OrderLine,
+  Quote,
+  type Customer,
+  type Order,
+  type Plant,
+  type User,
+} from '../../../../server/models';
 import { createQuote, sendQuote } from '../../../../server/commands/quotes';
 import { Op } from 'sequelize';
 import { binary, TEST_BOOK } from './helpers';
@@ -58,7 +65,11 @@ const put = (s: S, url: string, body: object) =>
 const calls: Record<string, (s: S, o: Order) => Promise<request.Response>> = {
   'GET /api/price-book': async (s) => s.get('/api/price-book'),
   'PUT /api/price-book': async (s) => put(s, '/api/price-book', TEST_BOOK),
-  'POST /api/orders/:id/quotes': async (s, o) => s.post(`/api/orders/${o.id}/quotes`),
+  // A change first: an identical revision is refused (the existing one is offered instead).
+  'POST /api/orders/:id/quotes': async (s, o) => {
+    await OrderLine.increment('quantity', { where: { orderId: o.id } });
+    return s.post(`/api/orders/${o.id}/quotes`);
+  },
   'GET /api/orders/:id/quotes': async (s, o) => s.get(`/api/orders/${o.id}/quotes`),
   'GET /api/orders/:id/quotes/:number': async (s, o) =>
     s.get(`/api/orders/${o.id}/quotes/${await latestSent(o)}`),

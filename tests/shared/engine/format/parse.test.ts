@@ -28,6 +28,10 @@ describe('parseLength, imperial', () => {
     [`28’-6”`, 342],
     [`-1'-3"`, -15],
     [`  12  `, 12],
+    // Feet-dash-inches without marks, as the trade writes it (common practice).
+    [`28-6`, 342],
+    [`28-6 1/2`, 342.5],
+    [`6-1/2`, 6.5],
   ])('reads %s as %d in', (text, inches) => {
     expect(mmOf(text)).toBeWithin(inches * IN, { abs: 1e-9 });
   });
