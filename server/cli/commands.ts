@@ -2,7 +2,6 @@ import { ZodError } from 'zod';
 import { designInputSchema, toEngineInput } from '../../shared/api/design';
 import { analyzeTruss, designTruss, isEngineError, presentDesign } from '../../shared/engine';
 import { planCutting } from '../../shared/engine/cutting';
-import { loadLpSolver } from '../services/lp';
 import { cutInputSchema } from './cutSchema';
 import { trussModelSchema } from './modelSchema';
 
@@ -38,6 +37,8 @@ const tidy = (v: number) => Math.round(v * 1e9) / 1e9;
  */
 export async function cutCommand(json: unknown) {
   const input = cutInputSchema.parse(json);
+  // Loaded here so that analyze and design never load the LP solver's WebAssembly module.
+  const { loadLpSolver } = await import('../services/lp');
   const plan = planCutting(
     {
       stocks: input.stocks.map((s) => ({ ...s, cost: s.cost ?? s.length })),

@@ -75,9 +75,13 @@ describe('lumber plans, in a browser', () => {
     await expect
       .poll(() => page.locator('h1').first().textContent(), { timeout: 30000 })
       .toMatch(/^Lumber plan — order /);
-    await expect.poll(() => page.getByText(/least possible cost/).count()).toBeGreaterThan(0);
     await expect
-      .poll(() => page.getByText(/First-fit decreasing would have used/).count())
+      .poll(() => page.getByText(/least possible cost/).count(), { timeout: 30000 })
+      .toBeGreaterThan(0);
+    await expect
+      .poll(() => page.getByText(/First-fit decreasing would have used/).count(), {
+        timeout: 30000,
+      })
       .toBeGreaterThan(0);
     await page.screenshot({ path: `${SCREENSHOTS}/lumber-plan-desktop.png`, fullPage: true });
     // On paper: no navigation and no buttons.
@@ -107,7 +111,9 @@ describe('lumber plans, in a browser', () => {
     await signIn(page, admin);
     await page.getByRole('link', { name: 'Lumber stock' }).first().click();
     await page.waitForURL(/\/stock$/);
-    await expect.poll(() => page.getByText('Invented demo values').count()).toBe(1);
+    await expect
+      .poll(() => page.getByText('Invented demo values').count(), { timeout: 30000 })
+      .toBe(1);
     await page.getByLabel('2x4 12 ft on hand').fill('40');
     await page.getByRole('button', { name: 'Save stock' }).click();
     await expect.poll(() => page.getByText(/Last saved/).count(), { timeout: 30000 }).toBe(1);

@@ -20,6 +20,32 @@ import { useSaveStockSettings } from '../api/save-stock-settings';
 
 const numberOrNull = (text: string) => (text.trim() === '' ? null : Number(text));
 
+/** A right-aligned number input; blank shows for NaN or null. */
+function NumberInput({
+  value,
+  onChange,
+  step = 'any',
+  ...rest
+}: {
+  value: number | null;
+  onChange: (text: string) => void;
+  step?: number | string;
+  disabled: boolean;
+  id?: string;
+  'aria-label'?: string;
+}) {
+  return (
+    <Input
+      type="number"
+      step={step}
+      value={value === null || Number.isNaN(value) ? '' : value}
+      className="max-w-28 text-right tabular-nums"
+      onChange={(e) => onChange(e.target.value)}
+      {...rest}
+    />
+  );
+}
+
 /** One lumber's stock lengths: length, price, count on hand (blank = as many as needed). */
 function LumberTable({
   entry,
@@ -69,36 +95,29 @@ function LumberTable({
           {entry.stocks.map((s, i) => (
             <tr key={i} className="border-t border-sand-200">
               <td className="px-4 py-1.5">
-                <Input
+                <NumberInput
                   aria-label={`${entry.lumber} stock length ${i + 1} (ft)`}
-                  type="number"
-                  step="any"
-                  value={Number.isNaN(s.lengthFt) ? '' : s.lengthFt}
+                  value={s.lengthFt}
                   disabled={!canEdit}
-                  className="max-w-28 text-right tabular-nums"
-                  onChange={(e) => setStock(i, { lengthFt: Number(e.target.value) })}
+                  onChange={(t) => setStock(i, { lengthFt: Number(t) })}
                 />
               </td>
               <td className="px-4 py-1.5">
-                <Input
+                <NumberInput
                   aria-label={`${entry.lumber} ${s.lengthFt} ft price`}
-                  type="number"
                   step="0.01"
-                  value={Number.isNaN(s.price) ? '' : s.price}
+                  value={s.price}
                   disabled={!canEdit}
-                  className="max-w-28 text-right tabular-nums"
-                  onChange={(e) => setStock(i, { price: Number(e.target.value) })}
+                  onChange={(t) => setStock(i, { price: Number(t) })}
                 />
               </td>
               <td className="px-4 py-1.5">
-                <Input
+                <NumberInput
                   aria-label={`${entry.lumber} ${s.lengthFt} ft on hand`}
-                  type="number"
                   step={1}
-                  value={s.onHand ?? ''}
+                  value={s.onHand}
                   disabled={!canEdit}
-                  className="max-w-28 text-right tabular-nums"
-                  onChange={(e) => setStock(i, { onHand: numberOrNull(e.target.value) })}
+                  onChange={(t) => setStock(i, { onHand: numberOrNull(t) })}
                 />
               </td>
               <td className="px-4 py-1.5 text-right">
@@ -171,25 +190,19 @@ function StockForm({ stored, canEdit }: { stored: StoredStockSettings; canEdit: 
             htmlFor="stock-kerf"
             hint="One kerf between neighbouring pieces."
           >
-            <Input
+            <NumberInput
               id="stock-kerf"
-              type="number"
-              step="any"
-              value={Number.isNaN(draft.kerfIn) ? '' : draft.kerfIn}
+              value={draft.kerfIn}
               disabled={!canEdit}
-              className="max-w-28 text-right tabular-nums"
-              onChange={(e) => setDraft({ ...draft, kerfIn: Number(e.target.value) })}
+              onChange={(t) => setDraft({ ...draft, kerfIn: Number(t) })}
             />
           </Field>
           <Field label="End trim (in)" htmlFor="stock-trim" hint="Taken off every board.">
-            <Input
+            <NumberInput
               id="stock-trim"
-              type="number"
-              step="any"
-              value={Number.isNaN(draft.trimIn) ? '' : draft.trimIn}
+              value={draft.trimIn}
               disabled={!canEdit}
-              className="max-w-28 text-right tabular-nums"
-              onChange={(e) => setDraft({ ...draft, trimIn: Number(e.target.value) })}
+              onChange={(t) => setDraft({ ...draft, trimIn: Number(t) })}
             />
           </Field>
         </div>
