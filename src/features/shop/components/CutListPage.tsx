@@ -7,7 +7,7 @@ const linkClass =
 
 function GroupTable({ group }: { group: CutListGroupView }) {
   return (
-    <section className="mb-6 break-inside-avoid-page rounded-md border border-sand-200 bg-white print:mb-4 print:border-sand-400">
+    <section className="mb-6 rounded-md border border-sand-200 bg-white print:mb-4 print:border-sand-400">
       <header className="flex items-baseline justify-between gap-4 border-b border-sand-200 bg-sand-50 px-4 py-3">
         <h2 className="text-lg font-semibold text-sand-900">{group.label}</h2>
         <p className="text-sm text-sand-600">
@@ -28,7 +28,10 @@ function GroupTable({ group }: { group: CutListGroupView }) {
         </thead>
         <tbody>
           {group.rows.map((r) => (
-            <tr key={r.mark} className="border-b border-sand-100 align-top last:border-0">
+            <tr
+              key={r.mark}
+              className="break-inside-avoid border-b border-sand-100 align-top last:border-0"
+            >
               <td className="px-3 py-2 font-semibold whitespace-nowrap">{r.mark}</td>
               <td className="px-3 py-2 text-right font-semibold tabular-nums">{r.quantity}</td>
               <td className="px-3 py-2 text-right font-semibold whitespace-nowrap tabular-nums">
