@@ -12,7 +12,7 @@ import {
 import { signedIn } from '../../../support/session';
 import { AuditEvent, Order, Quote, type OrderLine, type Plant } from '../../../../server/models';
 import { quoteSchema } from '../../../../shared/api/pricing';
-import { binary, hasPdftotext, pdfText, TEST_BOOK } from './helpers';
+import { binary, requirePdftotext, pdfText, TEST_BOOK } from './helpers';
 
 type S = Awaited<ReturnType<typeof signedIn>>;
 let app: ReturnType<typeof testApp>;
@@ -199,7 +199,7 @@ describe('the quote PDF and e-mail', () => {
     expect(res.headers['content-disposition']).toBe(`inline; filename="${quote.reference}.pdf"`);
     const pdf = res.body as Buffer;
     expect(pdf.subarray(0, 5).toString()).toBe('%PDF-');
-    if (!hasPdftotext()) return;
+    requirePdftotext();
     const text = pdfText(pdf);
     const money = (v: number) => `$${v.toFixed(2).replace(/\B(?=(\d{3})+(?!\d))/g, ',')}`;
     expect(text).toContain(quote.reference);
