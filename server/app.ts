@@ -28,6 +28,8 @@ import type { Mailer } from './services/mail';
 import { survivePoolErrors } from './db/resilience';
 import { sweepPartialUploads } from './services/storage';
 import { logger } from './logger';
+import { healthReport, type HealthProbe } from './health';
+import { requestLog } from './middleware/requestLog';
 
 export interface AppOptions {
   sequelize: Sequelize;
@@ -37,6 +39,8 @@ export interface AppOptions {
   clientDir?: string;
   /** Outgoing mail (SMTP_URL or the local fake); without it, sending answers 503. */
   mailer?: Mailer;
+  /** Named checks for `GET /api/health` besides the database (e.g. `mail`, `payments`). */
+  healthProbes?: Record<string, HealthProbe>;
 }
 
 /** The whole HTTP app, without a listener, so tests drive it with supertest. */
@@ -48,6 +52,7 @@ export function createApp(opts: AppOptions) {
   app.locals.demo = config.demo;
   app.set('trust proxy', config.trustProxy > 0 ? config.trustProxy : false);
   app.disable('x-powered-by');
+  app.use(requestLog);
   app.use(
     helmet({
       contentSecurityPolicy: {
@@ -80,13 +85,15 @@ export function createApp(opts: AppOptions) {
     await pool.end().catch(() => undefined);
   };
 
-  app.get('/api/health', async (_req, res) => {
-    try {
-      await opts.sequelize.query('SELECT 1');
-      res.json({ status: 'ok', db: 'ok', demo: config.demo });
-    } catch {
-      res.status(503).json({ status: 'degraded', db: 'unreachable', demo: config.demo });
-    }
+  app.locals.healthProbes = new Map<string, HealthProbe>(Object.entries(opts.healthProbes ?? {}));
+  app.get('/api/health', async (req, res) => {
+    const { ok, checks } = await healthReport(
+      opts.sequelize,
+      req.app.locals.healthProbes as Map<string, HealthProbe>,
+    );
+    res
+      .status(ok ? 200 : 503)
+      .json({ status: ok ? 'ok' : 'degraded', ...checks, demo: config.demo });
   });
 
   app.use('/api', express.json({ limit: '1mb' }));
