@@ -8,17 +8,10 @@ import { existsSync, mkdirSync, readFileSync } from 'node:fs';
 import { connect } from '../server/db/sequelize';
 import { migrator } from '../server/db/migrator';
 import { provideDatabase, TEST_PG_PORT } from './database';
+import { ensureTestTools } from './tools';
 
 const only = process.argv.slice(2); // e.g. `npm test -- tests/server` passes filters to vitest
-for (const [bin, pkg] of [
-  ['/usr/bin/chromium', 'chromium'],
-  ['/usr/bin/ccx', 'calculix-ccx'],
-]) {
-  if (!existsSync(bin))
-    console.warn(
-      `warning: ${bin} is missing (apt-get install -y ${pkg}); tests needing it will fail.`,
-    );
-}
+ensureTestTools(); // chromium, calculix-ccx, poppler-utils: installed as root, else the command
 
 const db = await provideDatabase({
   dir: '.data/test-postgres',

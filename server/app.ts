@@ -43,6 +43,8 @@ import { lumberPlanRouter } from './routes/lumberPlan/router';
 import { productionRouter } from './routes/production/router';
 import { orderProductionRouter } from './routes/orderProduction/router';
 import { floorRouter } from './routes/floor/router';
+import { healthReport, type HealthProbe } from './health';
+import { requestLog } from './middleware/requestLog';
 
 export interface AppOptions {
   sequelize: Sequelize;
@@ -56,6 +58,8 @@ export interface AppOptions {
   mailQueue?: MailQueue | null;
   /** The payment service through the SDK (the local fake or the hosted one); null: none. */
   payments?: Payments | null;
+  /** Named checks for `GET /api/health` besides the database (e.g. `mail`, `payments`). */
+  healthProbes?: Record<string, HealthProbe>;
 }
 
 /** The whole HTTP app, without a listener, so tests drive it with supertest. */
@@ -67,6 +71,7 @@ export function createApp(opts: AppOptions) {
   app.locals.demo = config.demo;
   app.set('trust proxy', config.trustProxy > 0 ? config.trustProxy : false);
   app.disable('x-powered-by');
+  app.use(requestLog);
   app.use(
     helmet({
       contentSecurityPolicy: {
@@ -117,19 +122,27 @@ export function createApp(opts: AppOptions) {
     await pool.end().catch(() => undefined);
   };
 
-  app.get('/api/health', async (_req, res) => {
-    try {
-      await opts.sequelize.query('SELECT 1');
-      res.json({
-        status: 'ok',
-        db: 'ok',
-        demo: config.demo,
-        mail: await mailProbe(app.locals.mailQueue),
-        payments: paymentsProbe(app.locals.payments),
-      });
-    } catch {
-      res.status(503).json({ status: 'degraded', db: 'unreachable', demo: config.demo });
-    }
+  app.locals.healthProbes = new Map<string, HealthProbe>(Object.entries(opts.healthProbes ?? {}));
+  // The mail queue and the payment service report when this app has them.
+  const probes = app.locals.healthProbes as Map<string, HealthProbe>;
+  if (!probes.has('mail') && (opts.mailQueue || opts.mailer))
+    probes.set('mail', async () => {
+      const r = await mailProbe((app.locals.mailQueue as MailQueue | null) ?? null);
+      if (r.status !== 'ok') throw new Error(`mail queue ${r.status}`);
+    });
+  if (!probes.has('payments') && opts.payments)
+    probes.set('payments', async () => {
+      const r = paymentsProbe(opts.payments ?? null);
+      if (r.status !== 'ok') throw new Error(`payments ${r.status}`);
+    });
+  app.get('/api/health', async (req, res) => {
+    const { ok, checks } = await healthReport(
+      opts.sequelize,
+      req.app.locals.healthProbes as Map<string, HealthProbe>,
+    );
+    res
+      .status(ok ? 200 : 503)
+      .json({ status: ok ? 'ok' : 'degraded', ...checks, demo: config.demo });
   });
 
   // Verified over the raw body, so mounted before the JSON parser (and outside session and CSRF).

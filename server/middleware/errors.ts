@@ -7,11 +7,12 @@ export const apiNotFound: RequestHandler = (_req, _res, next) =>
   next(new AppError(404, 'not_found', 'No such API endpoint.'));
 
 /** Every error leaves as `{ error: { code, message, fields? } }`; nothing unexpected leaks. */
-export const errorHandler: ErrorRequestHandler = (err, _req, res, _next) => {
+export const errorHandler: ErrorRequestHandler = (err, req, res, _next) => {
+  const requestId = String(req.id ?? '');
   if (err instanceof AppError) {
     res
       .status(err.status)
-      .json({ error: { code: err.code, message: err.message, fields: err.fields } });
+      .json({ error: { code: err.code, message: err.message, fields: err.fields, requestId } });
     return;
   }
   // Two writers raced for one mark: the database's unique index decided.
@@ -35,12 +36,13 @@ export const errorHandler: ErrorRequestHandler = (err, _req, res, _next) => {
       error: {
         code: tooLarge ? 'too_large' : 'invalid',
         message: tooLarge ? 'The request is too large.' : 'The request body is not valid JSON.',
+        requestId,
       },
     });
     return;
   }
   if (isDatabaseUnavailable(err)) {
-    logger.warn({ err }, 'database unavailable');
+    req.log?.warn({ err }, 'database unavailable');
     res
       .status(503)
       .set('Retry-After', '5')
@@ -48,12 +50,17 @@ export const errorHandler: ErrorRequestHandler = (err, _req, res, _next) => {
         error: {
           code: 'db_unavailable',
           message: 'The database is not reachable right now. Try again in a moment.',
+          requestId,
         },
       });
     return;
   }
-  logger.error({ err }, 'unexpected error');
-  res
-    .status(500)
-    .json({ error: { code: 'internal', message: 'Something went wrong on our side. Try again.' } });
+  (req.log ?? logger).error({ err }, 'unexpected error');
+  res.status(500).json({
+    error: {
+      code: 'internal',
+      message: 'Something went wrong on our side. Try again.',
+      requestId,
+    },
+  });
 };

@@ -41,6 +41,8 @@ export const apiErrorSchema = z.object({
     code: z.string(),
     message: z.string(),
     fields: z.record(z.string(), z.string()).optional(),
+    /** The request's id (also the X-Request-Id header): finds the request in the server's log. */
+    requestId: z.string().optional(),
   }),
 });
 export type ApiErrorBody = z.infer<typeof apiErrorSchema>;

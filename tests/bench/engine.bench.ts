@@ -77,6 +77,9 @@ const fmt = (s: Stats) =>
 const model = thirtyJointTruss();
 console.log(`Node ${process.version}, ${process.platform}/${process.arch}`);
 console.log(
+  `generate profile → line model, 14-panel flat truss:  ${fmt(measure(() => thirtyJointTruss()))}`,
+);
+console.log(
   `analyse, 30-joint flat truss (${model.members.length} members):  ${fmt(measure(() => analyzeTruss(model)))}`,
 );
 for (const [name, draft] of [

@@ -13,7 +13,7 @@ import {
 import { renderQuotePdf } from '../../../server/services/quotePdf';
 import { DESIGN_CAUTIONS } from '../../../shared/engine/design';
 import { FINK_24 } from '../../support/factories';
-import { hasPdftotext, pdfText } from '../routes/quotes/helpers';
+import { requirePdftotext, pdfText } from '../routes/quotes/helpers';
 
 /** A snapshot of `n` FINK_24 lines (invented demo names and prices). */
 function snapshot(n: number, units: 'imperial' | 'metric'): QuoteSnapshot {
@@ -66,7 +66,7 @@ describe('the quote PDF', () => {
   it('runs a long quote over pages with the table header, totals and page numbers', async () => {
     const s = snapshot(40, 'imperial');
     const pdf = await render(s);
-    if (!hasPdftotext()) return;
+    requirePdftotext();
     const text = pdfText(pdf);
     const pages = text.split('\f').filter((p) => p.trim());
     expect(pages.length).toBeGreaterThan(2);
@@ -81,7 +81,7 @@ describe('the quote PDF', () => {
   });
 
   it('is US Letter for imperial plants and A4 for metric, with only Inter embedded', async () => {
-    if (!hasPdftotext()) return;
+    requirePdftotext();
     // pdfinfo reports points: Letter 612 × 792, A4 595.28 × 841.89 (ISO 216, common practice).
     const letter = poppler('pdfinfo', await render(snapshot(2, 'imperial')));
     expect(letter).toMatch(/Page size:\s+612 x 792/);

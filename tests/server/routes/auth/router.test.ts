@@ -40,7 +40,7 @@ describe('sign-in', () => {
     const unknown = await s
       .post('/api/auth/login', { email: 'nobody@example.test', password: 'nope-nope' })
       .expect(401);
-    expect(wrong.body.error).toEqual({
+    expect(wrong.body.error).toMatchObject({
       code: 'bad_credentials',
       message: 'Wrong e-mail or password.',
     });

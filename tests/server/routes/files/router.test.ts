@@ -83,7 +83,7 @@ describe('POST /api/jobs/:id/files', () => {
       'application/pdf',
     );
     expect(res.status).toBe(415);
-    expect(res.body.error).toEqual({
+    expect(res.body.error).toMatchObject({
       code: 'unsupported_type',
       message: 'Upload a PDF, PNG or JPEG plan',
     });

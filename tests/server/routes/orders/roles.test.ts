@@ -12,7 +12,13 @@ import {
 } from '../../../support/factories';
 import { signedIn } from '../../../support/session';
 import type { Role } from '../../../../shared/api/roles';
-import type { Customer, Job, Order, OrderLine, User } from '../../../../server/models';
+import {
+  Order,
+  type Customer,
+  type Job,
+  type OrderLine,
+  type User,
+} from '../../../../server/models';
 
 const app = testApp();
 const ROLES: Role[] = ['admin', 'sales', 'engineer', 'foreman', 'builder'];
@@ -68,6 +74,10 @@ const calls: Record<string, (s: S, w: W) => request.Test> = {
       comment: 'Check it',
       designVersion: w.line.designVersion,
     }),
+  'DELETE /api/orders/:id/lines/:lineId': (s, w) =>
+    s.delete(`/api/orders/${w.order.id}/lines/${w.line.id}`),
+  'POST /api/orders/:id/lines/reorder': (s, w) =>
+    s.post(`/api/orders/${w.order.id}/lines/reorder`, { lineIds: [w.line.id] }),
   'GET /api/reviews': (s) => s.get('/api/reviews'),
   'POST /api/designs/preview': (s) => s.post('/api/designs/preview', FINK_24),
 };
@@ -94,6 +104,18 @@ const expected: Record<string, Record<Role, number>> = {
     admin: 403,
     sales: 403,
     engineer: 200,
+    foreman: 403,
+    builder: 403,
+  },
+  'DELETE /api/orders/:id/lines/:lineId': {
+    ...ok(204),
+    engineer: 403,
+    foreman: 403,
+    builder: 403,
+  },
+  'POST /api/orders/:id/lines/reorder': {
+    ...ok(200),
+    engineer: 403,
     foreman: 403,
     builder: 403,
   },
@@ -135,6 +157,15 @@ describe('sales desk role matrix', () => {
     expect(items.every((o) => o.customer.id === ours.customer.id)).toBe(true);
   });
 
+  it("POST /api/orders with another plant's job answers 404 to the desk and opens nothing", async () => {
+    for (const role of ['admin', 'sales'] as const) {
+      const s = await signedIn(app, users[role].email);
+      const res = await s.post('/api/orders', { jobId: theirs.job.id });
+      expect(res.status, JSON.stringify(res.body)).toBe(404);
+    }
+    expect(await Order.count({ where: { jobId: theirs.job.id } })).toBe(1);
+  });
+
   it('a line id of another order answers 404', async () => {
     const s = await signedIn(app, users.sales.email);
     await s.get(`/api/orders/${ours.order.id}/lines/${other.line.id}`).expect(404);
@@ -147,8 +178,13 @@ describe('sales desk role matrix', () => {
   });
 });
 
-// A fresh line per review call, so an earlier role's review does not change the next one's answer.
+// A fresh line per review or delete call, and a fresh one-line order per reorder, so an earlier
+// role's call does not change the next one's answer.
 async function worldFor(route: string): Promise<W> {
-  if (!route.endsWith('/review')) return ours;
+  if (route.endsWith('/reorder')) {
+    const order = await createOrder({ job: ours.job });
+    return { ...ours, order, line: await createLine({ order }) };
+  }
+  if (!route.endsWith('/review') && !route.startsWith('DELETE')) return ours;
   return { ...ours, line: await createLine({ order: ours.order }) };
 }

@@ -25,14 +25,12 @@ export const binary = (res: request.Response, done: (e: Error | null, b: Buffer)
   res.on('end', () => done(null, Buffer.concat(chunks)));
 };
 
-/** True when poppler's pdftotext runs here; on CI its absence is a failure, locally a skip. */
-export function hasPdftotext() {
-  const ok = spawnSync('pdftotext', ['-v']).error === undefined;
-  if (!ok && process.env.CI)
-    throw new Error('pdftotext is missing (apt-get install poppler-utils)');
-  if (!ok)
-    console.warn('pdftotext is missing (apt-get install poppler-utils): PDF text not checked');
-  return ok;
+/** Fails when poppler's pdftotext is missing: the PDF checks never pass by being skipped. */
+export function requirePdftotext() {
+  if (spawnSync('pdftotext', ['-v']).error !== undefined)
+    throw new Error(
+      'pdftotext is missing: apt-get install -y poppler-utils (npm test installs it as root)',
+    );
 }
 
 /** The text of a PDF by poppler's pdftotext (layout kept, so table rows stay on one line). */

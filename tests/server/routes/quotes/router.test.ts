@@ -19,7 +19,7 @@ import {
   type Plant,
 } from '../../../../server/models';
 import { quoteSchema } from '../../../../shared/api/pricing';
-import { binary, hasPdftotext, pdfText, TEST_BOOK } from './helpers';
+import { binary, requirePdftotext, pdfText, TEST_BOOK } from './helpers';
 
 type S = Awaited<ReturnType<typeof signedIn>>;
 let app: ReturnType<typeof testApp>;
@@ -206,7 +206,7 @@ describe('the quote PDF and e-mail', () => {
     expect(res.headers['content-disposition']).toBe(`inline; filename="${quote.reference}.pdf"`);
     const pdf = res.body as Buffer;
     expect(pdf.subarray(0, 5).toString()).toBe('%PDF-');
-    if (!hasPdftotext()) return;
+    requirePdftotext();
     const text = pdfText(pdf);
     const money = (v: number) => `$${v.toFixed(2).replace(/\B(?=(\d{3})+(?!\d))/g, ',')}`;
     expect(text).toContain(quote.reference);

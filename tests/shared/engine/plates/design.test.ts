@@ -263,11 +263,7 @@ describe('plate choice', () => {
     ).toThrow(/needs a direction/);
   });
 
-  it('is cheap enough to run per joint on every keystroke', () => {
-    const t0 = performance.now();
-    for (let i = 0; i < 200; i++) designJointPlate(heel(800 + i), DEMO_PLATE_CATALOG);
-    expect((performance.now() - t0) / 200).toBeLessThan(5);
-  });
+  // Its speed is measured by `npm run bench` (the full designs include every joint's plate).
 });
 
 describe('lateralValueAtAngle', () => {

@@ -317,10 +317,5 @@ describe('generateProfile: web layouts', () => {
     },
   );
 
-  it('is cheap enough to run on every keystroke', () => {
-    const start = performance.now();
-    for (let i = 0; i < 2000; i++) generateProfile(base('doubleFink', { span: 9000 + i }));
-    // About 40 µs a call on a laptop; the bound is loose so a busy machine does not fail it.
-    expect(performance.now() - start).toBeLessThan(2000);
-  });
+  // Its speed is measured by `npm run bench` (profile generation line), not asserted here.
 });
