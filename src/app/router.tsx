@@ -1,15 +1,10 @@
 import type { QueryClient } from '@tanstack/react-query';
-import type { ReactNode } from 'react';
-import { createBrowserRouter, redirect, useParams, type LoaderFunctionArgs } from 'react-router';
-import type { Me } from '../../shared/api/auth';
+import { createBrowserRouter, redirect, type LoaderFunctionArgs } from 'react-router';
 import { customerQueryOptions } from '../features/builders/api/customer';
 import {
   customerListParamsFromSearch,
   customersQueryOptions,
 } from '../features/builders/api/list-customers';
-import { BuilderPage } from '../features/builders/components/BuilderPage';
-import { BuildersPage } from '../features/builders/components/BuildersPage';
-import { useMe } from '../features/auth/api/me';
 import { SignInPage } from '../features/auth/components/SignInPage';
 import { healthQueryOptions } from '../features/auth/api/health';
 import {
@@ -17,17 +12,10 @@ import {
   recentJobsQueryOptions,
   usersOverviewQueryOptions,
 } from '../features/dashboard/api/dashboard-queries';
-import { DashboardPage } from '../features/dashboard/components/DashboardPage';
 import { jobQueryOptions, plantQueryOptions } from '../features/jobs/api/job';
 import { jobListParamsFromSearch, jobsQueryOptions } from '../features/jobs/api/list-jobs';
-import { BuilderJobs } from '../features/jobs/components/BuilderJobs';
-import { JobPage } from '../features/jobs/components/JobPage';
-import { JobsPage } from '../features/jobs/components/JobsPage';
 import { orderListParamsFromSearch, ordersQueryOptions } from '../features/orders/api/list-orders';
 import { orderQueryOptions } from '../features/orders/api/order';
-import { JobOrders } from '../features/orders/components/JobOrders';
-import { OrderPage } from '../features/orders/components/OrderPage';
-import { OrdersPage } from '../features/orders/components/OrdersPage';
 import { reviewRoutes } from '../features/reviews/routes';
 import { trussEditorRoutes } from '../features/truss-editor/routes';
 import { planFileRoutes } from '../features/plan-files/routes';
@@ -42,12 +30,9 @@ import { scheduleRoutes } from '../features/schedule/routes';
 import { floorRoutes } from '../features/floor/routes';
 import { productionSettingsRoutes } from '../features/production-settings/routes';
 import { usersQueryOptions } from '../features/users/api/list-users';
-import { UsersPage } from '../features/users/components/UsersPage';
 import { Spinner } from '../components/ui';
 import { listParamsFromSearch } from '../lib/list-params';
-import { canManageSales } from '../lib/permissions';
 import { AppFrame } from './AppFrame';
-import { markLinkFor } from './mark-links';
 import { ErrorPage, NotFoundPage } from './ErrorPages';
 import { redirectIfSignedIn, requireRole, requireSession } from './guards';
 import { SECTION_ROLES } from './navigation';
@@ -87,17 +72,10 @@ function idParam(value: string | undefined): number {
   return id;
 }
 
-/** Renders a page with the signed-in session and the route's `:id` (the loaders checked both). */
-function WithMe({ render }: { render: (me: Me, id: number) => ReactNode }) {
-  const me = useMe().data;
-  const { id } = useParams();
-  return me ? <>{render(me, id === undefined ? 0 : idParam(id))}</> : null;
-}
-
-function HomeRoute() {
-  const me = useMe().data;
-  return me ? <DashboardPage me={me} /> : null;
-}
+/** A desk page, loaded when first opened (the sign-in page and the portal never load them). */
+const desk = (name: keyof typeof import('./desk-pages')) => async () => ({
+  Component: (await import('./desk-pages'))[name],
+});
 
 /** The route table: public sign-in, then the guarded frame with one section per role. */
 export function createAppRouter(queryClient: QueryClient) {
@@ -151,14 +129,14 @@ export function createAppRouter(queryClient: QueryClient) {
                       : [];
                 return prefetch(Promise.all([jobs, ...extra]));
               },
-              element: <HomeRoute />,
+              lazy: desk('HomeRoute'),
             },
             {
               path: 'users',
               loader: section(SECTION_ROLES.users, ({ request }) =>
                 prefetch(queryClient.ensureQueryData(usersQueryOptions(paramsOf(request)))),
               ),
-              element: <UsersPage />,
+              lazy: desk('UsersRoute'),
             },
             {
               path: 'builders',
@@ -169,7 +147,7 @@ export function createAppRouter(queryClient: QueryClient) {
                   ),
                 ),
               ),
-              element: <BuildersPage />,
+              lazy: desk('BuildersRoute'),
             },
             {
               path: 'builders/:id',
@@ -181,23 +159,7 @@ export function createAppRouter(queryClient: QueryClient) {
                   ]),
                 ),
               ),
-              element: (
-                <WithMe
-                  render={(me, id) => (
-                    <BuilderPage
-                      id={id}
-                      canEdit={canManageSales(me.user.role)}
-                      jobs={(customer) => (
-                        <BuilderJobs
-                          customerId={customer.id}
-                          customerName={customer.name}
-                          canEdit={canManageSales(me.user.role)}
-                        />
-                      )}
-                    />
-                  )}
-                />
-              ),
+              lazy: desk('BuilderRoute'),
             },
             {
               path: 'jobs',
@@ -208,7 +170,7 @@ export function createAppRouter(queryClient: QueryClient) {
                   ),
                 ),
               ),
-              element: <WithMe render={(me) => <JobsPage role={me.user.role} />} />,
+              lazy: desk('JobsRoute'),
             },
             {
               path: 'jobs/:id',
@@ -220,23 +182,7 @@ export function createAppRouter(queryClient: QueryClient) {
                   ]),
                 ),
               ),
-              element: (
-                <WithMe
-                  render={(me, id) => (
-                    <JobPage
-                      id={id}
-                      canEdit={canManageSales(me.user.role)}
-                      canOpenBuilder={(SECTION_ROLES.builders as readonly string[]).includes(
-                        me.user.role,
-                      )}
-                      canListJobs={(SECTION_ROLES.jobs as readonly string[]).includes(me.user.role)}
-                      orders={(job) => (
-                        <JobOrders job={job} canEdit={canManageSales(me.user.role)} />
-                      )}
-                    />
-                  )}
-                />
-              ),
+              lazy: desk('JobRoute'),
             },
             {
               path: 'orders',
@@ -247,29 +193,14 @@ export function createAppRouter(queryClient: QueryClient) {
                   ),
                 ),
               ),
-              element: <WithMe render={(me) => <OrdersPage role={me.user.role} />} />,
+              lazy: desk('OrdersRoute'),
             },
             {
               path: 'orders/:id',
               loader: section(SECTION_ROLES.orders, ({ params }) =>
                 prefetch(queryClient.ensureQueryData(orderQueryOptions(idParam(params.id)))),
               ),
-              element: (
-                <WithMe
-                  render={(me, id) => (
-                    <OrderPage
-                      id={id}
-                      canEdit={canManageSales(me.user.role)}
-                      canOpenJob={(SECTION_ROLES.job as readonly string[]).includes(me.user.role)}
-                      canSeeQuotes={(SECTION_ROLES.quotes as readonly string[]).includes(
-                        me.user.role,
-                      )}
-                      canSeeShop={['admin', 'sales', 'foreman'].includes(me.user.role)}
-                      markHref={markLinkFor(me.user.role)}
-                    />
-                  )}
-                />
-              ),
+              lazy: desk('OrderRoute'),
             },
             ...trussEditorRoutes(queryClient),
             ...reviewRoutes(queryClient),

@@ -9,7 +9,7 @@ import { testDatabaseUrl, testMailer, testSequelize } from './db';
  * The app on a loopback port with the payments fake (the SDK pointed at it, its webhooks at the
  * app) and the test mailer with its queue worker. `close()` stops all of it.
  */
-export async function paymentsWorld() {
+export async function paymentsWorld(clientDir?: string, config: { demo?: boolean } = {}) {
   const fake: PaymentsFake = await startPaymentsFake();
   const payments = createPayments({
     secretKey: fake.secretKey,
@@ -19,7 +19,8 @@ export async function paymentsWorld() {
   const app = createApp({
     sequelize: testSequelize(),
     databaseUrl: testDatabaseUrl(),
-    config: { demo: false, loginAttemptsPer15Min: 1000 },
+    config: { demo: false, loginAttemptsPer15Min: 1000, ...config },
+    clientDir,
     mailer: await testMailer(),
     payments,
   });

@@ -5,7 +5,6 @@ import { requireRole } from '../../app/guards';
 import { listParamsFromSearch } from '../../lib/list-params';
 import { reviewLineQueryOptions } from './api/get-line';
 import { reviewQueueQueryOptions } from './api/list-reviews';
-import { ReviewPage } from './components/ReviewPage';
 import { ReviewQueuePage } from './components/ReviewQueuePage';
 import { orderIdFromSearch } from './review-link';
 
@@ -48,7 +47,8 @@ export function reviewRoutes(queryClient: QueryClient): RouteObject[] {
         if (orderId === undefined || !Number.isInteger(lineId) || lineId <= 0) return null;
         return settleWithin(queryClient.ensureQueryData(reviewLineQueryOptions(orderId, lineId)));
       },
-      element: <ReviewPage />,
+      // The review page draws with the engine: loaded only when a reviewer opens it.
+      lazy: async () => ({ Component: (await import('./components/ReviewPage')).ReviewPage }),
     },
   ];
 }
