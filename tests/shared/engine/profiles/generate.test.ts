@@ -125,7 +125,8 @@ describe('generateProfile: determinate, stable plane trusses', () => {
       }
     }
     expect(built).toBeGreaterThan(60);
-  });
+    // An SVD per profile: seconds on a busy 2-core machine, so more than the default 5 s.
+  }, 60_000);
 });
 
 describe('generateProfile: geometry', () => {
