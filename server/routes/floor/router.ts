@@ -11,6 +11,7 @@ import { settingsFor } from '../../commands/productionSettings';
 import { Customer, Order, OrderLine, SchedulePlacement } from '../../models';
 import { inspectionSchema, progressSchema, type FloorDay } from '../../../shared/api/production';
 import { inspectionLog, recordInspection } from '../../commands/inspections';
+import { renderDailySheet, type LumberByLine } from '../../services/dailySheet';
 import { handle } from '../load';
 
 const dayQuery = z.object({
@@ -94,6 +95,36 @@ export function floorRouter() {
         orderStatus: order.status,
         replayed,
       });
+    }),
+  );
+
+  router.get(
+    '/sheet.pdf',
+    requireUser,
+    validate(dayQuery, 'query'),
+    authorize(productionPolicy.floor),
+    handle(async (req, res) => {
+      const date = (res.locals.query as { date?: string }).date ?? plantToday();
+      const day = await floorDay(req.user!.plantId, date);
+      const ids = day.tables.flatMap((t) => t.lines.map((l) => l.lineId));
+      const rows = await OrderLine.findAll({
+        where: { id: { [Op.in]: ids } },
+        attributes: ['id', 'designResult'],
+      });
+      const lumber: LumberByLine = new Map();
+      for (const r of rows) {
+        const pieces = (r.designResult.pieces ?? []) as { lumber: string }[];
+        const count = new Map<string, number>();
+        for (const p of pieces) count.set(p.lumber, (count.get(p.lumber) ?? 0) + 1);
+        lumber.set(
+          r.id,
+          [...count].map(([k, n]) => `${k} × ${n}`),
+        );
+      }
+      res
+        .type('application/pdf')
+        .set('Content-Disposition', `inline; filename="daily-sheet-${date}.pdf"`)
+        .send(await renderDailySheet(day, lumber));
     }),
   );
 

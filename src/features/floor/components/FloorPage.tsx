@@ -138,6 +138,12 @@ export function FloorPage() {
             <>
               <div className="mb-4 flex items-center justify-between gap-4">
                 <h1 className="text-3xl font-bold text-sand-900">Today · {day.date}</h1>
+                <a
+                  href={`/api/floor/sheet.pdf?date=${day.date}`}
+                  className="min-h-14 rounded-lg border-2 border-sand-300 bg-white px-4 py-3 text-lg text-sand-800"
+                >
+                  Daily sheet (PDF)
+                </a>
                 <div className="flex gap-2" role="tablist" aria-label="Tables">
                   {day.tables.map((t) => (
                     <button

@@ -6,6 +6,7 @@ import { formatDay } from '../../../../server/services/productionMail';
 import { createUser } from '../../../support/factories';
 import { signedIn } from '../../../support/session';
 import { orderIn, productionWorld } from './helpers';
+import { binary, pdfText } from '../quotes/helpers';
 
 let w: Awaited<ReturnType<typeof productionWorld>>;
 const today = new Date().toISOString().slice(0, 10);
@@ -120,5 +121,22 @@ describe('the schedule', () => {
         date: addCalendarDays(today, -1),
       })
       .expect(400);
+  });
+});
+
+describe('the foreman’s daily sheet', () => {
+  it('prints, per table, the trusses to build today with their lumber and the cautions', async () => {
+    const res = await w.foreman
+      .get('/api/floor/sheet.pdf')
+      .buffer(true)
+      .parse(binary)
+      .expect(200)
+      .expect('Content-Type', /pdf/);
+    const text = pdfText(res.body as Buffer);
+    expect(text).toContain(`Daily sheet · ${today}`);
+    expect(text).toMatch(/T1 — build \d+ \(of 4\)/);
+    expect(text).toMatch(/Lumber: 2x\d/);
+    expect(text).toContain('Cautions');
+    await w.sales.get('/api/floor/sheet.pdf').expect(403);
   });
 });
