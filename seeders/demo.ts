@@ -8,7 +8,6 @@ import { DEMO_PASSWORD, DEMO_SIGN_INS } from '../shared/api/demo';
 import { seedOrders } from './orders';
 import { seedPriceBook } from './priceBook';
 
-
 const CUSTOMERS = [
   {
     name: 'Whitaker Homes',

@@ -41,7 +41,7 @@ describe('the builder portal on a phone (390 × 844)', () => {
     await page.getByLabel('Password').fill(TEST_PASSWORD);
     await page.getByRole('button', { name: 'Sign in' }).click();
     await page.waitForURL(`${world.base}/portal`);
-    await page.getByRole("link", { name: new RegExp(quote.reference) }).waitFor();
+    await page.getByRole('link', { name: new RegExp(quote.reference) }).waitFor();
     await shot('1-home');
 
     await page.getByRole('link', { name: new RegExp(quote.reference) }).click();
