@@ -126,6 +126,10 @@ describe('the schedule', () => {
 
 describe('the foreman’s daily sheet', () => {
   it('prints, per table, the trusses to build today with their lumber and the cautions', async () => {
+    const { order } = await orderIn(w.plant, { status: 'deposit_paid' });
+    await w.admin
+      .post(`/api/orders/${order.id}/release`, { reason: 'Paid at the counter' })
+      .expect(200);
     const res = await w.foreman
       .get('/api/floor/sheet.pdf')
       .buffer(true)
