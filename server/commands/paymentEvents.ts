@@ -117,6 +117,10 @@ async function refundCreated(t: Transaction, order: Order, r: Stripe.Refund) {
  * waits for a command still writing to it (a refund being requested). Events may come in any order.
  * Returns false for a duplicate.
  */
+/** The order an event belongs to (from its metadata), or null. */
+export const eventOrderId = (event: Stripe.Event): number | null =>
+  orderIdOf(event.data.object as Meta) ?? null;
+
 export async function applyPaymentEvent(event: Stripe.Event): Promise<boolean> {
   const object = event.data.object as Meta;
   const orderId = orderIdOf(object);

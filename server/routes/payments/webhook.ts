@@ -1,7 +1,8 @@
 import express, { Router } from 'express';
 import type Stripe from 'stripe';
 import { AppError } from '../../errors';
-import { applyPaymentEvent } from '../../commands/paymentEvents';
+import { applyPaymentEvent, eventOrderId } from '../../commands/paymentEvents';
+import { releaseWhenReady } from '../../services/autoRelease';
 import type { Payments } from '../../services/payments';
 import { handle } from '../load';
 
@@ -30,6 +31,7 @@ export function paymentsWebhookRouter() {
         throw new AppError(400, 'bad_signature', 'The webhook signature does not verify.');
       }
       const fresh = await applyPaymentEvent(event);
+      if (fresh) await releaseWhenReady(eventOrderId(event), req.app.locals.mailer ?? null);
       res.json({ received: true, duplicate: !fresh });
     }),
   );
