@@ -18,7 +18,7 @@ const LANDING: Record<Role, string> = {
   sales: 'Sales desk',
   engineer: 'Design review',
   foreman: 'Shop floor',
-  builder: 'Your jobs',
+  builder: 'What needs you',
 };
 
 let browser: BrowserContext;

@@ -103,15 +103,24 @@ describe('parallel writes to one order', () => {
     expect(seq[9] - seq[0]).toBe(9);
   });
 
-  it('parallel quotes of one order get revisions 1…n without gaps', async () => {
+  it('parallel quotes of one order get revisions without gaps, and no identical twin', async () => {
     const order = await createOrder({ plant });
-    await createLine({ order });
+    const line = await createLine({ order });
+    // Six identical requests at once: one revision; the rest are offered it (409 quote_unchanged).
     const res = await Promise.all(
       Array.from({ length: 6 }, () => sales.post(`/api/orders/${order.id}/quotes`)),
     );
-    expect(res.map((r) => r.status)).toEqual(Array(6).fill(201));
+    expect(res.map((r) => r.status).sort()).toEqual([201, 409, 409, 409, 409, 409]);
+    expect(res.filter((r) => r.status === 409).map((r) => r.body.error.code)).toEqual(
+      Array(5).fill('quote_unchanged'),
+    );
+    // Changed orders quoted again: each revision takes the next number.
+    for (let i = 0; i < 3; i++) {
+      await line.increment('quantity');
+      await sales.post(`/api/orders/${order.id}/quotes`).expect(201);
+    }
     const numbers = (await Quote.findAll({ where: { orderId: order.id } })).map((q) => q.number);
-    expect(numbers.sort((a, b) => a - b)).toEqual([1, 2, 3, 4, 5, 6]);
+    expect(numbers.sort((a, b) => a - b)).toEqual([1, 2, 3, 4]);
   });
 
   it('parallel edits of one line record a true "before" in every audit event', async () => {

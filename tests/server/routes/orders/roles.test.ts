@@ -50,8 +50,15 @@ beforeAll(async () => {
 type W = typeof ours;
 // Each call is made fresh per role (creates use new data so they can succeed).
 const calls: Record<string, (s: S, w: W) => request.Test> = {
-  'POST /api/customers': (s) =>
-    s.post('/api/customers', { name: 'New Co', email: 'new@co.test', terms: 'deposit' }),
+  // Each call a new company: the same name or e-mail twice asks first (409 possible_duplicate).
+  'POST /api/customers': (s) => {
+    const n = Math.random().toString(36).slice(2, 10);
+    return s.post('/api/customers', {
+      name: `New Co ${n}`,
+      email: `new-${n}@co.test`,
+      terms: 'deposit',
+    });
+  },
   'PATCH /api/customers/:id': (s, w) =>
     s.patch(`/api/customers/${w.customer.id}`, { phone: '555-0101' }),
   'POST /api/customers/:id/jobs': (s, w) =>

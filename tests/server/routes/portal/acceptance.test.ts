@@ -6,6 +6,7 @@ import {
   AuditEvent,
   MailMessage,
   Order,
+  OrderLine,
   QuoteAcceptance,
   type Plant,
 } from '../../../../server/models';
@@ -81,6 +82,8 @@ describe('accepting a quote', () => {
 
   it('a superseded revision answers 409 and the latest can be accepted', async () => {
     const { builder, sales, order } = await sentQuoteWorld(plant);
+    // A changed order (an identical revision would be refused: the existing one is offered).
+    await OrderLine.increment('quantity', { where: { orderId: order.id } });
     const q2 = await createQuote(sales, order);
     await sendQuote(sales, await order.reload(), q2);
     const s = await signedIn(app, builder.email);
