@@ -1,6 +1,7 @@
 import { releaseIfReady } from '../commands/release';
 import { logger } from '../logger';
 import type { Mailer } from './mail';
+import type { User } from '../models';
 
 /**
  * After money arrives or a quote is accepted, release the order by itself if it may now be
@@ -8,10 +9,14 @@ import type { Mailer } from './mail';
  * the payment's: a failure here leaves the payment recorded and is logged; the next approval,
  * payment or a manual release catches up.
  */
-export async function releaseWhenReady(orderId: number | null, mailer: Mailer | null) {
+export async function releaseWhenReady(
+  orderId: number | null,
+  mailer: Mailer | null,
+  actor: User | null = null,
+) {
   if (orderId === null) return;
   try {
-    await releaseIfReady(null, orderId, mailer);
+    await releaseIfReady(actor, orderId, mailer);
   } catch (err) {
     logger.warn({ err, orderId }, 'automatic release after payment failed');
   }

@@ -108,7 +108,8 @@ export async function createLine(
   return OrderLine.create({
     orderId: order.id,
     position: position + 1,
-    mark: attrs.mark ?? `T${position + 1}`,
+    // Marks are unique per order: one past the highest T-number (positions may have gaps).
+    mark: attrs.mark ?? (await nextTestMark(order.id)),
     quantity: attrs.quantity ?? 4,
     plies: attrs.plies ?? 1,
     profile: d.profile,
@@ -121,4 +122,11 @@ export async function createLine(
     description: d.description,
     reviewState: attrs.reviewState ?? 'pending',
   });
+}
+
+async function nextTestMark(orderId: number) {
+  const marks = (await OrderLine.findAll({ where: { orderId }, attributes: ['mark'] })).map(
+    (l) => l.mark,
+  );
+  return `T${Math.max(0, ...marks.map((m) => Number(/^T(\d+)$/i.exec(m)?.[1] ?? 0))) + 1}`;
 }

@@ -15,7 +15,7 @@ import {
 } from '../../commands/orders';
 import { redesignWithJobLoads } from '../../commands/staleLines';
 import { Order, type OrderLine } from '../../models';
-import { releaseIfReady } from '../../commands/release';
+import { releaseWhenReady } from '../../services/autoRelease';
 import { conflict, notFound } from '../../errors';
 import { presentLine, presentOrderSummary } from '../../presenters/order';
 import { presentPage } from '../../presenters/page';
@@ -222,8 +222,9 @@ export function ordersRouter() {
       const line = await reviewLine(req.user!, res.locals.record, res.locals.line, res.locals.body);
       // An approval may complete the release gate (production planning).
       if (line.reviewState === 'approved')
-        await releaseIfReady(req.user!, line.orderId, req.app.locals.mailer ?? null);
-      res.json(presentLine((await findLine(line.orderId, line.id))!));
+        await releaseWhenReady(line.orderId, req.app.locals.mailer ?? null, req.user!);
+      // The line as stored now; deleted by a concurrent request since, the reviewed row itself.
+      res.json(presentLine((await findLine(line.orderId, line.id)) ?? line));
     }),
   );
 

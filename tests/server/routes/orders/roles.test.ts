@@ -68,7 +68,11 @@ const calls: Record<string, (s: S, w: W) => request.Test> = {
   'POST /api/orders': (s, w) => s.post('/api/orders', { jobId: w.job.id }),
   'GET /api/orders/:id': (s, w) => s.get(`/api/orders/${w.order.id}`),
   'POST /api/orders/:id/lines': (s, w) =>
-    s.post(`/api/orders/${w.order.id}/lines`, { mark: 'T9', quantity: 1, design: FINK_24 }),
+    s.post(`/api/orders/${w.order.id}/lines`, {
+      mark: `N${Math.random().toString(36).slice(2, 8)}`, // marks are unique within an order
+      quantity: 1,
+      design: FINK_24,
+    }),
   'GET /api/orders/:id/lines/:lineId': (s, w) =>
     s.get(`/api/orders/${w.order.id}/lines/${w.line.id}`),
   'PATCH /api/orders/:id/lines/:lineId': (s, w) =>

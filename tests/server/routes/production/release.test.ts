@@ -1,5 +1,5 @@
 import { beforeAll, describe, expect, it } from 'vitest';
-import { AuditEvent, Order, SchedulePlacement } from '../../../../server/models';
+import { AuditEvent, Order, OrderLine, SchedulePlacement } from '../../../../server/models';
 import { orderIn, productionWorld } from './helpers';
 
 let w: Awaited<ReturnType<typeof productionWorld>>;
@@ -7,8 +7,18 @@ beforeAll(async () => {
   w = await productionWorld();
 });
 
-const approve = (orderId: number, lineId: number) =>
-  w.engineer.post(`/api/orders/${orderId}/lines/${lineId}/review`, { decision: 'approve' });
+// A review names the design version the reviewer looked at.
+const approve = (orderId: number, lineId: number) => ({
+  expect: async (status: number) => {
+    const line = (await OrderLine.findByPk(lineId))!;
+    return w.engineer
+      .post(`/api/orders/${orderId}/lines/${lineId}/review`, {
+        decision: 'approve',
+        designVersion: line.designVersion,
+      })
+      .expect(status);
+  },
+});
 const statusOf = async (id: number) => (await Order.findByPk(id))!.status;
 const mailsTo = (to: string) => w.mailer.fake!.messages().filter((m) => m.to.includes(to));
 
