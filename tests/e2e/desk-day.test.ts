@@ -8,9 +8,8 @@ import {
   createOrder,
   createPlant,
   createUser,
-  TEST_PASSWORD,
 } from '../support/factories';
-import { launchBrowser, listen, SCREENSHOTS } from '../support/browser';
+import { launchBrowser, listen, SCREENSHOTS, signInAs } from '../support/browser';
 import type { Plant, User } from '../../server/models';
 
 let browser: BrowserContext;
@@ -20,14 +19,7 @@ let base: string;
 let plant: Plant;
 let sales: User;
 
-async function signIn(page: Page, user: User) {
-  await browser.clearCookies();
-  await page.goto(`${base}/sign-in`);
-  await page.getByLabel('E-mail').fill(user.email);
-  await page.getByLabel('Password').fill(TEST_PASSWORD);
-  await page.getByRole('button', { name: 'Sign in' }).click();
-  await page.waitForURL(`${base}/`);
-}
+const signIn = (page: Page, user: User) => signInAs(browser, page, base, user.email);
 
 beforeAll(async () => {
   plant = await createPlant({ name: 'Desk Day Test Plant' });

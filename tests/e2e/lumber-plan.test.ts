@@ -3,7 +3,7 @@ import type { Server } from 'node:http';
 import type { BrowserContext, Page } from 'playwright-core';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import type { Order, User } from '../../server/models';
-import { launchBrowser, listen, SCREENSHOTS } from '../support/browser';
+import { launchBrowser, listen, SCREENSHOTS, signInAs } from '../support/browser';
 import { testApp } from '../support/db';
 import {
   createCustomer,
@@ -12,7 +12,6 @@ import {
   createOrder,
   createPlant,
   createUser,
-  TEST_PASSWORD,
 } from '../support/factories';
 
 let browser: BrowserContext;
@@ -23,14 +22,7 @@ let foreman: User;
 let admin: User;
 let order: Order;
 
-async function signIn(page: Page, user: User) {
-  await browser.clearCookies();
-  await page.goto(`${base}/sign-in`);
-  await page.getByLabel('E-mail').fill(user.email);
-  await page.getByLabel('Password').fill(TEST_PASSWORD);
-  await page.getByRole('button', { name: 'Sign in' }).click();
-  await page.waitForURL(`${base}/`);
-}
+const signIn = (page: Page, user: User) => signInAs(browser, page, base, user.email);
 
 beforeAll(async () => {
   const plant = await createPlant({ name: 'Lumber Plan Test Plant' });

@@ -9,9 +9,8 @@ import {
   createOrder,
   createPlant,
   createUser,
-  TEST_PASSWORD,
 } from '../support/factories';
-import { launchBrowser, listen, SCREENSHOTS } from '../support/browser';
+import { launchBrowser, listen, SCREENSHOTS, signInAs } from '../support/browser';
 import { Order, OrderLine, ProductionSettings, type User } from '../../server/models';
 import { releaseIfReady } from '../../server/commands/release';
 import { addCalendarDays } from '../../shared/engine/schedule';
@@ -25,14 +24,7 @@ let stays: Order;
 let moves: Order;
 const today = new Date().toISOString().slice(0, 10);
 
-async function signIn(page: Page, user: User) {
-  await browser.clearCookies();
-  await page.goto(`${base}/sign-in`);
-  await page.getByLabel('E-mail').fill(user.email);
-  await page.getByLabel('Password').fill(TEST_PASSWORD);
-  await page.getByRole('button', { name: 'Sign in' }).click();
-  await page.waitForURL(`${base}/`);
-}
+const signIn = (page: Page, user: User) => signInAs(browser, page, base, user.email);
 
 /** A paid order with approved lines, released by the gate itself. */
 async function releasedOrder(plantId: number, builder: string, marks: string[]) {

@@ -11,9 +11,8 @@ import {
   createOrder,
   createPlant,
   createUser,
-  TEST_PASSWORD,
 } from '../support/factories';
-import { launchBrowser, listen, SCREENSHOTS } from '../support/browser';
+import { launchBrowser, listen, SCREENSHOTS, signInAs } from '../support/browser';
 import { Quote, type Job, type Order, type User } from '../../server/models';
 
 let browser: BrowserContext;
@@ -25,14 +24,7 @@ let admin: User;
 let order: Order;
 let job: Job;
 
-async function signIn(page: Page, user: User) {
-  await browser.clearCookies();
-  await page.goto(`${base}/sign-in`);
-  await page.getByLabel('E-mail').fill(user.email);
-  await page.getByLabel('Password').fill(TEST_PASSWORD);
-  await page.getByRole('button', { name: 'Sign in' }).click();
-  await page.waitForURL(`${base}/`);
-}
+const signIn = (page: Page, user: User) => signInAs(browser, page, base, user.email);
 
 beforeAll(async () => {
   const plant = await createPlant({ name: 'Quotes Test Plant' });

@@ -2,8 +2,8 @@ import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import type { BrowserContext, Page } from 'playwright-core';
 import type { Server } from 'node:http';
 import { testApp, testMailer } from '../support/db';
-import { createPlant, createUser, TEST_PASSWORD } from '../support/factories';
-import { launchBrowser, listen, SCREENSHOTS } from '../support/browser';
+import { createPlant, createUser } from '../support/factories';
+import { launchBrowser, listen, SCREENSHOTS, signInAs } from '../support/browser';
 import { OrderLine, type Plant, type User } from '../../server/models';
 
 let browser: BrowserContext;
@@ -15,14 +15,7 @@ let sales: User;
 let engineer: User;
 const state: { orderUrl?: string; jobUrl?: string } = {};
 
-async function signIn(page: Page, user: User) {
-  await browser.clearCookies(); // one profile for the whole file: start each person signed out
-  await page.goto(`${base}/sign-in`);
-  await page.getByLabel('E-mail').fill(user.email);
-  await page.getByLabel('Password').fill(TEST_PASSWORD);
-  await page.getByRole('button', { name: 'Sign in' }).click();
-  await page.waitForURL(`${base}/`);
-}
+const signIn = (page: Page, user: User) => signInAs(browser, page, base, user.email);
 
 beforeAll(async () => {
   plant = await createPlant({ name: 'Sales Desk Test Plant' });

@@ -11,9 +11,8 @@ import {
   createOrder,
   createPlant,
   createUser,
-  TEST_PASSWORD,
 } from '../support/factories';
-import { launchBrowser, listen, SCREENSHOTS } from '../support/browser';
+import { launchBrowser, listen, SCREENSHOTS, signInAs } from '../support/browser';
 import type { Order, OrderLine, User } from '../../server/models';
 
 let browser: BrowserContext;
@@ -26,14 +25,7 @@ let t1: OrderLine;
 
 const TABLET = { width: 1024, height: 768 };
 
-async function signIn(page: Page, user: User) {
-  await browser.clearCookies();
-  await page.goto(`${base}/sign-in`);
-  await page.getByLabel('E-mail').fill(user.email);
-  await page.getByLabel('Password').fill(TEST_PASSWORD);
-  await page.getByRole('button', { name: 'Sign in' }).click();
-  await page.waitForURL(`${base}/`);
-}
+const signIn = (page: Page, user: User) => signInAs(browser, page, base, user.email);
 
 /** Keep a PDF under test-results/e2e and render its first page to PNG (pdftoppm) to look at. */
 function keepPdf(name: string, pdf: Buffer) {

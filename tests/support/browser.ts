@@ -1,4 +1,5 @@
-import { chromium, type BrowserContext } from 'playwright-core';
+import { chromium, type BrowserContext, type Page } from 'playwright-core';
+import { TEST_PASSWORD } from './factories';
 import { mkdtempSync, mkdirSync, rmSync } from 'node:fs';
 import { tmpdir } from 'node:os';
 import { join } from 'node:path';
@@ -47,4 +48,23 @@ export async function listen(app: Express): Promise<{ url: string; server: Serve
       resolve({ url: `http://127.0.0.1:${port}`, server });
     });
   });
+}
+
+/**
+ * Sign in through the sign-in page as a person does, starting signed out (one browser profile
+ * serves a whole test file), and wait for the start page.
+ */
+export async function signInAs(
+  browser: BrowserContext,
+  page: Page,
+  base: string,
+  email: string,
+  password = TEST_PASSWORD,
+) {
+  await browser.clearCookies();
+  await page.goto(`${base}/sign-in`);
+  await page.getByLabel('E-mail').fill(email);
+  await page.getByLabel('Password').fill(password);
+  await page.getByRole('button', { name: 'Sign in' }).click();
+  await page.waitForURL(`${base}/`);
 }
