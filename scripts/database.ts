@@ -36,3 +36,10 @@ export async function provideDatabase(opts: {
   // Stop only a cluster this process started; one already running belongs to someone else.
   return { url: cluster.url, cluster, stop: () => (started ? stopCluster(cluster) : undefined) };
 }
+
+/** The app's own cluster folder (used when DATABASE_URL is not set). */
+export const APP_PG_DIR = '.data/postgres';
+
+/** The app's database exactly as `npm start` finds it: DATABASE_URL, else the project cluster. */
+export const provideAppDatabase = () =>
+  provideDatabase({ dir: APP_PG_DIR, port: APP_PG_PORT, name: 'spanwise' });

@@ -2,10 +2,10 @@
 import { connect } from '../server/db/sequelize';
 import { migrator } from '../server/db/migrator';
 import { seedDemo } from '../seeders/demo';
-import { APP_PG_PORT, provideDatabase } from './database';
+import { provideAppDatabase } from './database';
 
 const action = process.argv[2];
-const db = await provideDatabase({ dir: '.data/postgres', port: APP_PG_PORT, name: 'spanwise' });
+const db = await provideAppDatabase();
 const sequelize = connect(db.url);
 try {
   const m = migrator(sequelize);

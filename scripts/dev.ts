@@ -4,9 +4,9 @@ import { connect } from '../server/db/sequelize';
 import { migrator } from '../server/db/migrator';
 import { User } from '../server/models';
 import { seedDemo } from '../seeders/demo';
-import { APP_PG_PORT, provideDatabase } from './database';
+import { provideAppDatabase } from './database';
 
-const db = await provideDatabase({ dir: '.data/postgres', port: APP_PG_PORT, name: 'spanwise' });
+const db = await provideAppDatabase();
 const sequelize = connect(db.url);
 await migrator(sequelize).up();
 if ((await User.count()) === 0) await seedDemo();

@@ -17,10 +17,10 @@ import { providePayments } from '../server/services/providePayments';
 import { startMailQueue, type MailQueue } from '../server/services/mailQueue';
 import { renderAttachment } from '../server/services/mailAttachments';
 import { DEMO_PASSWORD, DEMO_SIGN_INS } from '../shared/api/demo';
-import { APP_PG_PORT, provideDatabase } from './database';
+import { APP_PG_PORT, provideAppDatabase } from './database';
 
 const config = readConfig();
-const db = await provideDatabase({ dir: '.data/postgres', port: APP_PG_PORT, name: 'spanwise' });
+const db = await provideAppDatabase();
 const sequelize = connect(db.url);
 let server: Server | null = null;
 let mail: Mailer | null = null;
