@@ -1,15 +1,13 @@
 import type { ProfileComparison, ProfileComparisons } from '../../shared/api/compare';
 import { PROFILE_KINDS } from '../../shared/api/design';
 import type { PresentedDesign } from '../../shared/engine/design';
-import { lumberMassKg } from '../../shared/engine/lumber';
-import { mm } from '../../shared/engine/units';
+import { trussLumberMassKg } from '../../shared/engine/design';
 import type { PriceBook } from '../../shared/api/pricing';
 import { AppError } from '../errors';
 import { computeDesign } from './design';
 import { PLATES_PER_JOINT, priceLine } from './pricing';
 
 const LB_PER_KG = 2.2046226218;
-const MM_PER_INCH = 25.4;
 
 /** Profiles compared for a pitched request: every pitched family (a flat truss has no pitch). */
 const PITCHED = PROFILE_KINDS.filter((k) => k !== 'flat');
@@ -36,10 +34,7 @@ function summarize(
   book: PriceBook | null,
 ): ProfileComparison {
   const csis = design.members.map((m) => m.csi).filter(Number.isFinite);
-  const lengthMm = (v: number) => (design.units.length === 'mm' ? v : v * MM_PER_INCH);
-  const kg =
-    design.pieces.reduce((s, p) => s + lumberMassKg(p.lumber, mm(lengthMm(p.length.value))), 0) *
-    plies;
+  const kg = trussLumberMassKg(design, plies);
   const priced = priceLine(
     { mark: profile, description, quantity: 1, plies, design },
     book ?? PRICE_FREE,

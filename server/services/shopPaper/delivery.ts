@@ -1,6 +1,7 @@
 import type { Bundle, DeliveryTicket } from '../../../shared/api/shopPaper';
 import type { ShopOrderPaper } from './lines';
-import { trussWeightLb, weightIn } from './weight';
+import { trussLumberMassKg } from '../../../shared/engine/design';
+import { weightIn } from './weight';
 
 /** Trusses per bundle: one mark per bundle, banded in tens at most (the plant's default). */
 export const BUNDLE_SIZE = 10;
@@ -13,10 +14,10 @@ export const BUNDLE_RULE =
 export function deliveryTicket(paper: ShopOrderPaper): DeliveryTicket {
   const units = paper.order.units;
   const bundles: Bundle[] = [];
-  let totalLb = 0;
+  let totalKg = 0;
   for (const line of paper.lines) {
-    const each = trussWeightLb(line.design, line.plies);
-    totalLb += each * line.quantity;
+    const each = trussLumberMassKg(line.design, line.plies);
+    totalKg += each * line.quantity;
     for (let first = 1; first <= line.quantity; first += BUNDLE_SIZE) {
       const last = Math.min(line.quantity, first + BUNDLE_SIZE - 1);
       const count = last - first + 1;
@@ -40,7 +41,7 @@ export function deliveryTicket(paper: ShopOrderPaper): DeliveryTicket {
       count: l.quantity,
     })),
     totalTrusses: paper.lines.reduce((s, l) => s + l.quantity, 0),
-    totalWeight: weightIn(totalLb, units),
+    totalWeight: weightIn(totalKg, units),
     bundleRule: BUNDLE_RULE,
     cautions: paper.lines[0]?.design.cautions ?? [],
   };

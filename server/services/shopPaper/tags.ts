@@ -1,6 +1,8 @@
 import type { TrussTag, TrussTags } from '../../../shared/api/shopPaper';
 import { pitchText, type ShopLine, type ShopOrderPaper } from './lines';
-import { trussWeightLb, weightIn, WEIGHT_BASIS } from './weight';
+import { trussLumberMassKg } from '../../../shared/engine/design';
+import { LUMBER_WEIGHT_BASIS } from '../../../shared/engine/lumber';
+import { weightIn } from './weight';
 
 /** Printed on every tag (DESIGN.md §4.6). */
 export const DO_NOT_CUT =
@@ -19,7 +21,7 @@ export const trussPageUrl = (publicUrl: string, orderId: number, lineId: number,
 export function trussTags(paper: ShopOrderPaper, publicUrl: string): TrussTags {
   const tags: TrussTag[] = [];
   const tagsOf = (line: ShopLine) => {
-    const weight = weightIn(trussWeightLb(line.design, line.plies), paper.order.units);
+    const weight = weightIn(trussLumberMassKg(line.design, line.plies), paper.order.units);
     for (let n = 1; n <= line.quantity; n++) {
       tags.push({
         lineId: line.id,
@@ -35,5 +37,5 @@ export function trussTags(paper: ShopOrderPaper, publicUrl: string): TrussTags {
     }
   };
   paper.lines.forEach(tagsOf);
-  return { order: paper.order, tags, warning: DO_NOT_CUT, weightBasis: WEIGHT_BASIS };
+  return { order: paper.order, tags, warning: DO_NOT_CUT, weightBasis: LUMBER_WEIGHT_BASIS };
 }

@@ -8,3 +8,4 @@ export { effectiveLengths } from './sizing';
 export { axialStiffness } from './deflection';
 export type * from './types';
 export type { AreaLoad, EngineDesignInput } from './input';
+export { trussLumberMassKg } from './weight';

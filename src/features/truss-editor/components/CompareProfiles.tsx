@@ -159,8 +159,9 @@ export function CompareProfiles({
           <p className="mt-2 text-xs text-sand-600">
             Per truss, all plies. Prices are estimates from the price book
             {data.demoPrices ? ' (invented demo prices)' : ''}; weights are estimates from the
-            lumber (NDS specific gravity, about 15 % moisture). A scissor uses half the top pitch
-            for its bottom chord unless one is set. Results are preliminary until reviewed.
+            lumber (NDS specific gravity at the 19 % moisture ceiling of dry lumber, plates not
+            included). A scissor uses half the top pitch for its bottom chord unless one is set.
+            Results are preliminary until reviewed.
           </p>
         </>
       )}
