@@ -1,5 +1,6 @@
 import { Op, type Transaction } from 'sequelize';
 import type { CreateLineInput, ReviewInput, UpdateLineInput } from '../../shared/api/orders';
+import { nextFreeMark } from '../../shared/api/marks';
 import { Order, OrderLine, Plant, type Job, type User } from '../models';
 import { AppError, badRequest, conflict, notFound } from '../errors';
 import { computeDesign, type ComputedDesign } from '../services/design';
@@ -200,13 +201,14 @@ export async function deleteLine(actor: User, order: Order, loaded: OrderLine) {
   });
 }
 
-/** Next free mark "T<n>" of the order. */
+/** Next free mark "T<n>" of the order (the shared rule, on its marks as the transaction sees them). */
 async function nextMark(orderId: number, t: Transaction) {
-  const marks = (
-    await OrderLine.findAll({ where: { orderId }, attributes: ['mark'], transaction: t })
-  ).map((l) => l.mark);
-  const n = Math.max(0, ...marks.map((m) => Number(/^T(\d+)$/i.exec(m)?.[1] ?? 0)));
-  return `T${n + 1}`;
+  const lines = await OrderLine.findAll({
+    where: { orderId },
+    attributes: ['mark'],
+    transaction: t,
+  });
+  return nextFreeMark(lines.map((l) => l.mark));
 }
 
 /** Copy a line (design recomputed by the current engine) under the next free mark; it needs its own review. */

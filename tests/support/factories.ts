@@ -1,6 +1,7 @@
 import bcrypt from 'bcryptjs';
 import { randomUUID } from 'node:crypto';
 import type { Role } from '../../shared/api/roles';
+import { nextFreeMark } from '../../shared/api/marks';
 import { Customer, Job, Order, OrderLine, Plant, User } from '../../server/models';
 import { computeDesign } from '../../server/services/design';
 import { testSequelize } from './db';
@@ -125,8 +126,6 @@ export async function createLine(
 }
 
 async function nextTestMark(orderId: number) {
-  const marks = (await OrderLine.findAll({ where: { orderId }, attributes: ['mark'] })).map(
-    (l) => l.mark,
-  );
-  return `T${Math.max(0, ...marks.map((m) => Number(/^T(\d+)$/i.exec(m)?.[1] ?? 0))) + 1}`;
+  const lines = await OrderLine.findAll({ where: { orderId }, attributes: ['mark'] });
+  return nextFreeMark(lines.map((l) => l.mark));
 }

@@ -5,7 +5,8 @@ import { useLine } from '../api/get-line';
 import { useOrder } from '../api/get-order';
 import { usePlant } from '../api/get-plant';
 import { designToFormValues } from '../form/convert';
-import { newTrussFormValues, nextFreeMark } from '../form/values';
+import { nextFreeMark } from '../../../../shared/api/marks';
+import { newTrussFormValues } from '../form/values';
 import { TrussEditor } from './TrussEditor';
 
 const positiveId = (text: string | undefined) => {

@@ -102,9 +102,3 @@ export function newTrussFormValues(
     deflectionTotal: '180',
   };
 }
-
-/** The next unused "T<n>" mark of an order (one past the highest T-number), for a new line. */
-export function nextFreeMark(marks: readonly string[]): string {
-  const n = Math.max(0, ...marks.map((m) => Number(/^T(\d+)$/i.exec(m)?.[1] ?? 0)));
-  return `T${n + 1}`;
-}

@@ -97,12 +97,3 @@ describe('field paths', () => {
     });
   });
 });
-
-describe('nextFreeMark', () => {
-  it('is one past the highest T-number, whatever else the order holds', async () => {
-    const { nextFreeMark } = await import('../../../../../src/features/truss-editor/form/values');
-    expect(nextFreeMark([])).toBe('T1');
-    expect(nextFreeMark(['T1', 'T4', 'G1', 't7x'])).toBe('T5');
-    expect(nextFreeMark(['t9'])).toBe('T10');
-  });
-});
