@@ -2,7 +2,7 @@
  * npm run db:backup [-- file]: the app's database (DATABASE_URL or the project cluster) as a
  * pg_dump custom-format archive, by default `backups/spanwise-<UTC timestamp>.dump`.
  */
-import { chmodSync, existsSync, mkdirSync, renameSync, rmSync, statSync } from 'node:fs';
+import { existsSync, mkdirSync, renameSync, rmSync, statSync } from 'node:fs';
 import { dirname, join } from 'node:path';
 import {
   describeDatabase,
@@ -24,13 +24,13 @@ process.exitCode = await runOnAppDatabase(
         `${target} already exists; give another file name (nothing was written).`,
       );
     await probeDatabase(url);
-    // Backups hold password hashes and sessions: readable by their owner only.
-    mkdirSync(dirname(target), { recursive: true, mode: 0o700 });
+    // Backups hold password hashes and sessions: readable by their owner only, from the start.
+    process.umask(0o077);
+    mkdirSync(dirname(target), { recursive: true });
     // Written under another name first: a failed or interrupted dump never looks like a backup.
     const partial = `${target}.partial`;
     try {
       dumpDatabase(url, partial);
-      chmodSync(partial, 0o600);
       renameSync(partial, target);
     } finally {
       rmSync(partial, { force: true });
