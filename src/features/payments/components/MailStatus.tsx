@@ -45,11 +45,9 @@ export function MailStatus({ orderId }: { orderId: number }) {
                   className="flex flex-wrap items-start justify-between gap-3 px-4 py-3"
                 >
                   <div className="min-w-0">
-                    <p className="text-sm font-medium text-sand-900">
-                      {KIND[m.kind] ?? m.kind}: {m.subject}
-                    </p>
+                    <p className="text-sm font-medium text-sand-900">{m.subject}</p>
                     <p className="text-xs text-sand-600">
-                      to {m.to} · {when(m)}
+                      {KIND[m.kind] ?? m.kind} · to {m.to} · {when(m)}
                     </p>
                     {m.lastError && m.status !== 'sent' ? (
                       <p className="mt-1 text-xs text-danger-700">Last error: {m.lastError}</p>
