@@ -6,7 +6,18 @@ const apiPort = Number(process.env.API_PORT ?? 3001);
 
 export default defineConfig({
   plugins: [react(), tailwindcss()],
-  build: { outDir: 'dist/client', emptyOutDir: true, chunkSizeWarningLimit: 1200 },
+  build: {
+    outDir: 'dist/client',
+    emptyOutDir: true,
+    chunkSizeWarningLimit: 1200,
+    rolldownOptions: {
+      // The UI primitives and the client's helpers run no code on import: a page that takes Button
+      // from the `components/ui` barrel must not pull the desk's tables into the entry's chunks.
+      treeshake: {
+        moduleSideEffects: (id: string) => !/[\\/]src[\\/](components|lib)[\\/]/.test(id),
+      },
+    },
+  },
   server: {
     host: '127.0.0.1',
     port: 5173,

@@ -158,6 +158,15 @@ export async function recordOfflinePayment(actor: User, order: Order, input: Off
     const locked = (await Order.findByPk(order.id, { transaction: t, lock: t.LOCK.UPDATE }))!;
     if (['draft', 'quoted', 'cancelled'].includes(locked.status))
       throw conflict(`Payments are recorded on accepted orders; this one is ${locked.status}.`);
+    if (
+      input.expectedPaid !== undefined &&
+      (await paidCents(locked.id, t)) !== cents(input.expectedPaid)
+    )
+      throw new AppError(
+        409,
+        'stale',
+        'Another payment was recorded on this order since you opened it. Check the payments below before recording this one.',
+      );
     const acceptance = await findAcceptance(order.id);
     const quote = acceptance ? await Quote.findByPk(acceptance.quoteId, { transaction: t }) : null;
     const currency = (quote?.snapshot as unknown as QuoteSnapshot | undefined)?.currency ?? 'USD';

@@ -74,9 +74,14 @@ export function presentPayment(p: Payment): PaymentSummary {
 export function presentMoney(quote: Quote | null, payments: Payment[]): OrderMoney | null {
   if (!quote) return null;
   const s = quote.snapshot as unknown as QuoteSnapshot;
-  const paidCents = payments
-    .filter((p) => p.status === 'succeeded')
-    .reduce((sum, p) => sum + (p.kind === 'refund' ? -p.amountCents : p.amountCents), 0);
+  const moved = payments.filter((p) => p.status === 'succeeded');
+  const paidCents = moved.reduce(
+    (sum, p) => sum + (p.kind === 'refund' ? -p.amountCents : p.amountCents),
+    0,
+  );
+  const refundedCents = moved
+    .filter((p) => p.kind === 'refund')
+    .reduce((sum, p) => sum + p.amountCents, 0);
   const totalCents = Math.round(Number(quote.total) * 100);
   const depositCents = Math.round(Number(quote.depositDue) * 100);
   return {
@@ -85,6 +90,8 @@ export function presentMoney(quote: Quote | null, payments: Payment[]): OrderMon
     paid: dollars(paidCents),
     balance: dollars(totalCents - paidCents),
     depositDue: dollars(Math.max(0, depositCents - paidCents)),
+    deposit: dollars(depositCents),
+    refunded: dollars(refundedCents),
   };
 }
 

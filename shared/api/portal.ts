@@ -60,6 +60,10 @@ export const orderMoneySchema = z.object({
   paid: z.number(),
   balance: z.number(),
   depositDue: z.number(),
+  /** The deposit the accepted revision asks for (what was due before anything was paid). */
+  deposit: z.number().default(0),
+  /** Refunds sent back (already taken off `paid`). */
+  refunded: z.number().default(0),
 });
 export type OrderMoney = z.infer<typeof orderMoneySchema>;
 
@@ -84,6 +88,13 @@ export const offlinePaymentSchema = z.object({
     .trim()
     .min(1, 'Enter the cheque number or transfer reference')
     .max(120),
+  /**
+   * What the desk saw as paid when it filled the form: a payment recorded meanwhile (another tab,
+   * a colleague, a card deposit) answers 409 instead of a second entry of the same cheque.
+   */
+  expectedPaid: z
+    .number({ message: 'Reload the order: the paid amount you saw is missing' })
+    .optional(),
 });
 export type OfflinePaymentInput = z.infer<typeof offlinePaymentSchema>;
 

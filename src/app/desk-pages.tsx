@@ -16,6 +16,7 @@ import { JobOrders } from '../features/orders/components/JobOrders';
 import { OrderPage } from '../features/orders/components/OrderPage';
 import { OrdersPage } from '../features/orders/components/OrdersPage';
 import { UsersPage } from '../features/users/components/UsersPage';
+import { DeskPayments } from '../features/payments/components/DeskPayments';
 import { canManageSales } from '../lib/permissions';
 import { SECTION_ROLES } from './navigation';
 import { markLinkFor } from './mark-links';
@@ -102,6 +103,9 @@ export function OrderRoute() {
           canSeeQuotes={(SECTION_ROLES.quotes as readonly string[]).includes(me.user.role)}
           canSeeShop={(SECTION_ROLES.shop as readonly string[]).includes(me.user.role)}
           markHref={markLinkFor(me.user.role)}
+          payments={
+            canManageSales(me.user.role) ? (order) => <DeskPayments order={order} /> : undefined
+          }
         />
       )}
     />

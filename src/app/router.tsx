@@ -5,7 +5,6 @@ import {
   customerListParamsFromSearch,
   customersQueryOptions,
 } from '../features/builders/api/list-customers';
-import { SignInPage } from '../features/auth/components/SignInPage';
 import { healthQueryOptions } from '../features/auth/api/health';
 import {
   buildersQueryOptions,
@@ -37,6 +36,11 @@ import { ErrorPage, NotFoundPage } from './ErrorPages';
 import { redirectIfSignedIn, requireRole, requireSession } from './guards';
 import { SECTION_ROLES } from './navigation';
 import { portalRoutes } from './portal-routes';
+import { lazyPage } from './lazy-page';
+
+const SignInPage = lazyPage(() =>
+  import('../features/auth/components/SignInPage').then((m) => m.SignInPage),
+);
 
 /** How long a loader waits for its data before showing the page with its own loading state. */
 const PREFETCH_WAIT_MS = 800;

@@ -76,3 +76,11 @@ export const shopKeys = {
   orders: () => ['shop', 'orders'] as const,
   cutList: (orderId: number) => ['shop', 'cut-list', orderId] as const,
 };
+
+/**
+ * Query keys of an order's outgoing mail (delivery states). They sit under the order's detail key,
+ * so whatever refetches the order (a payment recorded, a quote sent) refetches its mail too.
+ */
+export const orderMailKeys = {
+  list: (orderId: number) => [...orderKeys.detail(orderId), 'mail'] as const,
+};

@@ -3,7 +3,9 @@ import type { LoaderFunctionArgs, RouteObject } from 'react-router';
 import type { Role } from '../../../shared/api/roles';
 import { requireRole } from '../../app/guards';
 import { mailQueryOptions } from './api/list-mail';
-import { InboxPage } from './components/InboxPage';
+import { lazyPage } from '../../app/lazy-page';
+
+const InboxPage = lazyPage(() => import('./components/InboxPage').then((m) => m.InboxPage));
 
 /** Who opens the demo inbox: the plant manager (the server allows only them). */
 export const INBOX_ROLES = ['admin'] as const satisfies readonly Role[];

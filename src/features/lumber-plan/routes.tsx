@@ -3,7 +3,11 @@ import { useLoaderData, type LoaderFunctionArgs, type RouteObject } from 'react-
 import type { Role } from '../../../shared/api/roles';
 import { requireRole } from '../../app/guards';
 import { lumberPlanQueryOptions } from './api/get-lumber-plan';
-import { LumberPlanPage } from './components/LumberPlanPage';
+import { lazyPage } from '../../app/lazy-page';
+
+const LumberPlanPage = lazyPage(() =>
+  import('./components/LumberPlanPage').then((m) => m.LumberPlanPage),
+);
 
 /** Who sees shop paper: the foreman, the desk and the plant manager. */
 export const LUMBER_PLAN_ROLES = ['admin', 'sales', 'foreman'] as const satisfies readonly Role[];

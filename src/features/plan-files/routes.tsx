@@ -4,7 +4,11 @@ import type { Role } from '../../../shared/api/roles';
 import { requireRole } from '../../app/guards';
 import { planJobQueryOptions } from './api/get-job';
 import { planFilesQueryOptions } from './api/list-plan-files';
-import { PlanFilesPage } from './components/PlanFilesPage';
+import { lazyPage } from '../../app/lazy-page';
+
+const PlanFilesPage = lazyPage(() =>
+  import('./components/PlanFilesPage').then((m) => m.PlanFilesPage),
+);
 
 /** Who opens a job's plans: every role that sees the job (the server scopes builders). */
 export const PLAN_FILE_ROLES = [

@@ -3,7 +3,11 @@ import { useLoaderData, type LoaderFunctionArgs, type RouteObject } from 'react-
 import type { Role } from '../../../shared/api/roles';
 import { requireRole } from '../../app/guards';
 import { priceBookQueryOptions } from './api/get-price-book';
-import { PriceBookPage } from './components/PriceBookPage';
+import { lazyPage } from '../../app/lazy-page';
+
+const PriceBookPage = lazyPage(() =>
+  import('./components/PriceBookPage').then((m) => m.PriceBookPage),
+);
 
 /** Who opens the price book: the plant manager (edits) and the sales desk (reads). */
 export const PRICE_BOOK_ROLES = ['admin', 'sales'] as const satisfies readonly Role[];

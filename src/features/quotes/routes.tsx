@@ -7,9 +7,11 @@ import { canManageSales } from '../../lib/permissions';
 import { orderQueryOptions } from './api/get-order';
 import { quoteQueryOptions } from './api/get-quote';
 import { quotesQueryOptions } from './api/list-quotes';
-import { QuotePage } from './components/QuotePage';
-import { QuotesPage } from './components/QuotesPage';
 import { positiveIntParam } from './quote-path';
+import { lazyPage } from '../../app/lazy-page';
+
+const QuotesPage = lazyPage(() => import('./components/QuotesPage').then((m) => m.QuotesPage));
+const QuotePage = lazyPage(() => import('./components/QuotePage').then((m) => m.QuotePage));
 
 /** Who opens quotes: staff who make and send them, and builders (the server scopes them). */
 export const QUOTE_ROLES = ['admin', 'sales', 'builder'] as const satisfies readonly Role[];

@@ -5,8 +5,12 @@ import { requireRole } from '../../app/guards';
 import { listParamsFromSearch } from '../../lib/list-params';
 import { reviewLineQueryOptions } from './api/get-line';
 import { reviewQueueQueryOptions } from './api/list-reviews';
-import { ReviewQueuePage } from './components/ReviewQueuePage';
 import { orderIdFromSearch } from './review-link';
+import { lazyPage } from '../../app/lazy-page';
+
+const ReviewQueuePage = lazyPage(() =>
+  import('./components/ReviewQueuePage').then((m) => m.ReviewQueuePage),
+);
 
 /** Who reviews designs: the design reviewer and the plant manager. */
 export const REVIEW_ROLES = ['admin', 'engineer'] as const satisfies readonly Role[];

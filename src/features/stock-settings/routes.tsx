@@ -3,7 +3,11 @@ import { useLoaderData, type LoaderFunctionArgs, type RouteObject } from 'react-
 import type { Role } from '../../../shared/api/roles';
 import { requireRole } from '../../app/guards';
 import { stockSettingsQueryOptions } from './api/get-stock-settings';
-import { StockSettingsPage } from './components/StockSettingsPage';
+import { lazyPage } from '../../app/lazy-page';
+
+const StockSettingsPage = lazyPage(() =>
+  import('./components/StockSettingsPage').then((m) => m.StockSettingsPage),
+);
 
 /** The plant manager edits the stock; the foreman and the desk read it. */
 export const STOCK_ROLES = ['admin', 'foreman', 'sales'] as const satisfies readonly Role[];

@@ -178,3 +178,209 @@ describe('role matrix', () => {
     }
   });
 });
+
+// The builder, route group by route group: their own company's records through the portal's
+// routes, another company's (same plant) answering 404 as if it did not exist, and the desk's,
+// shop's and production's routes refused: 403 on their own order, 404 on another company's (the
+// record is loaded within the builder's scope before the role is checked). Bodies are valid, so
+// what answers is the authorization, not validation (which runs first).
+describe('role matrix: the builder, every route group', () => {
+  type Session = Awaited<ReturnType<typeof signedIn>>;
+  type World = { order: Order; job: Job; customer: Customer; lineId: number };
+  let s: Session;
+  let own: World;
+  let other: World;
+
+  beforeAll(async () => {
+    const { sentQuoteWorld, useTestBook } = await import('./portal/helpers');
+    const { OrderLine } = await import('../../../server/models');
+    const p = await createPlant();
+    await useTestBook(p);
+    const mine = await sentQuoteWorld(p);
+    const theirs = await sentQuoteWorld(p);
+    const world = async (w: typeof mine) => ({
+      order: w.order,
+      customer: w.customer,
+      job: { id: w.order.jobId } as Job,
+      lineId: (await OrderLine.findOne({ where: { orderId: w.order.id } }))!.id,
+    });
+    own = await world(mine);
+    other = await world(theirs);
+    s = await signedIn(app, mine.builder.email);
+  });
+
+  const row = (
+    group: string,
+    call: string,
+    run: (s: Session, w: World) => request.Test,
+    mine: number,
+    theirs: number,
+  ) => ({ group, call, run, mine, theirs });
+
+  const rows = [
+    // The portal and what a builder reads of their own records.
+    row('portal', 'GET /api/portal/home', (s) => s.get('/api/portal/home'), 200, 200),
+    row('orders', 'GET /api/orders/:id', (s, w) => s.get(`/api/orders/${w.order.id}`), 200, 404),
+    row(
+      'quotes',
+      'GET /api/orders/:id/quotes',
+      (s, w) => s.get(`/api/orders/${w.order.id}/quotes`),
+      200,
+      404,
+    ),
+    row(
+      'quotes',
+      'GET /api/orders/:id/quotes/1',
+      (s, w) => s.get(`/api/orders/${w.order.id}/quotes/1`),
+      200,
+      404,
+    ),
+    row(
+      'quotes',
+      'GET /api/orders/:id/quotes/1/pdf',
+      (s, w) => s.get(`/api/orders/${w.order.id}/quotes/1/pdf`),
+      200,
+      404,
+    ),
+    row(
+      'portal',
+      'POST /api/orders/:id/quotes/1/changes',
+      (s, w) =>
+        s.post(`/api/orders/${w.order.id}/quotes/1/changes`, {
+          message: 'Move the girder to grid C',
+        }),
+      201,
+      404,
+    ),
+    row('jobs', 'GET /api/jobs/:id', (s, w) => s.get(`/api/jobs/${w.job.id}`), 200, 404),
+    row(
+      'files',
+      'GET /api/jobs/:id/files',
+      (s, w) => s.get(`/api/jobs/${w.job.id}/files`),
+      200,
+      404,
+    ),
+    row(
+      'customers',
+      'GET /api/customers/:id',
+      (s, w) => s.get(`/api/customers/${w.customer.id}`),
+      200,
+      404,
+    ),
+    // The desk's routes.
+    row('users', 'GET /api/users', (s) => s.get('/api/users'), 403, 403),
+    row('customers', 'GET /api/customers', (s) => s.get('/api/customers'), 403, 403),
+    row('price book', 'GET /api/price-book', (s) => s.get('/api/price-book'), 403, 403),
+    row('reviews', 'GET /api/reviews', (s) => s.get('/api/reviews'), 403, 403),
+    row(
+      'orders',
+      'POST /api/orders/:id/lines/:lineId/copy',
+      (s, w) => s.post(`/api/orders/${w.order.id}/lines/${w.lineId}/copy`),
+      403,
+      404,
+    ),
+    row(
+      'quotes',
+      'POST /api/orders/:id/quotes',
+      (s, w) => s.post(`/api/orders/${w.order.id}/quotes`),
+      403,
+      404,
+    ),
+    row(
+      'quotes',
+      'POST /api/orders/:id/quotes/1/send',
+      (s, w) => s.post(`/api/orders/${w.order.id}/quotes/1/send`),
+      403,
+      404,
+    ),
+    row(
+      'payments',
+      'GET /api/orders/:id/mail',
+      (s, w) => s.get(`/api/orders/${w.order.id}/mail`),
+      403,
+      404,
+    ),
+    row(
+      'payments',
+      'POST /api/orders/:id/payments',
+      (s, w) =>
+        s.post(`/api/orders/${w.order.id}/payments`, {
+          amount: 10,
+          method: 'cheque',
+          reference: 'Chq 1',
+        }),
+      403,
+      404,
+    ),
+    row(
+      'payments',
+      'POST /api/orders/:id/cancel',
+      (s, w) => s.post(`/api/orders/${w.order.id}/cancel`, { reason: 'No longer needed' }),
+      403,
+      404,
+    ),
+    row('dev', 'GET /api/dev/mail', (s) => s.get('/api/dev/mail'), 403, 403),
+    // The shop's routes.
+    row('stock', 'GET /api/stock', (s) => s.get('/api/stock'), 403, 403),
+    row('shop', 'GET /api/shop/orders', (s) => s.get('/api/shop/orders'), 403, 403),
+    row(
+      'shop',
+      'GET /api/shop/orders/:id/cut-list',
+      (s, w) => s.get(`/api/shop/orders/${w.order.id}/cut-list`),
+      403,
+      404,
+    ),
+    row(
+      'lumber plan',
+      'GET /api/shop/orders/:id/lumber-plan',
+      (s, w) => s.get(`/api/shop/orders/${w.order.id}/lumber-plan`),
+      403,
+      404,
+    ),
+    row(
+      'shop paper',
+      'GET /api/orders/:id/shop-paper/tags',
+      (s, w) => s.get(`/api/orders/${w.order.id}/shop-paper/tags`),
+      403,
+      404,
+    ),
+    // Production's routes.
+    row(
+      'production',
+      'GET /api/production/settings',
+      (s) => s.get('/api/production/settings'),
+      403,
+      403,
+    ),
+    row('production', 'GET /api/schedule', (s) => s.get('/api/schedule'), 403, 403),
+    row('floor', 'GET /api/floor/today', (s) => s.get('/api/floor/today'), 403, 403),
+    row(
+      'order production',
+      'POST /api/orders/:id/release',
+      (s, w) => s.post(`/api/orders/${w.order.id}/release`, { reason: 'Site is ready' }),
+      403,
+      404,
+    ),
+    row(
+      'order production',
+      'POST /api/orders/:id/hold',
+      (s, w) =>
+        s.post(`/api/orders/${w.order.id}/hold`, { onHold: true, reason: 'Site not ready' }),
+      403,
+      404,
+    ),
+  ];
+
+  for (const r of rows) {
+    it(`builder → ${r.call} (${r.group}): own company ${r.mine}, another company ${r.theirs}`, async () => {
+      const mine = await r.run(s, own);
+      expect(mine.status, JSON.stringify(mine.body)).toBe(r.mine);
+      const theirs = await r.run(s, other);
+      expect(theirs.status, JSON.stringify(theirs.body)).toBe(r.theirs);
+      if (theirs.status === 404)
+        expect(JSON.stringify(theirs.body)).not.toContain(other.customer.name);
+      for (const res of [mine, theirs])
+        if (res.status === 403) expect(res.body.error.code).toBe('forbidden');
+    });
+  }
+});

@@ -1,4 +1,4 @@
-import { useState } from 'react';
+import { useState, type ReactNode } from 'react';
 import { useLocation } from 'react-router';
 import type { LineSummary, OrderDetail } from '../../../../shared/api/orders';
 import {
@@ -33,6 +33,8 @@ export interface OrderPageProps {
   canSeeShop?: boolean;
   /** Where a line's mark leads (its design, or its review); none for builders. */
   markHref?: (orderId: number, line: LineSummary) => string;
+  /** The desk's payments, balance and mail states (composed in by the app, sales and admin only). */
+  payments?: (order: OrderDetail) => ReactNode;
 }
 
 function Header({
@@ -210,6 +212,7 @@ export function OrderPage({
   canSeeQuotes = false,
   canSeeShop = false,
   markHref,
+  payments,
 }: OrderPageProps) {
   const order = useOrder(id);
   const saved = (useLocation().state as { saved?: string } | null)?.saved;
@@ -243,6 +246,7 @@ export function OrderPage({
               canEdit={canEdit}
               markHref={markHref ? (line) => markHref(o.id, line) : undefined}
             />
+            {payments?.(o)}
             <OrderHistory entries={o.history} />
           </div>
         </>

@@ -147,6 +147,12 @@ export function PriceBookForm({ book, canEdit }: PriceBookFormProps) {
                 unit="%"
                 hint="Asked of builders without an account."
               />
+              <NumberField
+                name="cancellationFee"
+                label="Cancellation fee"
+                unit={currency}
+                hint="Kept from a card deposit when an order is cancelled before production."
+              />
               <NumberField name="quoteValidityDays" label="Quotes valid for" unit="days" integer />
               <Field
                 label="Currency"

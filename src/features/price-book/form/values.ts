@@ -54,6 +54,7 @@ export const priceBookFormSchema = z
     margin: percentOf(book.margin, 'Margin'),
     taxRate: percentOf(book.taxRate, 'Tax rate'),
     depositRate: percentOf(book.depositRate, 'Deposit'),
+    cancellationFee: book.cancellationFee.unwrap(),
     quoteValidityDays: z
       .number({ message: 'Enter a number of days' })
       .pipe(book.quoteValidityDays.unwrap()),
@@ -98,6 +99,8 @@ export function priceBookToFormValues(stored: PriceBook): PriceBookFormValues {
     margin: fractionToPercent(stored.margin),
     taxRate: fractionToPercent(stored.taxRate),
     depositRate: fractionToPercent(stored.depositRate),
+    // A book saved before the fee existed keeps none: the server refunds it all (`?? 0`).
+    cancellationFee: stored.cancellationFee ?? 0,
     quoteValidityDays: stored.quoteValidityDays,
     terms: stored.terms,
   };

@@ -17,6 +17,7 @@ const stored: PriceBook = {
   margin: 0.22,
   taxRate: 0.0825,
   depositRate: 0.5,
+  cancellationFee: 150,
   quoteValidityDays: 30,
   terms: 'Net 30 for account customers.',
 };
@@ -64,6 +65,30 @@ describe('price book form values', () => {
     const values = { ...priceBookToFormValues(stored), depositRate: Number.NaN };
     const issues = priceBookFormSchema.safeParse(values).error?.issues ?? [];
     expect(issues[0]).toMatchObject({ path: ['depositRate'], message: 'Deposit must be a number' });
+  });
+
+  it('edits the cancellation fee with the server’s money rules', () => {
+    expect(priceBookToFormValues(stored).cancellationFee).toBe(150);
+    const issue = (cancellationFee: number) =>
+      priceBookFormSchema.safeParse({ ...priceBookToFormValues(stored), cancellationFee }).error
+        ?.issues[0];
+    expect(issue(-5)).toMatchObject({
+      path: ['cancellationFee'],
+      message: 'Cancellation fee cannot be negative',
+    });
+    expect(issue(Number.NaN)).toMatchObject({
+      path: ['cancellationFee'],
+      message: 'Cancellation fee must be a number',
+    });
+    expect(issue(2_000_000)?.message).toBe('Cancellation fee looks too large');
+    expect(
+      priceBookFormSchema.parse({ ...priceBookToFormValues(stored), cancellationFee: 75 }),
+    ).toMatchObject({ cancellationFee: 75 });
+  });
+
+  it('shows a book saved before the fee existed as no fee (the server refunds it all)', () => {
+    const { cancellationFee: _fee, ...older } = stored;
+    expect(priceBookToFormValues(older).cancellationFee).toBe(0);
   });
 
   it('flags blank and repeated override ids on their rows', () => {

@@ -1,0 +1,106 @@
+/**
+ * Client bundle benchmark (`npm run bench`; a script, not a test): builds the client with Vite into
+ * a temporary folder and adds up the gzipped JavaScript each first visit downloads — the entry
+ * chunk and everything it imports, plus the lazy route chunk of the page and its imports (what
+ * the browser fetches before the page can render). Goal: a builder's portal under 120 KB.
+ * Also names the packages on the portal's path, and fails if a desk-only one is among them.
+ */
+import { mkdtempSync, readFileSync, rmSync } from 'node:fs';
+import { tmpdir } from 'node:os';
+import { join } from 'node:path';
+import { gzipSync } from 'node:zlib';
+import { build, type Manifest, type Plugin } from 'vite';
+
+const outDir = mkdtempSync(join(tmpdir(), 'spanwise-bundle-'));
+/** Which source modules (and how many bytes of each) ended up in which output file. */
+const modulesOf = new Map<string, Map<string, number>>();
+const record: Plugin = {
+  name: 'record-modules',
+  generateBundle(_options, bundle) {
+    for (const chunk of Object.values(bundle)) {
+      if (chunk.type !== 'chunk') continue;
+      const byModule = new Map<string, number>();
+      for (const [id, m] of Object.entries(chunk.modules)) byModule.set(id, m.renderedLength);
+      modulesOf.set(chunk.fileName, byModule);
+    }
+  },
+};
+
+await build({
+  logLevel: 'warn',
+  build: { outDir, emptyOutDir: true, manifest: true },
+  plugins: [record],
+});
+const manifest = JSON.parse(readFileSync(join(outDir, '.vite/manifest.json'), 'utf8')) as Manifest;
+
+/** The output files a manifest entry needs before it runs (itself and its static imports). */
+function closure(key: string, into = new Set<string>()) {
+  const entry = manifest[key];
+  if (!entry) throw new Error(`No chunk for ${key} in the build (renamed?)`);
+  if (into.has(entry.file)) return into;
+  into.add(entry.file);
+  for (const k of entry.imports ?? []) closure(k, into);
+  return into;
+}
+const gz = (file: string) => gzipSync(readFileSync(join(outDir, file)), { level: 9 }).length;
+const kb = (bytes: number) => `${(bytes / 1024).toFixed(1)} KB`;
+const total = (files: Set<string>) => [...files].reduce((s, f) => s + gz(f), 0);
+const union = (...sets: Set<string>[]) => new Set(sets.flatMap((s) => [...s]));
+
+const ENTRY = 'index.html';
+const entry = closure(ENTRY);
+const route = (src: string) => union(entry, closure(src));
+const paths: [string, Set<string>][] = [
+  ['Entry alone (app shell, router, libraries every page needs)', entry],
+  ['Sign-in page', route('src/features/auth/components/SignInPage.tsx')],
+  [
+    'Builder opens the portal, signed in (home, order, quote pages)',
+    route('src/app/portal-pages.tsx'),
+  ],
+  [
+    'Builder from a cold cache: sign-in, then the portal',
+    union(route('src/features/auth/components/SignInPage.tsx'), route('src/app/portal-pages.tsx')),
+  ],
+  ['Desk: an order page (for comparison)', route('src/app/desk-pages.tsx')],
+];
+
+console.log('Gzipped JavaScript of a first visit (zlib level 9):');
+for (const [label, files] of paths)
+  console.log(`  ${label}: ${kb(total(files))} in ${files.size} files`);
+
+/** npm package (or source folder) of a module id. */
+function packageOf(id: string) {
+  const i = id.lastIndexOf('node_modules/');
+  if (i < 0) return id.replace(`${process.cwd()}/`, '').split('/').slice(0, 3).join('/');
+  const parts = id.slice(i + 'node_modules/'.length).split('/');
+  return parts[0]!.startsWith('@') ? `${parts[0]}/${parts[1]}` : parts[0]!;
+}
+const portal = route('src/app/portal-pages.tsx');
+const sizes = new Map<string, number>();
+for (const file of portal)
+  for (const [id, bytes] of modulesOf.get(file) ?? [])
+    sizes.set(packageOf(id), (sizes.get(packageOf(id)) ?? 0) + bytes);
+console.log('Largest parts of the portal’s path (bytes before minifying):');
+for (const [name, bytes] of [...sizes].sort((a, b) => b[1] - a[1]).slice(0, 12))
+  console.log(`  ${name}: ${kb(bytes)}`);
+
+// Desk-only code that must stay off the builder's phone (route tables may name desk pages).
+const DESK_ONLY = [
+  'node_modules/recharts/',
+  'node_modules/@dnd-kit/',
+  'node_modules/react-hook-form/',
+  'node_modules/@tanstack/table-core/',
+  'shared/engine/design/',
+  'shared/engine/frame/',
+  'src/features/truss-editor/components/',
+  'src/features/schedule/components/',
+  'src/app/desk-pages.tsx',
+];
+const portalModules = [...portal].flatMap((file) => [...(modulesOf.get(file)?.keys() ?? [])]);
+const leaked = DESK_ONLY.filter((part) => portalModules.some((id) => id.includes(part)));
+rmSync(outDir, { recursive: true, force: true });
+if (leaked.length) {
+  console.error(`Desk-only code on the portal's path: ${leaked.join(', ')}`);
+  process.exitCode = 1;
+} else
+  console.log(`None of ${DESK_ONLY.length} desk-only libraries and pages is on the portal's path.`);
