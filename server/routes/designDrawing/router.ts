@@ -4,7 +4,7 @@ import type { PresentedDesign } from '../../../shared/engine/design';
 import { requireUser } from '../../middleware/auth';
 import { parseId } from '../../middleware/validate';
 import { notFound } from '../../errors';
-import { Plant, Quote, type Order } from '../../models';
+import { OrderLine, Plant, Quote, User, type Order } from '../../models';
 import { authorize } from '../../policies/predicates';
 import { designDrawingPolicy } from '../../policies/designDrawing';
 import { renderDesignDrawingPdf } from '../../services/designDrawingPdf';
@@ -24,18 +24,31 @@ async function sentMarks(orderId: number): Promise<Set<string>> {
   return new Set(marks);
 }
 
-/** `GET /api/orders/:id/lines/:lineId/design-drawing.pdf`: one line's truss design drawing. */
+/** The line named by :lineId, or by :mark (pages that know only marks, as a quote's). */
+async function lineOf(order: Order, params: Record<string, string | string[] | undefined>) {
+  if (typeof params.mark === 'string')
+    return OrderLine.findOne({
+      where: { orderId: order.id, mark: params.mark },
+      include: [{ model: User, as: 'reviewer' }],
+    });
+  const lineId = parseId(params.lineId);
+  return lineId === null ? null : findLine(order.id, lineId);
+}
+
+/**
+ * `GET /api/orders/:id/lines/:lineId/design-drawing.pdf` and
+ * `GET /api/orders/:id/design-drawings/:mark.pdf`: one line's truss design drawing.
+ */
 export function designDrawingRouter() {
   const router = Router();
   router.get(
-    '/:id/lines/:lineId/design-drawing.pdf',
+    ['/:id/lines/:lineId/design-drawing.pdf', '/:id/design-drawings/:mark.pdf'],
     requireUser,
     load('Order', findOrder),
     authorize(designDrawingPolicy.show),
     handle(async (req, res, next) => {
       const order = res.locals.record as Order;
-      const lineId = parseId(req.params.lineId);
-      const line = lineId === null ? null : await findLine(order.id, lineId);
+      const line = await lineOf(order, req.params);
       const marks = req.user!.role === 'builder' ? await sentMarks(order.id) : new Set<string>();
       if (!line || !designDrawingPolicy.visible(req.user!.role, line, marks))
         return next(notFound('Line'));

@@ -169,6 +169,11 @@ describe('truss design drawing: who receives it', () => {
     expect((await get('builder', path(ours, fink))).status).toBe(200);
     expect((await get('builder', path(ours, quoted))).status).toBe(200);
     expect((await get('builder', path(ours, pending))).status).toBe(404);
+    // By mark, as the builder's quote page links them.
+    const byMark = (mark: string) => `/api/orders/${ours.id}/design-drawings/${mark}.pdf`;
+    expect((await get('builder', byMark('T1'))).status).toBe(200);
+    expect((await get('builder', byMark('T2'))).status).toBe(404);
+    expect((await get('builder', byMark('NOPE'))).status).toBe(404);
   });
 
   it("another plant's order answers 404 to every role; a line of another order too", async () => {
