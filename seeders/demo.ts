@@ -124,6 +124,11 @@ export async function seedDemo() {
       address: '4400 Sawmill Parkway, Millbrook',
     },
   });
+  // Contact details printed on quotes and design drawings (invented).
+  if (!plant.settings?.phone)
+    await plant.update({
+      settings: { ...plant.settings, phone: '(555) 014-4400', email: 'desk@cedarridge.example' },
+    });
   const customers: Customer[] = [];
   for (const c of CUSTOMERS) {
     const [row] = await Customer.findOrCreate({

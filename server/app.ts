@@ -17,6 +17,7 @@ import { usersRouter } from './routes/users/router';
 import { customersRouter } from './routes/customers/router';
 import { jobsRouter } from './routes/jobs/router';
 import { plantRouter } from './routes/plant/router';
+import { designDrawingRouter } from './routes/designDrawing/router';
 import { ordersRouter } from './routes/orders/router';
 import { reviewsRouter } from './routes/reviews/router';
 import { designsRouter } from './routes/designs/router';
@@ -178,6 +179,7 @@ export function createApp(opts: AppOptions) {
   app.use('/api/orders/:id/quotes', quotesRouter());
   app.use('/api/orders', orderPaymentsRouter());
   app.use('/api/orders/:id/shop-paper', shopPaperRouter(config));
+  app.use('/api/orders', designDrawingRouter());
   app.use('/api/orders', ordersRouter());
   app.use('/api/portal', portalHomeRouter());
   app.use('/api/price-book', priceBookRouter());

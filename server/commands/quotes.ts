@@ -81,7 +81,12 @@ export async function createQuote(actor: User, order: Order) {
     const snapshot: QuoteSnapshot = {
       currency: prices.book.currency,
       units: plant!.units,
-      plant: { name: plant!.name, address: plant!.address },
+      plant: {
+        name: plant!.name,
+        address: plant!.address,
+        ...(plant!.settings?.phone && { phone: plant!.settings.phone }),
+        ...(plant!.settings?.email && { email: plant!.settings.email }),
+      },
       customer: {
         id: customer!.id,
         name: customer!.name,

@@ -12,6 +12,9 @@ import type { AreaLoads } from '../../shared/api/jobs';
 /** Plant-wide settings kept as JSON (defaults apply to what is missing). */
 export interface PlantSettings {
   defaultLoads?: AreaLoads;
+  /** Contact details printed on quotes and truss design drawings. */
+  phone?: string;
+  email?: string;
 }
 
 /** The fabricator: owns every other record. */

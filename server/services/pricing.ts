@@ -3,6 +3,14 @@
  * no clock. Money stays unrounded inside a line and is rounded to cents once — the unit price — so
  * that unit price × quantity is the line total to the cent; tax and deposit are rounded once each.
  */
+import {
+  areaLoadText,
+  loadRows,
+  overhangText,
+  overhangTips,
+  parsedInput,
+  spacingText,
+} from './designFacts';
 import type { PresentedDesign } from '../../shared/engine/design';
 import type { PriceBook, QuoteLine } from '../../shared/api/pricing';
 
@@ -195,13 +203,38 @@ export interface QuoteDesignSummary {
   reviewState: string;
   joints: { id: string; x: number; y: number }[];
   members: { from: string; to: string; role: string }[];
+  /**
+   * What the builder must confirm: design loads, spacing, overhangs and heel as text, and the
+   * overhang tips to draw (absent in quotes made before they were kept).
+   */
+  criteria?: QuoteDesignCriteria;
+}
+
+/** One truss's design criteria as the quote prints them. */
+export interface QuoteDesignCriteria {
+  /** [label, value] for TCLL, TCDL, BCLL, BCDL, snow, wind, concentrated loads. */
+  loads: [string, string][];
+  /** Short forms for a table cell: "pg 30 psf", "115 mph, exp. B", "uplift 12 psf" or "None". */
+  snow: string;
+  wind: string;
+  spacing: string;
+  overhangs: string;
+  heel: string;
+  /** Heel height in the joints' unit (in or mm). */
+  heelHeight: number;
+  overhangTips: {
+    side: 'left' | 'right';
+    heel: { x: number; y: number };
+    tip: { x: number; y: number };
+    text: string;
+  }[];
 }
 
 /** The frozen contents of a quote revision (`quotes.snapshot`). */
 export interface QuoteSnapshot {
   currency: string;
   units: 'imperial' | 'metric';
-  plant: { name: string; address: string | null };
+  plant: { name: string; address: string | null; phone?: string; email?: string };
   customer: { id: number; name: string; email: string; terms: PaymentTerms };
   job: { id: number; name: string; address: string };
   order: { id: number; number: string };
@@ -215,6 +248,20 @@ export interface QuoteSnapshot {
 
 const pitchText = (v: unknown) => (typeof v === 'number' ? `${Number(v.toFixed(3))}/12` : null);
 
+/** Snow and wind in a few words, for the quote's criteria table. */
+function shortWindSnow(input: NonNullable<ReturnType<typeof parsedInput>>) {
+  const { snow, wind, windUplift } = input.loads;
+  const speed = input.units === 'imperial' ? 'mph' : 'm/s';
+  const windParts = [
+    wind ? `${wind.speed} ${speed}, exp. ${wind.exposure}` : '',
+    windUplift !== undefined ? `uplift ${areaLoadText(input, windUplift)}` : '',
+  ].filter(Boolean);
+  return {
+    snow: snow ? `pg ${areaLoadText(input, snow.pg)}` : 'None',
+    wind: windParts.length ? windParts.join('; ') : 'None',
+  };
+}
+
 /** The drawing and description of one stored design, as a quote keeps it. */
 export function summarizeDesign(line: {
   mark: string;
@@ -226,6 +273,16 @@ export function summarizeDesign(line: {
   design: PresentedDesign;
 }): QuoteDesignSummary {
   const d = line.design;
+  const input = parsedInput(line.designInput);
+  const criteria: QuoteDesignCriteria | null = input && {
+    loads: loadRows(input),
+    ...shortWindSnow(input),
+    spacing: spacingText(input),
+    overhangs: overhangText(input),
+    heel: d.heelHeight.requested.text,
+    heelHeight: d.heelHeight.requested.value,
+    overhangTips: overhangTips(input, d),
+  };
   return {
     mark: line.mark,
     description: line.description,
@@ -239,5 +296,6 @@ export function summarizeDesign(line: {
     reviewState: line.reviewState,
     joints: d.joints.map((j) => ({ id: j.id, x: j.x, y: j.y })),
     members: d.members.map((m) => ({ from: m.from, to: m.to, role: m.role })),
+    ...(criteria && { criteria }),
   };
 }

@@ -19,8 +19,9 @@ const TOP_ROOM = 14;
  * top chord. Chords draw heavier than webs, as shop drawings do (common practice).
  */
 export function drawTruss(doc: Doc, d: QuoteDesignSummary, box: Box) {
-  const xs = d.joints.map((j) => j.x);
-  const ys = d.joints.map((j) => j.y);
+  const tips = d.criteria?.overhangTips ?? [];
+  const xs = [...d.joints.map((j) => j.x), ...tips.map((t) => t.tip.x)];
+  const ys = [...d.joints.map((j) => j.y), ...tips.map((t) => t.tip.y)];
   const minX = Math.min(...xs);
   const maxX = Math.max(...xs);
   const minY = Math.min(...ys);
@@ -53,9 +54,48 @@ export function drawTruss(doc: Doc, d: QuoteDesignSummary, box: Box) {
       .strokeColor(web ? COLORS.web : COLORS.chord)
       .stroke();
   }
-  drawSpan(doc, px(minX), px(maxX), baseY + 8, d.span);
+  drawOverhangsAndHeel(doc, d, px, py, baseY);
+  const jx = d.joints.map((j) => j.x);
+  drawSpan(doc, px(Math.min(...jx)), px(Math.max(...jx)), baseY + 8, d.span);
   if (d.pitch) drawPitch(doc, d, px, py);
   doc.restore();
+}
+
+/**
+ * The overhangs as the top chord continued to its tips, each with its length under the tip, and
+ * the heel height marked at the left bearing (a standard heel draws pointed in the line model).
+ */
+function drawOverhangsAndHeel(
+  doc: Doc,
+  d: QuoteDesignSummary,
+  px: (x: number) => number,
+  py: (y: number) => number,
+  baseY: number,
+) {
+  const c = d.criteria;
+  if (!c) return;
+  const byX = [...d.joints].sort((a, b) => a.x - b.x || a.y - b.y);
+  doc.font('regular').fontSize(6.5);
+  for (const t of c.overhangTips) {
+    const { heel } = t;
+    doc
+      .moveTo(px(heel.x), py(heel.y))
+      .lineTo(px(t.tip.x), py(t.tip.y))
+      .lineWidth(1.6)
+      .strokeColor(COLORS.chord)
+      .stroke();
+    // Under the span's dimension line, flush with the tip, clear of the span text in the middle.
+    const label = `${t.text} overhang`;
+    const tw = doc.widthOfString(label);
+    const x = t.side === 'left' ? px(t.tip.x) : px(t.tip.x) - tw;
+    doc.fillColor(COLORS.dim).text(label, x, baseY + 13, { lineBreak: false });
+  }
+  if (c.heelHeight > 0 && byX[0]) {
+    const x = px(byX[0].x);
+    doc.font('regular').fontSize(6.5).fillColor(COLORS.dim);
+    const label = `heel ${c.heel}`;
+    doc.text(label, x + 4, py(byX[0].y) + 2, { lineBreak: false });
+  }
 }
 
 /** A dimension line with end ticks and the span text centred in a gap. */

@@ -1,4 +1,5 @@
 import type { QuoteSnapshot } from '../pricing';
+import { acceptance, designCriteria } from './criteria';
 import { drawTruss } from './drawing';
 import { openDocument, pageFooters } from './document';
 import { header, linesTable, notes, parties, totals, type PrintMeta } from './sections';
@@ -53,9 +54,10 @@ function drawings(doc: Doc, s: QuoteSnapshot, y: number, newPage: () => number) 
       d.pitch ? `Pitch ${d.pitch}` : 'Flat',
       d.bottomPitch ? `bottom chord ${d.bottomPitch}` : '',
       `Rise ${d.rise}`,
+      d.criteria ? `Heel ${d.criteria.heel}` : '',
       line ? `${line.plies} ${line.plies === 1 ? 'ply' : 'plies'}` : '',
     ].filter(Boolean);
-    textAt(doc, facts.join('  ·  '), x + 10, at + CARD_H - 15, {
+    textAt(doc, facts.join(' · '), x + 10, at + CARD_H - 15, {
       size: 7.5,
       color: COLORS.muted,
       width: cardW - 20,
@@ -83,8 +85,10 @@ export function renderQuotePdf(quote: PrintableQuote): Promise<Buffer> {
   y = linesTable(doc, s, y, newPage);
   if (y + 110 > contentBottom(doc)) y = newPage();
   y = totals(doc, s, y);
+  y = designCriteria(doc, s, y, newPage);
   y = notes(doc, s, y, newPage);
-  drawings(doc, s, y, newPage);
+  y = drawings(doc, s, y, newPage);
+  acceptance(doc, s, quote.reference, y, newPage);
   pageFooters(doc, `${s.plant.name}  ·  Quote ${quote.reference}`);
   doc.end();
   return done;

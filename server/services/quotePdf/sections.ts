@@ -19,7 +19,9 @@ export function header(doc: Doc, s: QuoteSnapshot, meta: PrintMeta) {
   const y = MARGIN.top;
   textAt(doc, s.plant.name, x, y, { font: 'bold', size: 16, width: w * 0.55 });
   let left = y + 22;
-  for (const line of (s.plant.address ?? '').split(/\n|,\s*(?=[^,]*$)/).filter(Boolean)) {
+  const contact = [s.plant.phone, s.plant.email].filter(Boolean).join('  ·  ');
+  const lines = (s.plant.address ?? '').split(/\n|,\s*(?=[^,]*$)/).filter(Boolean);
+  for (const line of [...lines, ...(contact ? [contact] : [])]) {
     textAt(doc, line.trim(), x, left, { size: 9, color: COLORS.muted, width: w * 0.55 });
     left += 12;
   }

@@ -16,7 +16,8 @@ const DIM = '#4a5563';
 
 /**
  * The truss of one sheet drawn to scale inside `box` (y up in the geometry, down on the page):
- * lumber outlines, plates over them, piece marks, joint letters and dimension chains.
+ * lumber outlines, plates over them, piece marks, joint letters and dimension chains. Returns the
+ * page mapping, so a caller can add its own marks in the same place.
  */
 export function drawGeometry(doc: Doc, g: ShopDrawingGeometry, box: Box) {
   const { minX, minY, maxX, maxY } = g.bounds;
@@ -67,4 +68,5 @@ export function drawGeometry(doc: Doc, g: ShopDrawingGeometry, box: Box) {
     doc.text(d.text, (x0 + x1) / 2 - tw / 2, y + (d.offset > 0 ? -7.5 : 1.5), { lineBreak: false });
   }
   doc.restore();
+  return { px, py, scale };
 }

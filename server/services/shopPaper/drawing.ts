@@ -20,7 +20,7 @@ const round = (v: number) => Math.round(v * 1000) / 1000 + 0;
 const pt = (x: number, y: number): Point => [round(x), round(y)];
 
 /** Dressed depth of a lumber id in the design's units (3.5 in / 88.9 mm for a 2x4). */
-function depthOf(design: PresentedDesign, lumber: string): number {
+export function depthOf(design: PresentedDesign, lumber: string): number {
   const [size] = lumber.trim().split(/\s+/);
   const inches = size && isLumberSize(size) ? dressedSize(size).widthIn : 3.5;
   return design.units.length === 'mm' ? inches * 25.4 : inches;

@@ -1,4 +1,4 @@
-import { chainDimensions, pitchSymbol } from './dimensions';
+import { chainDimensions, overallHeight, panelChain, pitchSymbol } from './dimensions';
 import { jointIndex, toScreen, type Point, type ScreenTransform } from './geometry';
 import type { DrawingModel } from './model';
 import { formatLength, type PlantUnits } from './quantities';
@@ -13,10 +13,16 @@ export interface DrawingDimensionsProps {
 
 const TICK = 6;
 
-/** Span/overhang chain below the bearings, heel height at the left, pitch symbol on the slope. */
+/**
+ * Panel-point chain and span/overhang chain below the bearings, heel height at the left, overall
+ * height at the right, pitch symbol on the slope. Vertical dimensions read up, beside their lines,
+ * so a long label is never cut by the drawing's edge.
+ */
 export function DrawingDimensions({ model, units, transform: t, tips }: DrawingDimensionsProps) {
   const base = toScreen(t, { x: 0, y: 0 });
-  const lineY = base.y + 58;
+  const panels = panelChain(model, units);
+  const panelY = base.y + 42;
+  const lineY = base.y + (panels.length > 0 ? 70 : 58);
   const lowestTip = Math.min(0, ...tips.map((x) => x.tip.y - base.y));
   const chain = chainDimensions(model, units);
   const pitch = pitchSymbol(model);
@@ -28,6 +34,17 @@ export function DrawingDimensions({ model, units, transform: t, tips }: DrawingD
   const heelLeftX = Math.min(base.x, ...tips.filter((x) => x.side === 'left').map((x) => x.tip.x));
   const heelX = heelLeftX - 40;
   const heelTop = toScreen(t, { x: 0, y: model.heelHeight });
+  const height = overallHeight(model);
+  const rightX =
+    Math.max(
+      toScreen(t, { x: model.span, y: 0 }).x,
+      ...tips.filter((x) => x.side === 'right').map((x) => x.tip.x),
+    ) + 28;
+  const top = toScreen(t, { x: 0, y: height });
+  const bottomChord = new Set(
+    model.members.filter((m) => m.role === 'bottomChord').flatMap((m) => [m.from, m.to]),
+  );
+  const panelJoints = model.joints.filter((j) => bottomChord.has(j.id));
 
   return (
     <g
@@ -35,6 +52,43 @@ export function DrawingDimensions({ model, units, transform: t, tips }: DrawingD
       className="fill-sand-700 stroke-sand-500 text-[12px]"
       pointerEvents="none"
     >
+      {panels.map((seg) => {
+        const x1 = toScreen(t, { x: seg.from, y: 0 }).x;
+        const x2 = toScreen(t, { x: seg.to, y: 0 }).x;
+        return (
+          <g key={seg.key} data-dimension={seg.key}>
+            <line x1={x1} y1={panelY} x2={x2} y2={panelY} strokeWidth={1} />
+            <line x1={x1} y1={panelY - TICK} x2={x1} y2={panelY + TICK} strokeWidth={1} />
+            <line x1={x2} y1={panelY - TICK} x2={x2} y2={panelY + TICK} strokeWidth={1} />
+            <text
+              x={(x1 + x2) / 2}
+              y={panelY - 5}
+              textAnchor="middle"
+              stroke="none"
+              className="text-[11px]"
+            >
+              {seg.label}
+            </text>
+          </g>
+        );
+      })}
+      {panels.length > 0
+        ? panelJoints.map((j) => {
+            const p = toScreen(t, j);
+            // Past the support symbols at the bearings, short dashes elsewhere.
+            return (
+              <line
+                key={`ext-${j.id}`}
+                x1={p.x}
+                y1={p.y + (j.y === 0 ? 30 : 8)}
+                x2={p.x}
+                y2={panelY - TICK}
+                strokeWidth={0.75}
+                strokeDasharray="3 3"
+              />
+            );
+          })
+        : null}
       {chain.map((seg) => {
         const x1 = toScreen(t, { x: seg.from, y: 0 }).x;
         const x2 = toScreen(t, { x: seg.to, y: 0 }).x;
@@ -90,13 +144,39 @@ export function DrawingDimensions({ model, units, transform: t, tips }: DrawingD
           <line x1={heelX} y1={base.y} x2={heelX} y2={heelTop.y} strokeWidth={1} />
           <line x1={heelX - TICK} y1={base.y} x2={heelX + TICK} y2={base.y} strokeWidth={1} />
           <line x1={heelX - TICK} y1={heelTop.y} x2={heelX + TICK} y2={heelTop.y} strokeWidth={1} />
-          <text x={heelX - 8} y={(base.y + heelTop.y) / 2 + 4} textAnchor="end" stroke="none">
-            {formatLength(model.heelHeight, units)}
-          </text>
+          <VerticalLabel x={heelX - 6} y={(base.y + heelTop.y) / 2}>
+            {`heel ${formatLength(model.heelHeight, units)}`}
+          </VerticalLabel>
+        </g>
+      ) : null}
+      {height > 0 ? (
+        <g data-dimension="height">
+          <line x1={rightX} y1={base.y} x2={rightX} y2={top.y} strokeWidth={1} />
+          <line x1={rightX - TICK} y1={base.y} x2={rightX + TICK} y2={base.y} strokeWidth={1} />
+          <line x1={rightX - TICK} y1={top.y} x2={rightX + TICK} y2={top.y} strokeWidth={1} />
+          <VerticalLabel x={rightX + 14} y={(base.y + top.y) / 2}>
+            {`height ${formatLength(height, units)}`}
+          </VerticalLabel>
         </g>
       ) : null}
       {pitch && a && b ? <PitchMark t={t} a={a} b={b} rise={pitch.rise} run={pitch.run} /> : null}
     </g>
+  );
+}
+
+/** Text reading up, centred on (x, y): beside a vertical dimension line. */
+function VerticalLabel({ x, y, children }: { x: number; y: number; children: string }) {
+  return (
+    <text
+      x={x}
+      y={y}
+      textAnchor="middle"
+      transform={`rotate(-90 ${x} ${y})`}
+      stroke="none"
+      className="text-[11px]"
+    >
+      {children}
+    </text>
   );
 }
 

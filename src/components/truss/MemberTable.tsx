@@ -45,6 +45,12 @@ function columnsFor(unit: 'lbf' | 'kN'): TableColumn<Row>[] {
       ),
     }),
     column.accessor('lumber', { header: 'Lumber' }),
+    // Centre-line length between panel points, as the design stores it (feet-inches or mm).
+    column.accessor((r) => r.length.text, {
+      id: 'length',
+      header: 'Length',
+      cell: (info) => <span className="whitespace-nowrap tabular-nums">{info.getValue()}</span>,
+    }),
     column.accessor('governingForce', {
       header: 'Force',
       cell: (info) => {

@@ -35,9 +35,10 @@ export interface TrussDrawingProps {
 }
 
 const WIDTH = 960;
-const HEIGHT = 420;
-// Room below for the chain of span dimensions, left for the heel height, above for labels.
-const MARGINS: Margins = { top: 48, right: 48, bottom: 92, left: 84 };
+const HEIGHT = 440;
+// Room below for the panel-point and span chains, left for the heel height, right for the
+// overall height, above for labels.
+const MARGINS: Margins = { top: 48, right: 64, bottom: 104, left: 84 };
 
 interface PlacedMember {
   member: DrawingMember;
@@ -218,10 +219,20 @@ export const TrussDrawing = memo(function TrussDrawing({
       ];
     });
     const centre = toScreen(t, drawingCentre(model));
+    // T/C tags sit at member midpoints; a joint letter that would touch one moves farther out.
+    const tags = members
+      .filter((m) => m.member.force !== undefined && forceSense(m.member.force) !== '—')
+      .map((m) => midpoint(m.a, m.b));
     const joints = model.joints.map((j) => {
       const p = toScreen(t, j);
-      const o = labelOffset(p, centre, 15);
-      return { id: j.id, p, label: { x: p.x + o.x, y: p.y + o.y } };
+      const place = (d: number) => {
+        const o = labelOffset(p, centre, d);
+        return { x: p.x + o.x, y: p.y + o.y };
+      };
+      const clear = (l: Point) =>
+        tags.every((g) => Math.abs(g.x - l.x) > 14 || Math.abs(g.y - l.y) > 15);
+      const label = [15, 24, 33].map(place).find(clear) ?? place(15);
+      return { id: j.id, p, label };
     });
     const tips = overhangTips(model).map((tip) => ({
       side: tip.side,

@@ -40,6 +40,40 @@ export function chainDimensions(model: DrawingModel, units: PlantUnits): ChainSe
   return segments;
 }
 
+/** One bay of the panel-point chain: between neighbouring bottom-chord panel points, mm along x. */
+export interface PanelSegment {
+  key: string;
+  from: number;
+  to: number;
+  label: string;
+}
+
+/**
+ * The chain of bottom-chord panel points, left to right, as the shop drawing dimensions them
+ * (centre lines, feet-inches-sixteenths or mm). Empty when the chord has a single bay, which the
+ * span already states.
+ */
+export function panelChain(model: DrawingModel, units: PlantUnits): PanelSegment[] {
+  const ids = new Set(
+    model.members.filter((m) => m.role === 'bottomChord').flatMap((m) => [m.from, m.to]),
+  );
+  const xs = [
+    ...new Set(model.joints.filter((j) => ids.has(j.id)).map((j) => Math.round(j.x * 2) / 2)),
+  ].sort((a, b) => a - b);
+  if (xs.length < 3) return [];
+  return xs.slice(1).map((x, i) => ({
+    key: `panel-${i}`,
+    from: xs[i],
+    to: x,
+    label: formatLength(x - xs[i], units),
+  }));
+}
+
+/** Height of the highest joint above the bearings, mm. */
+export function overallHeight(model: DrawingModel): number {
+  return Math.max(0, ...model.joints.map((j) => j.y));
+}
+
 /** The pitch symbol's text: rise over 12, or null for a flat truss. */
 export function pitchSymbol(model: DrawingModel): { rise: string; run: string } | null {
   if (model.pitch === undefined || model.pitch <= 0) return null;

@@ -14,6 +14,7 @@ import { renderQuotePdf } from '../../../server/services/quotePdf';
 import { DESIGN_CAUTIONS } from '../../../shared/engine/design';
 import { FINK_24 } from '../../support/factories';
 import { requirePdftotext, pdfText } from '../routes/quotes/helpers';
+import { keep } from '../routes/shopPaper/helpers';
 
 /** A snapshot of `n` FINK_24 lines (invented demo names and prices). */
 function snapshot(n: number, units: 'imperial' | 'metric'): QuoteSnapshot {
@@ -91,5 +92,50 @@ describe('the quote PDF', () => {
     const names = fonts.split('\n').slice(2).filter(Boolean);
     expect(names.length).toBeGreaterThan(0);
     for (const row of names) expect(row).toMatch(/Inter/);
+  });
+
+  it('states each truss design loads, spacing, overhangs and heel, the plant contacts and an acceptance block', async () => {
+    requirePdftotext();
+    const s = snapshot(2, 'imperial');
+    s.plant = { ...s.plant, phone: '(555) 010-0100', email: 'desk@plant.test' };
+    const mono = computeDesign({
+      ...FINK_24,
+      profile: 'mono',
+      span: 168,
+      overhang: 18,
+      loads: { ...FINK_24.loads, windUplift: 12, snow: { pg: 30 } },
+    });
+    s.designs.push(
+      summarizeDesign({
+        mark: 'M1',
+        description: mono.description,
+        maxCsi: mono.maxCsi,
+        reviewState: 'approved',
+        engineVersion: mono.engineVersion,
+        designInput: mono.input as unknown as Record<string, unknown>,
+        design: mono.result,
+      }),
+    );
+    const pdf = await render(s);
+    const text = pdfText(pdf);
+    expect(text).toContain('(555) 010-0100');
+    expect(text).toContain('desk@plant.test');
+    expect(text).toContain('Design loads and criteria');
+    expect(text).toContain('Confirm them with the building designer before accepting');
+    // FINK_24: 20/10/0/10 psf at 24 in. o.c., 1 ft overhangs both ends, pointed (0) heel.
+    expect(text).toMatch(
+      /T1\s+20 psf\s+10 psf\s+0 psf\s+10 psf\s+None\s+None\s+24 in\. o\.c\.\s+1'-0" each end\s+0'-0"/,
+    );
+    // The mono: snow and net uplift, overhang at the low end only.
+    expect(text).toMatch(
+      /M1\s+20 psf\s+10 psf\s+0 psf\s+10 psf\s+pg 30 psf\s+uplift 12 psf\s+24 in\. o\.c\.\s+1'-6" left, none right/,
+    );
+    expect(text).toMatch(/Snow: Ground snow pg 30 psf/);
+    expect(text).toMatch(/1'-0" overhang/);
+    expect(text).toMatch(/1'-6" overhang/);
+    expect(text).toContain('Acceptance');
+    expect(text).toMatch(/Signing accepts quote 2026-0099-Q1/);
+    expect(text).toMatch(/Signature\s+Printed name\s+Date/);
+    keep('quote-criteria.pdf', pdf);
   });
 });

@@ -1,5 +1,6 @@
 import type { LineSummary } from '../../../../shared/api/orders';
-import { Button, LinkButton } from '../../../components/ui';
+import { Button, focusRing, LinkButton } from '../../../components/ui';
+import { designDrawingPath } from '../../../lib/design-drawing';
 
 /** Props of {@link LineActions}. */
 export interface LineActionsProps {
@@ -35,6 +36,16 @@ export function LineActions({
       >
         Edit
       </LinkButton>
+      <a
+        href={designDrawingPath(orderId, line)}
+        target="_blank"
+        rel="noopener"
+        aria-label={`Truss design drawing of ${line.mark} (PDF)`}
+        title="Truss design drawing (PDF)"
+        className={`inline-flex h-8 items-center rounded px-2 text-sm font-medium text-timber-700 underline hover:bg-sand-100 ${focusRing}`}
+      >
+        PDF
+      </a>
       <Button
         size="sm"
         variant="ghost"

@@ -1,3 +1,4 @@
+import { designDrawingPath } from '../../../lib/design-drawing';
 import { useNavigate } from 'react-router';
 import { TrussDrawing } from '../../../components/truss/TrussDrawing';
 import { Alert, Card, PageHeader, QueryState } from '../../../components/ui';
@@ -87,6 +88,23 @@ export function BuilderQuotePage({ orderId, number }: { orderId: number; number:
                   >
                     Open the PDF
                   </a>
+                </p>
+                <p className="mt-2 text-sm">
+                  Truss design drawings:{' '}
+                  {q.lines.map((l, i) => (
+                    <span key={l.mark}>
+                      {i > 0 ? ', ' : ''}
+                      <a
+                        className="font-medium text-timber-700 underline"
+                        href={designDrawingPath(orderId, { mark: l.mark })}
+                        target="_blank"
+                        rel="noreferrer"
+                        aria-label={`Truss design drawing of ${l.mark} (PDF)`}
+                      >
+                        {l.mark}
+                      </a>
+                    </span>
+                  ))}
                 </p>
               </Card>
               <Card title="Terms">

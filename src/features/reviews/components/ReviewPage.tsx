@@ -21,6 +21,7 @@ import { reviewKeys } from '../../../lib/query-keys';
 import { useReviewLine } from '../api/get-line';
 import { useSubmitReview, type ReviewDecision } from '../api/submit-review';
 import { orderIdFromSearch } from '../review-link';
+import { designDrawingPath } from '../../../lib/design-drawing';
 
 /** The order of a line: from `?order=`, else from any cached page of the queue. */
 function useOrderIdOf(lineId: number): number | undefined {
@@ -205,6 +206,16 @@ export function ReviewPage() {
               This line has no stored design result to draw.
             </p>
           )}
+          <p className="mt-3 text-sm">
+            <a
+              className="font-medium text-timber-700 underline"
+              href={designDrawingPath(orderId, l)}
+              target="_blank"
+              rel="noopener"
+            >
+              Open the truss design drawing (PDF)
+            </a>
+          </p>
         </Card>
         {l.reviewState === 'approved' ? null : <Decision line={l} orderId={orderId} />}
         {isPresentedDesign(result) ? <DesignResults design={result} /> : null}

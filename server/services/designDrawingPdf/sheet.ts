@@ -1,0 +1,279 @@
+import type { PresentedDesign } from '../../../shared/engine/design';
+import { GRADE_DATA, isLumberGrade } from '../../../shared/engine/lumber';
+import { PROFILE_KIND_LABELS, type ProfileKind } from '../../../shared/engine/profiles';
+import { formatNumber } from '../quotePdf/format';
+import {
+  loadRows,
+  overallHeight,
+  overhangText,
+  overhangTips,
+  parsedInput,
+  spacingText,
+  type PaperOverhang,
+} from '../designFacts';
+import { jointPlateRows } from '../shopPaper/plateSchedule';
+import { lengthText, shortLengthText, type ShopLine } from '../shopPaper/lines';
+import {
+  depthOf,
+  memberBands,
+  plateOutlines,
+  shopDrawingGeometry,
+  type PieceOutline,
+} from '../shopPaper/drawing';
+import type { ShopDrawingGeometry } from '../../../shared/api/shopPaper';
+
+/** Who and where, as the sheet's title block prints them. */
+export interface DesignDrawingContext {
+  plant: { name: string; address: string | null; phone?: string; email?: string };
+  order: { number: string; job: string; jobAddress: string; builder: string };
+  line: ShopLine & {
+    reviewState: string;
+    reviewedBy: string | null;
+    reviewedAt: Date | null;
+  };
+  printedAt: Date;
+}
+
+/** Label/value rows of one block of the sheet. */
+export type Rows = [string, string][];
+
+/** Everything one truss design drawing prints (IRC 2021 R802.10.1), as text. */
+export interface DesignDrawingSheet {
+  title: { mark: string; description: string; quantity: string; profile: string };
+  plant: DesignDrawingContext['plant'];
+  order: DesignDrawingContext['order'];
+  review: { status: string; approved: boolean };
+  criteria: Rows;
+  loads: Rows;
+  adjustments: string[];
+  reactions: string[][];
+  joints: string[][];
+  members: string[][];
+  webCompression: string;
+  bracing: string[];
+  deflection: Rows;
+  connections: Rows;
+  warnings: string[];
+  cautions: string[];
+  engineVersion: string;
+  printedAt: Date;
+  /** The drawing: pieces, plates, joint letters, panel-point chains; overhangs and heights. */
+  geometry: ShopDrawingGeometry;
+  overhangs: PaperOverhang[];
+  heights: { heel: number; heelText: string; overall: number; overallText: string };
+}
+
+/** "1,034 lbf" or "4.600 kN". */
+export function forceText(d: PresentedDesign, v: number): string {
+  return d.units.force === 'lbf' ? `${formatNumber(v, 0)} lbf` : `${formatNumber(v, 2, true)} kN`;
+}
+
+/** A deflection in decimal inches or mm: "0.121 in." or "3.1 mm". */
+const deflText = (d: PresentedDesign, v: number) =>
+  d.units.length === 'in' ? `${v.toFixed(3)} in.` : `${v.toFixed(1)} mm`;
+
+/** "2x4 Douglas Fir-Larch DF-L No.2" from "2x4 DFL-2". */
+export function lumberText(id: string): string {
+  const [size, grade] = id.trim().split(/\s+/);
+  if (!grade || !isLumberGrade(grade)) return id;
+  const g = GRADE_DATA[grade];
+  return `${size} ${g.species} ${g.label}`;
+}
+
+const pitchText = (input: Record<string, unknown>) => {
+  const p = Number(input.pitch);
+  if (input.profile === 'flat' || !Number.isFinite(p) || p <= 0) return 'Flat (0/12)';
+  return `${Number(p.toFixed(3))}/12`;
+};
+
+/** The sheet's content from a stored line: every R802.10.1 item, the cautions, the engine. */
+export function designDrawingSheet(ctx: DesignDrawingContext): DesignDrawingSheet {
+  const { line } = ctx;
+  const d = line.design;
+  const input = parsedInput(line.designInput);
+  const len = (v: number) => lengthText(d, v);
+  const short = (v: number) => shortLengthText(d, v);
+  const force = (v: number) => forceText(d, v);
+  const profile = String(line.designInput.profile ?? '');
+  const kind = PROFILE_KIND_LABELS[profile as ProfileKind] ?? profile;
+  const height = overallHeight(d);
+  const bottomPitch = Number(line.designInput.bottomPitch);
+
+  const criteria: Rows = [
+    ['Truss type', kind],
+    ['Slope (pitch)', pitchText(line.designInput)],
+    ...(Number.isFinite(bottomPitch) && bottomPitch > 0
+      ? ([['Bottom-chord slope', `${Number(bottomPitch.toFixed(3))}/12`]] as Rows)
+      : []),
+    ['Span (out to out)', d.span.text],
+    ['Heel height', d.heelHeight.requested.text],
+    ['Overall height', len(height)],
+    ['Overhangs', input ? overhangText(input) : '—'],
+    ['Spacing', input ? spacingText(input) : '—'],
+    ['Plies', String(line.plies)],
+    ...(input
+      ? ([
+          [
+            'Deflection limits',
+            `L/${input.deflection.live} live, L/${input.deflection.total} total`,
+          ],
+        ] as Rows)
+      : []),
+  ];
+
+  const byCd = new Map<number, string>();
+  for (const c of d.combinations) if (!byCd.has(c.cd)) byCd.set(c.cd, c.name);
+  const adjustments = [
+    `Load duration CD ${[...byCd].map(([cd, name]) => `${cd.toFixed(2)} (${name})`).join(', ')}: each ASD combination of ASCE 7-16 §2.4.1 takes the CD of its shortest load.`,
+    ...d.notes.filter((n) => /Cr = /.test(n)),
+    'Dry service (CM = 1.0), normal temperatures (Ct = 1.0); lumber NDS 2018 Supplement Tables 4A/4B; plate values from the plant catalog' +
+      (d.demoPlates ? ' (demo catalog: invented values, not for construction).' : '.'),
+  ];
+
+  const reactions = d.reactions.map((r) => {
+    const b = d.bearing.find((x) => x.joint === r.joint);
+    const required = b ? short(b.width.value * Math.min(1, Math.max(b.ratio, 0))) : '—';
+    return [
+      r.joint,
+      b ? short(b.width.value) : '—',
+      required,
+      force(r.maxDown),
+      r.maxUp > 0 ? force(r.maxUp) : 'None',
+      force(r.maxHorizontal),
+    ];
+  });
+
+  const plateRows = jointPlateRows(line);
+  const joints = d.joints.map((j) => {
+    const p = plateRows.find((r) => r.joint === j.id);
+    const plate = d.plates.find((x) => x.joint === j.id);
+    return [
+      j.id,
+      len(j.x),
+      len(j.y),
+      p ? `${p.plate}, ${p.gauge} ga, both faces` : plate?.message ? 'No plate fits' : '—',
+      p ? `${p.widthIn} × ${p.lengthIn} in.` : '—',
+      p ? p.position.replace(/ of the joint$/, '') : '—',
+    ];
+  });
+
+  const members = d.members.map((m) => [
+    m.id,
+    m.piece,
+    lumberText(m.lumber),
+    m.length.text,
+    m.maxCompression > 0 ? force(m.maxCompression) : '—',
+    m.maxTension > 0 ? force(m.maxTension) : '—',
+    m.csi.toFixed(2),
+  ]);
+
+  const webs = d.members.filter((m) => m.role === 'web');
+  const worst = [...webs].sort((a, b) => b.maxCompression - a.maxCompression)[0];
+  const webCompression = worst
+    ? `Maximum web compression ${force(worst.maxCompression)} in ${worst.id} (${worst.length.text}).`
+    : 'No webs.';
+  const bracing = [
+    ...d.members
+      .filter((m) => m.braced)
+      .map((m) => `${m.id} (${m.piece}): ${m.bracing.replace(/\.$/, '')}.`),
+    'Top chord: continuous lateral restraint by the roof sheathing; bottom chord: by the ceiling (or purlins at 10 ft o.c. where there is none).',
+  ];
+
+  const defl = d.deflection;
+  const dText = (c: NonNullable<typeof defl.live>) =>
+    `L/${c.ratio ?? '∞'} (limit L/${c.limit}), max ${deflText(d, c.max)} at ${c.joint} (${c.load})`;
+  const deflection: Rows = [
+    ...(defl.live ? ([['Live-load vertical', dText(defl.live)]] as Rows) : []),
+    ['Total-load vertical', dText(defl.total)],
+    [
+      'Horizontal',
+      `Bearing ${d.reactions[d.reactions.length - 1]?.joint ?? ''} slides (roller); horizontal movement is not calculated by this engine version`,
+    ],
+  ];
+
+  const connections: Rows = [
+    ['Truss-to-girder', 'None: carries no other truss; bearings anchored for the reactions'],
+    [
+      'Ply-to-ply',
+      line.plies > 1
+        ? `${line.plies} plies, each plated on both faces, fastened together per the reviewer's ply-to-ply schedule`
+        : 'Single ply: none',
+    ],
+  ];
+
+  const reviewStatus =
+    line.reviewState === 'approved'
+      ? `Approved by ${line.reviewedBy ?? 'the design reviewer'}${line.reviewedAt ? ` on ${line.reviewedAt.toISOString().slice(0, 10)}` : ''}`
+      : line.reviewState === 'returned'
+        ? 'Returned by the design reviewer: preliminary, not for construction'
+        : 'Waiting for review: preliminary, not for construction';
+
+  const overhangs = overhangTips(input, d);
+  const topChord = d.members.find((m) => m.role === 'topChord');
+  const bands = [
+    ...memberBands(d),
+    ...overhangs.map((o) => overhangOutline(o, topChord ? depthOf(d, topChord.lumber) : 0)),
+  ];
+  const geometry = shopDrawingGeometry(d, bands, plateOutlines(d, plateRows));
+  widenBounds(geometry);
+
+  return {
+    title: {
+      mark: line.mark,
+      description: line.description,
+      quantity: `${line.quantity} truss${line.quantity === 1 ? '' : 'es'}`,
+      profile: kind,
+    },
+    plant: ctx.plant,
+    order: ctx.order,
+    review: { status: reviewStatus, approved: line.reviewState === 'approved' },
+    criteria,
+    loads: input ? loadRows(input) : [['Loads', 'Stored input unreadable; see the design record']],
+    adjustments,
+    reactions,
+    joints,
+    members,
+    webCompression,
+    bracing,
+    deflection,
+    connections,
+    warnings: d.warnings,
+    cautions: d.cautions,
+    engineVersion: line.engineVersion || d.engineVersion,
+    printedAt: ctx.printedAt,
+    geometry,
+    overhangs,
+    heights: {
+      heel: d.heelHeight.requested.value,
+      heelText: d.heelHeight.requested.text,
+      overall: height,
+      overallText: len(height),
+    },
+  };
+}
+
+/** Room in the bounds, left and right, for the height dimensions beside the truss. */
+function widenBounds(g: ShopDrawingGeometry) {
+  const side = (g.bounds.maxX - g.bounds.minX) * 0.06;
+  g.bounds.minX -= side;
+  g.bounds.maxX += side;
+}
+
+/** Outline of an overhang band (for callers that draw lumber), in the design's units. */
+export function overhangOutline(o: PaperOverhang, depth: number): PieceOutline {
+  const dx = o.tip.x - o.heel.x;
+  const dy = o.tip.y - o.heel.y;
+  const len = Math.hypot(dx, dy) || 1;
+  const nx = (-dy / len) * (depth / 2);
+  const ny = (dx / len) * (depth / 2);
+  return {
+    piece: 'OH',
+    role: 'overhang',
+    points: [
+      [o.heel.x + nx, o.heel.y + ny],
+      [o.tip.x + nx, o.tip.y + ny],
+      [o.tip.x - nx, o.tip.y - ny],
+      [o.heel.x - nx, o.heel.y - ny],
+    ],
+  };
+}
