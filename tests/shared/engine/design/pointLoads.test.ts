@@ -132,3 +132,34 @@ describe('point loads on a continuous chord: closed forms', () => {
     expect(r.members[0].endMoment).toBeCloseTo((-P * a * b * (L + a)) / (4 * L * L), 3);
   });
 });
+
+describe('point loads in the request', () => {
+  it('are checked in the user units and converted exactly (lb → N, kN → N)', () => {
+    const bad = designInputSchema.safeParse(
+      fink({ pointLoads: [{ x: 400, chord: 'bottom', dead: 100, live: 0 }] }),
+    );
+    expect(bad.success).toBe(false);
+    expect(bad.error!.issues[0].message).toMatch(/between the heels/);
+    const neg = designInputSchema.safeParse(
+      fink({ pointLoads: [{ x: 40, chord: 'top', dead: -5, live: 0 }] }),
+    );
+    expect(neg.error!.issues[0].message).toMatch(/between 0 and 20,000 lb/);
+    const imperial = engineInput(
+      fink({ pointLoads: [{ x: 120, chord: 'top', dead: 100, live: 250, kind: 'snow' }] }),
+    );
+    expect(imperial.pointLoads![0]).toMatchObject({
+      x: 120 * 25.4,
+      dead: 100 * N_PER_LB,
+      live: 250 * N_PER_LB,
+      kind: 'S',
+    });
+    const metric = engineInput({
+      ...fink(),
+      units: 'metric',
+      span: 8534,
+      spacing: 610,
+      pointLoads: [{ x: 3000, chord: 'bottom', dead: 2, live: 3, kind: 'floor' }],
+    });
+    expect(metric.pointLoads![0]).toMatchObject({ x: 3000, dead: 2000, live: 3000, kind: 'L' });
+  });
+});
