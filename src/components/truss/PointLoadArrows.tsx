@@ -26,7 +26,10 @@ export function PointLoadArrows({
               x={p.x}
               y={tip - LENGTH - 4}
               textAnchor="middle"
-              stroke="none"
+              // A white halo keeps the value readable over members and tags.
+              stroke="white"
+              strokeWidth={3}
+              paintOrder="stroke"
               className="text-[11px] font-semibold"
             >
               {l.text}

@@ -1,10 +1,23 @@
+import type { ReactNode } from 'react';
 import { useFieldArray, type Control } from 'react-hook-form';
 import { Button, Input, Select } from '../../../components/ui';
 import { newPointLoadRow } from '../form/point-loads';
 import type { TrussFormValues } from '../form/values';
 import { FieldGroup, type FieldContext } from './FormFields';
 
-const KIND_LABELS = { roofLive: 'Roof live', snow: 'Snow', floor: 'Floor/attic' } as const;
+const KIND_LABELS = { roofLive: 'Roof live', snow: 'Snow', floor: 'Floor' } as const;
+
+/** A small caption over one input of a point-load row (the input names itself for readers). */
+function Cell({ label, children }: { label: string; children: ReactNode }) {
+  return (
+    <div className="flex min-w-0 flex-col gap-0.5">
+      <span aria-hidden="true" className="text-xs text-sand-700">
+        {label}
+      </span>
+      {children}
+    </div>
+  );
+}
 
 /**
  * The point-load table: one row per concentrated load (hung trusses on a girder, equipment),
@@ -26,23 +39,25 @@ export function PointLoadFields({
   return (
     <FieldGroup title="Point loads">
       {fields.length > 0 ? (
-        <table className="w-full text-sm" data-testid="point-loads">
-          <thead>
-            <tr className="text-left text-xs text-sand-700">
-              <th className="pb-1 font-medium">From left heel</th>
-              <th className="pb-1 font-medium">Chord</th>
-              <th className="pb-1 font-medium">Dead ({force})</th>
-              <th className="pb-1 font-medium">Live ({force})</th>
-              <th className="pb-1 font-medium">Kind</th>
-              <th className="pb-1">
-                <span className="sr-only">Remove</span>
-              </th>
-            </tr>
-          </thead>
-          <tbody>
-            {fields.map((f, i) => (
-              <tr key={f.id}>
-                <td className="pr-1 pb-1">
+        <ol className="flex flex-col gap-2" data-testid="point-loads">
+          {fields.map((f, i) => (
+            <li key={f.id} className="rounded-md border border-sand-200 p-2">
+              <div className="mb-1 flex items-center justify-between">
+                <span className="text-xs font-semibold text-sand-800">Load {i + 1}</span>
+                {ctx.readOnly ? null : (
+                  <Button
+                    type="button"
+                    variant="ghost"
+                    size="sm"
+                    aria-label={`Remove point load ${i + 1}`}
+                    onClick={() => remove(i)}
+                  >
+                    Remove
+                  </Button>
+                )}
+              </div>
+              <div className="grid grid-cols-2 gap-2">
+                <Cell label="From left heel">
                   <Input
                     aria-label={`Point load ${i + 1} position`}
                     placeholder={units === 'imperial' ? `10'-0"` : '3000'}
@@ -51,8 +66,8 @@ export function PointLoadFields({
                     invalid={!!error}
                     {...ctx.register(`pointLoads.${i}.x`)}
                   />
-                </td>
-                <td className="pr-1 pb-1">
+                </Cell>
+                <Cell label="Chord">
                   <Select
                     aria-label={`Point load ${i + 1} chord`}
                     disabled={ctx.readOnly}
@@ -61,8 +76,10 @@ export function PointLoadFields({
                     <option value="top">Top</option>
                     <option value="bottom">Bottom</option>
                   </Select>
-                </td>
-                <td className="pr-1 pb-1">
+                </Cell>
+              </div>
+              <div className="mt-2 grid grid-cols-3 gap-2">
+                <Cell label={`Dead (${force})`}>
                   <Input
                     aria-label={`Point load ${i + 1} dead load`}
                     inputMode="decimal"
@@ -70,8 +87,8 @@ export function PointLoadFields({
                     readOnly={ctx.readOnly}
                     {...ctx.register(`pointLoads.${i}.dead`)}
                   />
-                </td>
-                <td className="pr-1 pb-1">
+                </Cell>
+                <Cell label={`Live (${force})`}>
                   <Input
                     aria-label={`Point load ${i + 1} live load`}
                     inputMode="decimal"
@@ -79,8 +96,8 @@ export function PointLoadFields({
                     readOnly={ctx.readOnly}
                     {...ctx.register(`pointLoads.${i}.live`)}
                   />
-                </td>
-                <td className="pr-1 pb-1">
+                </Cell>
+                <Cell label="Live kind">
                   <Select
                     aria-label={`Point load ${i + 1} kind`}
                     disabled={ctx.readOnly}
@@ -92,24 +109,11 @@ export function PointLoadFields({
                       </option>
                     ))}
                   </Select>
-                </td>
-                <td className="pb-1">
-                  {ctx.readOnly ? null : (
-                    <Button
-                      type="button"
-                      variant="secondary"
-                      size="sm"
-                      aria-label={`Remove point load ${i + 1}`}
-                      onClick={() => remove(i)}
-                    >
-                      ✕
-                    </Button>
-                  )}
-                </td>
-              </tr>
-            ))}
-          </tbody>
-        </table>
+                </Cell>
+              </div>
+            </li>
+          ))}
+        </ol>
       ) : (
         <p className="text-sm text-sand-600">
           None. Add the loads of trusses hung on this one (a girder) or equipment.
