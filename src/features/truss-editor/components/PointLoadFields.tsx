@@ -78,7 +78,7 @@ export function PointLoadFields({
                   </Select>
                 </Cell>
               </div>
-              <div className="mt-2 grid grid-cols-3 gap-2">
+              <div className="mt-2 grid grid-cols-[1fr_1fr_1.4fr] gap-2">
                 <Cell label={`Dead (${force})`}>
                   <Input
                     aria-label={`Point load ${i + 1} dead load`}
