@@ -1,7 +1,7 @@
 import { z } from 'zod';
 import { LUMBER_GRADES, LUMBER_SIZES } from '../engine/lumber';
 import type { ProfileKind } from '../engine/profiles/types';
-import { inch, inchToMm, KPA_PER_PSF, type Mm, mm } from '../engine/units';
+import { inch, inchToMm, KPA_PER_PSF, type Mm, mm, N_PER_LBF, newton } from '../engine/units';
 import type { AreaLoad, EngineDesignInput } from '../engine/design/input';
 
 /**
@@ -62,6 +62,25 @@ const windSchema = z.object({
   meanRoofHeight: num('Mean roof height'),
   kzt: num('Topographic factor Kzt').optional(),
   groundElevation: num('Ground elevation').optional(),
+});
+
+/** Live-load kinds of a point load: roof live (Lr), snow (S), floor or attic live (L). */
+export const POINT_LOAD_KINDS = ['roofLive', 'snow', 'floor'] as const;
+export type PointLoadKindInput = (typeof POINT_LOAD_KINDS)[number];
+
+/**
+ * A concentrated load on a chord (hung trusses on a girder, equipment): `x` from the left heel
+ * (in or mm), unfactored `dead` and `live` (lb imperial, kN metric) and the live load's kind.
+ */
+const pointLoadSchema = z.object({
+  x: num('Point load position'),
+  chord: z.enum(['top', 'bottom'], { error: 'A point load is on the top or bottom chord' }),
+  dead: num('Point load dead load'),
+  live: num('Point load live load').default(0),
+  kind: z
+    .enum(POINT_LOAD_KINDS, { error: 'Point load kind must be roof live, snow or floor' })
+    .default('roofLive'),
+  label: z.string().trim().max(40, 'A point load label has at most 40 characters').optional(),
 });
 
 const baseSchema = z.object({
@@ -139,6 +158,7 @@ const baseSchema = z.object({
     )
     .optional(),
   maxStockLength: num('Longest stock length').optional(),
+  pointLoads: z.array(pointLoadSchema).max(20, 'At most 20 point loads').optional(),
 });
 
 type Base = z.infer<typeof baseSchema>;
@@ -287,6 +307,26 @@ const checkRanges = (v: Base, ctx: z.RefinementCtx): void => {
     factor(['loads', 'snow', 'ct'], snow.ct, 0.85, 1.3, 'Thermal factor Ct');
     factor(['loads', 'snow', 'is'], snow.is, 0.8, 1.2, 'Importance factor Is');
   }
+  // Up to 20,000 lb (89 kN) a load: a multi-ply girder's hanger loads (common practice).
+  const [plo, phi, pu] = v.units === 'imperial' ? [0, 20000, 'lb'] : [0, 89, 'kN'];
+  v.pointLoads?.forEach((l, i) => {
+    if (l.x < 0 || l.x > v.span) {
+      ctx.addIssue({
+        code: 'custom',
+        path: ['pointLoads', i, 'x'],
+        message: 'A point load must lie between the heels (0 to the span)',
+      });
+    }
+    for (const key of ['dead', 'live'] as const) {
+      if (l[key] < plo || l[key] > phi) {
+        ctx.addIssue({
+          code: 'custom',
+          path: ['pointLoads', i, key],
+          message: `Point load ${key} load must be between 0 and ${phi.toLocaleString('en-US')} ${pu}`,
+        });
+      }
+    }
+  });
   within(
     ['deflection', 'live'],
     v.deflection?.live,
@@ -398,5 +438,19 @@ export const toEngineInput = (input: DesignInput): EngineDesignInput => {
     bearingWidth: len(input.bearingWidth),
     deflection: input.deflection,
     webBraces: input.webBraces,
+    ...(input.pointLoads &&
+      input.pointLoads.length > 0 && {
+        pointLoads: input.pointLoads.map((l) => ({
+          x: len(l.x),
+          chord: l.chord,
+          // lb → N (exact), kN → N.
+          dead: newton(imperial ? l.dead * N_PER_LBF : l.dead * 1000),
+          live: newton(imperial ? l.live * N_PER_LBF : l.live * 1000),
+          kind: POINT_LOAD_CASE[l.kind],
+          ...(l.label && { label: l.label }),
+        })),
+      }),
   };
 };
+
+const POINT_LOAD_CASE = { roofLive: 'Lr', snow: 'S', floor: 'L' } as const;

@@ -193,6 +193,8 @@ export const shopDrawingSchema = z.object({
   demoPlates: z.boolean(),
   engineVersion: z.string(),
   cautions: z.array(z.string()),
+  /** A girder's ply-to-ply fastening per chord, in words; absent for one ply. */
+  plyFastening: z.array(z.string()).optional(),
 });
 export type ShopDrawing = z.infer<typeof shopDrawingSchema>;
 

@@ -49,6 +49,8 @@ export interface CcxFrame {
   joints: CcxJoint[];
   members: CcxMember[];
   supports: { joint: string; type: 'pin' | 'roller' }[];
+  /** Concentrated loads at joints (global, N), e.g. a point load where a member was split. */
+  jointLoads?: { joint: string; fx?: number; fy?: number }[];
 }
 
 /** What CalculiX gives per member: axial force at mid-length (tension +), moments sagging + about the downward side. */
@@ -181,6 +183,11 @@ export function calculixFrameInput(frame: CcxFrame): {
       loads.set(n, [cur[0] + m.wx * share, cur[1] + m.wy * share]);
     });
   });
+  for (const p of frame.jointLoads ?? []) {
+    const n = l.master.get(p.joint)!;
+    const cur = loads.get(n) ?? [0, 0];
+    loads.set(n, [cur[0] + (p.fx ?? 0), cur[1] + (p.fy ?? 0)]);
+  }
   for (const [n, [fx, fy]] of loads) {
     if (fx) lines.push(`${n}, 1, ${fx}`);
     if (fy) lines.push(`${n}, 2, ${fy}`);

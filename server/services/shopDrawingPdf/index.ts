@@ -102,6 +102,7 @@ function sheet(doc: Doc, s: ShopDrawing) {
     braces.length ? `Bracing: ${braces.join('; ')}.` : 'No web bracing required by the design.',
     `Dimensions to panel points, centre lines, feet-inches-sixteenths. Engine ${s.engineVersion}.`,
     s.demoPlates ? 'Demo plate catalog: its design values are invented.' : '',
+    ...(s.plyFastening ?? []).map((t) => `Ply fastening: ${t}`),
   ].filter(Boolean);
   const y = doc.bufferedPageRange().count > 1 ? yCautions : Math.max(yPieces, yCautions);
   paragraph(doc, notes.join('  '), M, y, w, { size: 7.5 });

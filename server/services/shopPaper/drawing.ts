@@ -179,5 +179,6 @@ export function shopDrawing(
     demoPlates: d.demoPlates,
     engineVersion: d.engineVersion,
     cautions: d.cautions,
+    ...(d.plyConnections && { plyFastening: d.plyConnections.map((c) => c.text) }),
   };
 }

@@ -13,6 +13,7 @@ import {
 import type { TrussProfile } from '../profiles/types';
 import { KPA_PER_PSF, kpa, type KPa } from '../units';
 import { expandCombinations, extraCaseLabel, extraCases, type ExtraCaseId } from './extraCases';
+import { addPointLoads, type MemberPointLoad } from './pointLoads';
 
 /** A load case of the design: the five ASCE cases, plus the non-concurrent attic live load. */
 export type DesignCaseId = LoadCaseId | 'Lbc' | ExtraCaseId;
@@ -27,6 +28,8 @@ export interface CombinedLoads {
   transverse: Float64Array;
   /** Overhang cantilever moment per member index (the heel panel it continues), N·mm. */
   overhangMoment: Float64Array;
+  /** Factored concentrated loads inside chord members. */
+  points?: MemberPointLoad[];
 }
 
 /** Cases and combinations of one design, and what the analysis needs from them. */
@@ -117,6 +120,7 @@ export function designLoads(
   const extra = extraCases(input, profile, roofSnow?.ps, slopeDeg);
   Object.assign(cases, extra.cases);
   notes.push(...extra.notes);
+  notes.push(...addPointLoads(cases, profile, input.pointLoads));
   const present = (Object.keys(cases) as DesignCaseId[]).filter((c): c is LoadCaseId =>
     (LOAD_CASE_IDS as readonly string[]).includes(c),
   );
@@ -157,6 +161,7 @@ function combine(
   const joints = new Map<string, JointLoad>();
   const transverse = new Float64Array(memberCount);
   const overhangMoment = new Float64Array(memberCount);
+  const points: MemberPointLoad[] = [];
   for (const [id, factor] of combo.terms) {
     const c = cases[id];
     if (!c) continue;
@@ -172,6 +177,7 @@ function combine(
     for (const l of c.memberLoads) transverse[memberIndex.get(l.member)!] += factor * l.transverse;
     for (const o of c.overhangMoments)
       overhangMoment[memberIndex.get(o.member)!] += factor * o.moment;
+    for (const p of c.pointLoads ?? []) points.push({ ...p, fy: factor * p.fy });
   }
-  return { ...combo, jointLoads: [...joints.values()], transverse, overhangMoment };
+  return { ...combo, jointLoads: [...joints.values()], transverse, overhangMoment, points };
 }

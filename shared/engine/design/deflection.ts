@@ -56,7 +56,8 @@ export function designDeflection(
   let liveCase: DesignCaseId | undefined;
   let liveDrops: number[] | undefined;
   for (const c of LIVE_CASES) {
-    if (!cases[c] || cases[c].jointLoads.length === 0) continue;
+    if (!cases[c] || cases[c].jointLoads.length + (cases[c].pointLoads?.length ?? 0) === 0)
+      continue;
     const drops = bottomChordDrop(frame, profile, [[cases[c], 1]]);
     if (!liveDrops || Math.max(...drops) > Math.max(...liveDrops)) {
       liveCase = c;

@@ -57,7 +57,7 @@ export function memberDemands(
   combos.forEach((c, i) => {
     const result = solveFrame(
       frame,
-      frameLoadsOf(profile, c.jointLoads, c.transverse, c.overhangMoment),
+      frameLoadsOf(profile, c.jointLoads, c.transverse, c.overhangMoment, c.points),
     );
     for (let k = 0; k < m; k++) {
       const at = i * m + k;

@@ -11,7 +11,9 @@ import { designLoads } from './combinedLoads';
 import { designDeflection } from './deflection';
 import type { MemberDemands } from './demands';
 import { analyseAndSize, type Sized } from './frameSizing';
+import { girderNotes } from './girder';
 import { designPlates } from './jointPlates';
+import { plyFastening } from './plyFastening';
 import type { GroupChoice, SizingGroup } from './sizing';
 import type {
   DesignBearing,
@@ -236,7 +238,17 @@ export function designTruss(input: EngineDesignInput, options: DesignOptions = {
     }
   }
   const catalog = options.plateCatalog ?? DEMO_PLATE_CATALOG;
-  const plates = designPlates(profile, demands, ctx.cds, sized.lumberOf, catalog);
+  const plates = designPlates(profile, demands, ctx.cds, sized.lumberOf, catalog, input.plies);
+  const plyConnections = plyFastening(
+    profile,
+    sized.lumberOf,
+    input.plies,
+    input.pointLoads ?? [],
+    loads.combinations,
+  );
+  for (const c of plyConnections.filter((x) => !x.pass)) {
+    warnings.push(`Ply fastening fails: ${c.text}`);
+  }
   for (const p of plates.filter((x) => !x.ok)) warnings.push(`Plate at ${p.joint}: ${p.message}.`);
 
   notes.push(
@@ -250,18 +262,25 @@ export function designTruss(input: EngineDesignInput, options: DesignOptions = {
     'Top chord braced out of plane by the sheathing, bottom chord by the ceiling; webs over their length unless braced.',
     'Forces, moments and shears from a plane frame (direct stiffness method, each member with its E, A and I): chords continuous through the panel points within each piece of lumber and hinged at splices, at the peak and at the heel (continuous into an overhang), webs pinned at both ends, roof and ceiling loads as line loads on the chord members (live and snow on the horizontal projection, dead along the member). Members are checked with the larger of the span and panel-point moments.',
     `Frame analysed ${passes === 1 ? 'once' : `${passes} times`}, until the lumber it was analysed with is the lumber sizing chose (stiffness sets the force distribution).`,
-    ctx.repetitive
-      ? 'Repetitive member factor Cr = 1.15 on chord bending (spacing 24 in. o.c. or less).'
-      : 'No repetitive member factor: spacing over 24 in. o.c.',
+    ...(input.plies >= 2
+      ? []
+      : [
+          ctx.repetitive
+            ? 'Repetitive member factor Cr = 1.15 on chord bending (spacing 24 in. o.c. or less).'
+            : 'No repetitive member factor: spacing over 24 in. o.c.',
+        ]),
     'Deflection of the bottom-chord panel points from the same frame (axial and bending strain; no joint slip or creep).',
     ...(catalog.demo ? [catalog.label] : []),
+    ...girderNotes(input.plies),
+    ...plyConnections.map((c) => c.text),
   );
   const ok =
     sized.groups.every((g) => g.choice.pass) &&
     bearing.every((b) => b.pass) &&
     deflection.total.pass &&
     (deflection.live?.pass ?? true) &&
-    plates.every((p) => p.ok);
+    plates.every((p) => p.ok) &&
+    plyConnections.every((c) => c.pass);
   return {
     joints: profile.joints,
     span: profile.params.span,
@@ -279,6 +298,7 @@ export function designTruss(input: EngineDesignInput, options: DesignOptions = {
     notes,
     cautions: [...DESIGN_CAUTIONS],
     engineVersion: ENGINE_VERSION,
+    ...(plyConnections.length > 0 && { plyConnections }),
     ok,
   };
 }

@@ -119,6 +119,7 @@ export function frameLoadsOf(
   jointLoads: readonly JointLoad[],
   transverse: ArrayLike<number>,
   overhangMoment: ArrayLike<number>,
+  points: readonly { member: string; at: number; fx?: number; fy: number }[] = [],
 ): FrameLoads {
   const joints = new Map<string, FrameJointLoad>();
   const at = (joint: string) => {
@@ -153,6 +154,7 @@ export function frameLoadsOf(
     // A left overhang's gravity load turns the heel counter-clockwise, a right one clockwise.
     at(o.heelJoint).m! += (o.side === 'left' ? 1 : -1) * overhangMoment[k];
   }
+  for (const p of points) members.push({ kind: 'point', ...p });
   return { joints: [...joints.values()], members };
 }
 
@@ -165,12 +167,14 @@ export function caseFrameLoads(
   const transverse = new Float64Array(profile.members.length);
   const overhang = new Float64Array(profile.members.length);
   const jointLoads: JointLoad[] = [];
+  const points: { member: string; at: number; fy: number }[] = [];
   for (const [c, f] of terms) {
     if (!c) continue;
+    for (const p of c.pointLoads ?? []) points.push({ member: p.member, at: p.at, fy: f * p.fy });
     for (const l of c.jointLoads)
       jointLoads.push({ joint: l.joint, fx: f * (l.fx ?? 0), fy: f * (l.fy ?? 0) });
     for (const l of c.memberLoads) transverse[index.get(l.member)!] += f * l.transverse;
     for (const o of c.overhangMoments) overhang[index.get(o.member)!] += f * o.moment;
   }
-  return frameLoadsOf(profile, jointLoads, transverse, overhang);
+  return frameLoadsOf(profile, jointLoads, transverse, overhang, points);
 }

@@ -4,11 +4,11 @@ import type { CombinedLoads } from './combinedLoads';
 import { memberDemands, type MemberDemands } from './demands';
 import { designFrame } from './frameModel';
 import type { EngineDesignInput } from './input';
+import { girderRepetitive } from './girder';
 import { lumberCandidates } from './lumberChoice';
 import {
   checkOverCombinations,
   chooseForGroup,
-  chordRepetitive,
   criticalCombinations,
   sizingGroups,
   sizingOptions,
@@ -132,7 +132,7 @@ export function analyseAndSize(
   input: EngineDesignInput,
   options: DesignOptions,
 ): FrameSizing {
-  const repetitive = chordRepetitive(input.spacing);
+  const repetitive = girderRepetitive(input.spacing, input.plies);
   const cds = combinations.map((c) => c.cd);
   const cheapest = new Map<string, string>();
   let lumberOf = profile.members.map((mb) => {

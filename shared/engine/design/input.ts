@@ -2,6 +2,7 @@ import type { AsceEdition } from '../loads/snow';
 import type { WindSite } from '../loads/wind';
 import type { ProfileParams } from '../profiles/types';
 import type { MPa, Mm } from '../units';
+import type { EnginePointLoad } from './pointLoads';
 
 /** Area load in N/mm² (numerically MPa; 1 kPa = 0.001 N/mm²). */
 export type AreaLoad = MPa;
@@ -37,4 +38,6 @@ export interface EngineDesignInput {
   /** Span / deflection limits, e.g. 240 for L/240. */
   deflection: { live: number; total: number };
   webBraces: string[];
+  /** Concentrated loads on the chords (hung trusses on a girder, equipment); none when absent. */
+  pointLoads?: EnginePointLoad[];
 }

@@ -44,12 +44,14 @@ export function designPlates(
   cds: readonly number[],
   lumberOf: readonly string[],
   catalog: PlateCatalog,
+  plies = 1,
 ): DesignPlate[] {
   const m = profile.members.length;
   const envelope = new Float64Array(m);
   for (let i = 0; i < cds.length; i++) {
     for (let k = 0; k < m; k++) {
-      const f = Math.abs(demands.axial[i * m + k]) / cds[i];
+      // Each ply is plated on its own faces and carries 1/plies of the force.
+      const f = Math.abs(demands.axial[i * m + k]) / cds[i] / plies;
       if (f > envelope[k]) envelope[k] = f;
     }
   }

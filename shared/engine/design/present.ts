@@ -131,6 +131,8 @@ export interface PresentedDesign {
   warnings: string[];
   notes: string[];
   cautions: string[];
+  /** A girder's ply-to-ply fastening per chord, in words (absent for one ply). */
+  plyConnections?: { chord: 'top' | 'bottom'; text: string; ratio: number; pass: boolean }[];
 }
 
 const round = (v: number, digits: number) => {
@@ -272,6 +274,14 @@ export function presentDesign(design: TrussDesign, units: PresentUnits): Present
     demoPlates: design.demoPlates,
     warnings: design.warnings,
     notes: design.notes,
+    ...(design.plyConnections && {
+      plyConnections: design.plyConnections.map((c) => ({
+        chord: c.chord,
+        text: c.text,
+        ratio: round(c.ratio, 3),
+        pass: c.pass,
+      })),
+    }),
     cautions: design.cautions,
   };
 }

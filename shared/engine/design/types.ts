@@ -3,6 +3,7 @@ import type { AsceEdition } from '../loads/snow';
 import type { GoverningCheck } from '../members/checkMember';
 import type { JointPlateDesign, PlateCatalog, PlateJointKind } from '../plates/types';
 import type { MemberRole } from '../profiles/types';
+import type { PlyConnection } from './plyFastening';
 
 /** Lumber lists per role for auto-sizing (lumber ids such as "2x4 SPF-1/2"). */
 export interface LumberChoices {
@@ -170,6 +171,8 @@ export interface TrussDesign {
   /** The cautions every screen, quote and printout carries (DESIGN.md §4.6). */
   cautions: string[];
   engineVersion: string;
+  /** Ply-to-ply fastening per chord of a multi-ply girder (absent for one ply). */
+  plyConnections?: PlyConnection[];
   /** Every member, bearing, deflection and plate check passes. */
   ok: boolean;
 }

@@ -38,6 +38,8 @@ export interface OverhangMoment {
 export interface CaseLoads {
   jointLoads: JointLoad[];
   memberLoads: MemberLineLoad[];
+  /** Concentrated loads inside chord members (point loads between panel points). */
+  pointLoads?: { member: string; at: number; fx?: number; fy: number }[];
   overhangMoments: OverhangMoment[];
 }
 

@@ -3,6 +3,7 @@ import type { PresentedDesign, PresentedDeflection } from '../../../shared/engin
 import { Alert, Badge, Card } from '../ui';
 import { csiBand, formatCsi } from './csi';
 import { MemberTable } from './MemberTable';
+import { PlyFastening } from './PlyFastening';
 import { formatPresentedDeflection, formatPresentedForce } from './quantities';
 
 const cell = 'px-4 py-2 align-top text-sand-800';
@@ -197,6 +198,7 @@ export const DesignResults = memo(function DesignResults({ design }: { design: P
       </Card>
       <SupportsAndDeflection design={design} />
       <PlatesTable design={design} />
+      <PlyFastening design={design} />
       {design.notes.length > 0 ? (
         <Card title="Assumptions">
           <ul className="list-disc space-y-1 pl-5 text-sm text-sand-700">

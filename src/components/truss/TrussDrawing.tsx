@@ -16,6 +16,7 @@ import {
   type Point,
 } from './geometry';
 import type { DrawingMember, DrawingModel } from './model';
+import { PointLoadArrows } from './PointLoadArrows';
 import { formatAxialForce, forceSense, type PlantUnits } from './quantities';
 
 /** Props of {@link TrussDrawing}. */
@@ -203,7 +204,9 @@ export const TrussDrawing = memo(function TrussDrawing({
   const [hover, setHover] = useState<string | null>(null);
   const titleId = useId();
   const layout = useMemo(() => {
-    const t = fitTransform(drawingBounds(model), WIDTH, HEIGHT, MARGINS);
+    // Room above for the arrows and values of top-chord point loads.
+    const top = model.pointLoads?.some((l) => l.chord === 'top') ? 76 : MARGINS.top;
+    const t = fitTransform(drawingBounds(model), WIDTH, HEIGHT, { ...MARGINS, top });
     const at = jointIndex(model.joints);
     const members: PlacedMember[] = model.members.flatMap((member) => {
       const from = at.get(member.from);
@@ -353,6 +356,7 @@ export const TrussDrawing = memo(function TrussDrawing({
             </g>
           ))}
           <DrawingDimensions model={model} units={units} transform={layout.t} tips={layout.tips} />
+          <PointLoadArrows loads={model.pointLoads} transform={layout.t} />
         </svg>
         {hovered && !stale ? <Tooltip placed={hovered} units={units} /> : null}
       </div>

@@ -41,6 +41,8 @@ export interface DrawingModel {
   pitch?: number;
   /** Requested heel height, mm. */
   heelHeight: number;
+  /** Point loads to mark with an arrow: where they act on the chord (mm) and their value. */
+  pointLoads?: { x: number; y: number; chord: 'top' | 'bottom'; text: string }[];
 }
 
 /** The geometry-only drawing of a generated profile (no forces yet). */

@@ -4,6 +4,7 @@ import { generateProfile } from '../../../shared/engine/profiles';
 import type { ProfileParams } from '../../../shared/engine/profiles/types';
 import { drawingFromDesign, presentedToMm } from './from-design';
 import type { DrawingModel, DrawingOverhang } from './model';
+import { withPointLoads } from './point-loads';
 
 /** A design run in the browser: the presented result and its drawing. */
 export interface DesignRun {
@@ -38,7 +39,7 @@ export function runDesign(input: DesignInput): DesignRun {
     overhangs: overhangsOf(engine.profile, design.heelHeight.analysed),
     pitch: input.profile === 'flat' ? undefined : input.pitch,
   });
-  return { presented, drawing };
+  return { presented, drawing: withPointLoads(drawing, input) };
 }
 
 /**
@@ -53,8 +54,9 @@ export function drawingOfStoredLine(
   if (!parsed.success) return drawingFromDesign(result, { overhangs: [] });
   const engine = toEngineInput(parsed.data);
   const analysed = presentedToMm(result, result.heelHeight.analysed.value);
-  return drawingFromDesign(result, {
+  const drawing = drawingFromDesign(result, {
     overhangs: overhangsOf(engine.profile, analysed),
     pitch: parsed.data.profile === 'flat' ? undefined : parsed.data.pitch,
   });
+  return withPointLoads(drawing, parsed.data);
 }

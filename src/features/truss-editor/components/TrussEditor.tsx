@@ -22,6 +22,7 @@ import { formToRequest, serverFieldErrors, type FormUnits } from '../form/conver
 import type { TrussFormErrors, TrussFormField, TrussFormValues } from '../form/values';
 import type { FieldContext } from './FormFields';
 import { CompareProfiles } from './CompareProfiles';
+import { PointLoadFields } from './PointLoadFields';
 import { ProfilePicker } from './ProfilePicker';
 import { GeometryFields, LineFields, LoadFields, LumberFields } from './TrussFields';
 import { useLiveDesign } from './use-live-design';
@@ -214,6 +215,7 @@ export function TrussEditor({
               <LineFields ctx={ctx} />
               <GeometryFields ctx={ctx} units={units} kind={values.profile} />
               <LoadFields ctx={ctx} units={units} />
+              <PointLoadFields ctx={ctx} control={control} units={units} />
               <LumberFields ctx={ctx} units={units} />
               {saveError.length > 0 ? (
                 <Alert tone="danger" title="Not saved">

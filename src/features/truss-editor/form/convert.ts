@@ -13,6 +13,7 @@ import {
 } from '../../../../shared/engine/format';
 import { PROFILE_KINDS } from '../../../../shared/engine/profiles';
 import { MM_PER_INCH } from '../../../../shared/engine/units';
+import { pointLoadRows, pointLoadsOf } from './point-loads';
 import type { TrussFormErrors, TrussFormField, TrussFormValues } from './values';
 
 /** The unit system of the form. */
@@ -142,6 +143,7 @@ export function formToRequest(values: TrussFormValues, units: FormUnits): FormRe
       .split(/[\s,;]+/)
       .map((s) => s.trim().toUpperCase())
       .filter(Boolean),
+    ...pointLoadsOf(values.pointLoads ?? [], units, errors),
   };
   const line = createLineSchema.omit({ design: true }).safeParse({
     mark: values.mark,
@@ -159,7 +161,11 @@ export function formToRequest(values: TrussFormValues, units: FormUnits): FormRe
   if (!parsed.success) {
     for (const issue of parsed.error.issues) {
       const field = fieldForPath(issue.path) ?? 'span';
-      if (!errors[field] && !designIssues[field]) designIssues[field] = issue.message;
+      const message =
+        field === 'pointLoads' && typeof issue.path[1] === 'number'
+          ? `Point load ${issue.path[1] + 1}: ${issue.message}`
+          : issue.message;
+      if (!errors[field] && !designIssues[field]) designIssues[field] = message;
     }
   }
   Object.assign(errors, designIssues);
@@ -232,6 +238,7 @@ const PATHS: Record<string, TrussFormField> = {
   'deflection.live': 'deflectionLive',
   'deflection.total': 'deflectionTotal',
   webBraces: 'webBraces',
+  pointLoads: 'pointLoads',
 };
 
 /**
@@ -332,6 +339,7 @@ export function designToFormValues(
     bearingWidth: short(design.bearingWidth, base.bearingWidth),
     deflectionLive: plain(deflection.live, base.deflectionLive),
     deflectionTotal: plain(deflection.total, base.deflectionTotal),
+    pointLoads: pointLoadRows(design.pointLoads, units),
   };
 }
 

@@ -1,4 +1,14 @@
+import type { PointLoadKindInput } from '../../../../shared/api/design';
 import type { ProfileKind } from '../../../../shared/engine/profiles/types';
+
+/** One row of the point-load table, as typed: position (feet-inches or mm), loads (lb or kN). */
+export interface PointLoadRow {
+  x: string;
+  chord: 'top' | 'bottom';
+  dead: string;
+  live: string;
+  kind: PointLoadKindInput;
+}
 
 /**
  * What the truss form holds: the text exactly as typed (so `28'-6 1/2"` stays on screen) plus
@@ -38,6 +48,8 @@ export interface TrussFormValues {
   bearingWidth: string;
   deflectionLive: string;
   deflectionTotal: string;
+  /** Concentrated loads on the chords; their messages are under `pointLoads`. */
+  pointLoads: PointLoadRow[];
 }
 
 /** A field of the truss form. */
@@ -100,5 +112,6 @@ export function newTrussFormValues(
     bearingWidth: imperial ? '3 1/2"' : '89',
     deflectionLive: '240',
     deflectionTotal: '180',
+    pointLoads: [],
   };
 }
