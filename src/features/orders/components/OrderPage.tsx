@@ -1,4 +1,4 @@
-import { useState } from 'react';
+import { useState, type ReactNode } from 'react';
 import { useLocation } from 'react-router';
 import type { LineSummary, OrderDetail } from '../../../../shared/api/orders';
 import {
@@ -33,6 +33,8 @@ export interface OrderPageProps {
   canSeeShop?: boolean;
   /** Where a line's mark leads (its design, or its review); none for builders. */
   markHref?: (orderId: number, line: LineSummary) => string;
+  /** Production facts and changes (promised date, hold, release, delivery), composed by the app. */
+  production?: (order: OrderDetail) => ReactNode;
 }
 
 function Header({
@@ -210,6 +212,7 @@ export function OrderPage({
   canSeeQuotes = false,
   canSeeShop = false,
   markHref,
+  production,
 }: OrderPageProps) {
   const order = useOrder(id);
   const saved = (useLocation().state as { saved?: string } | null)?.saved;
@@ -238,6 +241,7 @@ export function OrderPage({
             </Alert>
           ) : null}
           <div className="grid gap-6">
+            {production?.(o)}
             <Lines
               order={o}
               canEdit={canEdit}
