@@ -63,7 +63,9 @@ export function ActionDialog(p: ActionDialogProps) {
           <ErrorMessage
             title={stale ? 'Someone changed this order meanwhile' : 'That did not work'}
             error={
-              stale ? 'The page now shows the order as it is. Check it, then try again.' : p.error
+              stale
+                ? new Error('The page now shows the order as it is. Check it, then try again.')
+                : p.error
             }
           />
         ) : null}

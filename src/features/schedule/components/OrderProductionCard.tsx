@@ -78,7 +78,8 @@ export function OrderProductionCard({
       ) : null}
       {order.onHold ? (
         <Alert tone="warning" title="On hold" className="mb-4">
-          {order.holdReason ?? 'No reason given.'} It is off the schedule until released.
+          <p>{order.holdReason ?? 'No reason given.'}</p>
+          <p>It is off the schedule until released.</p>
         </Alert>
       ) : null}
       <DetailList

@@ -14,7 +14,8 @@ export function ReadyToDeliver({
 }) {
   const [signing, setSigning] = useState<ReadyOrder | null>(null);
   const [notice, setNotice] = useState<string | null>(null);
-  if (orders.length === 0 && !notice) return null;
+  // Kept while signing: the list empties when the board refetches, before the dialog hears back.
+  if (orders.length === 0 && !notice && !signing) return null;
   return (
     <Card title="Ready to deliver" className="mb-4">
       {notice ? (
