@@ -6,6 +6,7 @@ import type { QuoteSnapshot } from '../services/pricing';
 import { formatMoney } from '../services/quotePdf/format';
 import { queueMail } from '../services/mailQueue';
 import { orderEvent } from './audit';
+import { releaseAfterCommit } from './release';
 
 const today = () => new Date().toISOString().slice(0, 10);
 
@@ -109,6 +110,8 @@ export async function acceptQuote(
       ip,
     });
     await acceptanceMail(t, actor, locked, quote, input.name, onBehalf);
+    // An account builder's order whose designs are approved goes to production at once.
+    releaseAfterCommit(t, locked.id, null);
     return { changed: true };
   });
 }

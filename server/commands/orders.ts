@@ -5,6 +5,7 @@ import { Order, OrderLine, Plant, type Job, type User } from '../models';
 import { AppError, badRequest, conflict, notFound } from '../errors';
 import { computeDesign, type ComputedDesign } from '../services/design';
 import { orderEvent } from './audit';
+import { releaseAfterCommit } from './release';
 import { assertMarkFree, isNoChange } from './lineMarks';
 
 /**
@@ -323,6 +324,8 @@ export async function reviewLine(actor: User, order: Order, loaded: OrderLine, i
         designVersion: line.designVersion,
       },
     );
+    // An approval may complete the release gate (production planning).
+    if (input.decision === 'approve') releaseAfterCommit(t, order.id, actor);
     return line;
   });
 }

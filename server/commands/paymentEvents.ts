@@ -5,6 +5,7 @@ import { Order, Payment, PaymentEvent, Quote } from '../models';
 import { conflict } from '../errors';
 import { audit } from './audit';
 import { queueReceipt, receiptNumber, settleDeposit } from './payments';
+import { releaseAfterCommit } from './release';
 
 type Meta = { metadata?: Record<string, string> | null };
 const orderIdOf = (o: Meta) => {
@@ -117,10 +118,6 @@ async function refundCreated(t: Transaction, order: Order, r: Stripe.Refund) {
  * waits for a command still writing to it (a refund being requested). Events may come in any order.
  * Returns false for a duplicate.
  */
-/** The order an event belongs to (from its metadata), or null. */
-export const eventOrderId = (event: Stripe.Event): number | null =>
-  orderIdOf(event.data.object as Meta) ?? null;
-
 export async function applyPaymentEvent(event: Stripe.Event): Promise<boolean> {
   const object = event.data.object as Meta;
   const orderId = orderIdOf(object);
@@ -135,6 +132,8 @@ export async function applyPaymentEvent(event: Stripe.Event): Promise<boolean> {
     });
     if (!fresh) return false;
     if (!order) return true;
+    // Money in may complete the release gate.
+    releaseAfterCommit(t, order.id, null);
     if (event.type === 'checkout.session.completed')
       await sessionCompleted(t, order, event.data.object as Stripe.Checkout.Session);
     else if (event.type === 'payment_intent.succeeded')

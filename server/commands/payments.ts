@@ -9,6 +9,7 @@ import { queueMail } from '../services/mailQueue';
 import { findAcceptance } from './acceptance';
 import { audit, orderEvent } from './audit';
 import { pricesFor } from './priceBook';
+import { releaseAfterCommit } from './release';
 
 const cents = (v: string | number) => Math.round(Number(v) * 100);
 
@@ -197,6 +198,7 @@ export async function recordOfflinePayment(actor: User, order: Order, input: Off
     });
     await settleDeposit(t, locked);
     await queueReceipt(t, locked, p, quote);
+    releaseAfterCommit(t, locked.id, null);
     return p;
   });
 }

@@ -3,7 +3,8 @@ import { STAGES, type ProgressInput, type Stage } from '../../shared/api/product
 import { Order, OrderLine, type User } from '../models';
 import { badRequest, conflict, notFound } from '../errors';
 import { orderEvent } from './audit';
-import { replan } from './schedule';
+import { requireSeenVersion } from './orderVersion';
+import { replanAndTell } from './schedule';
 
 const COLUMN: Record<Stage, keyof OrderLine> = {
   cut: 'cutCount',
@@ -100,7 +101,7 @@ export async function recordProgress(actor: User, input: ProgressInput) {
       input.stage === 'assembled' &&
       (next === line.quantity || counts.assembled === line.quantity)
     )
-      await replan(t, order.plantId);
+      await replanAndTell(t, order.plantId);
     return { line, order, replayed: false };
   });
 }
@@ -109,10 +110,21 @@ export async function recordProgress(actor: User, input: ProgressInput) {
  * The delivery is signed off: every truss is loaded, the order becomes delivered and each line's
  * delivered count is its quantity.
  */
-export async function signOffDelivery(actor: User, orderId: number, receivedBy: string) {
+export async function signOffDelivery(
+  actor: User,
+  orderId: number,
+  input: { receivedBy: string; receivedAt?: string; note: string; version: number },
+) {
+  const receivedAt = input.receivedAt ? new Date(input.receivedAt) : new Date();
+  // A few minutes' grace for clocks; a delivery signed for tomorrow is a typing slip.
+  if (receivedAt.getTime() > Date.now() + 10 * 60_000)
+    throw badRequest('The delivery cannot be received in the future.', {
+      receivedAt: 'In the future',
+    });
   return Order.sequelize!.transaction(async (t) => {
     const order = await Order.findByPk(orderId, { transaction: t, lock: t.LOCK.UPDATE });
     if (!order) throw notFound('Order');
+    requireSeenVersion(order, input.version);
     if (order.status !== 'ready')
       throw conflict('Only an order that is ready (every truss banded) can be delivered.');
     const lines = await OrderLine.findAll({
@@ -126,7 +138,11 @@ export async function signOffDelivery(actor: User, orderId: number, receivedBy: 
     for (const l of lines)
       await l.update({ deliveredCount: l.quantity }, { transaction: t, silent: true });
     await order.update({ status: 'delivered' }, { transaction: t });
-    await orderEvent(t, actor, order, 'order.delivered', { receivedBy });
+    await orderEvent(t, actor, order, 'order.delivered', {
+      receivedBy: input.receivedBy,
+      receivedAt: receivedAt.toISOString(),
+      note: input.note || undefined,
+    });
     return order;
   });
 }

@@ -5,8 +5,7 @@ import {
   trussMinutes,
   type ScheduleOrder,
 } from '../../shared/engine/schedule';
-import type { OutgoingMail } from '../services/mail';
-import { formatDay } from '../services/productionMail';
+import { formatDay, queueBuilderMail, type BuilderMail } from '../services/productionMail';
 import { Customer, Order, SchedulePlacement, type User } from '../models';
 import { badRequest, conflict } from '../errors';
 import { orderEvent } from './audit';
@@ -144,11 +143,14 @@ export async function replan(t: Transaction, plantId: number, today = plantToday
 
 /** E-mails to builders whose planned delivery moved (not the first plan: the release mail says it). */
 export async function deliveryChangeMails(changes: PlanChange[], t?: Transaction) {
-  const mails: OutgoingMail[] = [];
+  const mails: BuilderMail[] = [];
   for (const c of changes) {
     if (!c.before || !c.after || !SCHEDULED_STATUSES.includes(c.order.status as never)) continue;
     const customer = await Customer.findByPk(c.order.customerId, { transaction: t });
     mails.push({
+      plantId: c.order.plantId,
+      orderId: c.order.id,
+      kind: 'production.planned',
       to: customer!.email,
       subject: `Order ${c.order.number}: planned delivery now ${formatDay(c.after)}`,
       text:
@@ -157,6 +159,21 @@ export async function deliveryChangeMails(changes: PlanChange[], t?: Transaction
     });
   }
   return mails;
+}
+
+/**
+ * Re-plan (`replan`) and queue the e-mails of builders whose planned delivery moved, in the same
+ * transaction; `quiet` is an order whose own e-mail already says it.
+ */
+export async function replanAndTell(
+  t: Transaction,
+  plantId: number,
+  opts: { today?: string; quiet?: number } = {},
+) {
+  const result = await replan(t, plantId, opts.today);
+  const moved = result.changes.filter((c) => c.order.id !== opts.quiet);
+  await queueBuilderMail(t, await deliveryChangeMails(moved, t));
+  return result;
 }
 
 /**
@@ -187,7 +204,7 @@ export async function moveOrder(
       });
     await o.update({ schedulePin: target }, { transaction: t });
     await orderEvent(t, actor, o, 'order.moved', { ...target });
-    const result = await replan(t, o.plantId, today);
+    const result = await replanAndTell(t, o.plantId, { today });
     return { order: o, ...result };
   });
 }

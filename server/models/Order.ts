@@ -29,6 +29,8 @@ export class Order extends Model<InferAttributes<Order>, InferCreationAttributes
   declare schedulePin: CreationOptional<{ tableId: number; date: string } | null>;
   declare plannedFinishOn: CreationOptional<string | null>;
   declare plannedLate: CreationOptional<boolean>;
+  /** Raised by the database when the order's own state changes; changes name the one seen. */
+  declare version: CreationOptional<number>;
   declare createdAt: CreationOptional<Date>;
   declare updatedAt: CreationOptional<Date>;
   declare job?: NonAttribute<Job>;
@@ -50,6 +52,7 @@ export class Order extends Model<InferAttributes<Order>, InferCreationAttributes
         schedulePin: { type: DataTypes.JSONB, allowNull: true },
         plannedFinishOn: { type: DataTypes.DATEONLY, allowNull: true },
         plannedLate: { type: DataTypes.BOOLEAN, allowNull: false, defaultValue: false },
+        version: { type: DataTypes.INTEGER, allowNull: false, defaultValue: 1 },
         createdAt: DataTypes.DATE,
         updatedAt: DataTypes.DATE,
       },

@@ -30,6 +30,8 @@ export function presentOrderSummary(o: Counted): OrderSummary {
       plannedLate: o.plannedLate ?? false,
     }),
     onHold: o.onHold ?? false,
+    holdReason: o.holdReason ?? null,
+    version: o.version ?? 1,
   };
 }
 
@@ -124,7 +126,7 @@ export function summarizeEvent(e: AuditEvent): string {
     case 'order.ready':
       return 'Ready: every truss banded';
     case 'order.delivered':
-      return `Delivered, signed for by ${d(e, 'receivedBy')}`;
+      return `Delivered, signed for by ${d(e, 'receivedBy')}${e.data.receivedAt ? ` on ${String(e.data.receivedAt).slice(0, 16).replace('T', ' ')}` : ''}${e.data.note ? `: ${d(e, 'note')}` : ''}`;
     default:
       return summarizePortalEvent(e) ?? e.action;
   }

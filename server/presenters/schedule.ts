@@ -1,9 +1,37 @@
-import { Op } from 'sequelize';
+import { Op, QueryTypes } from 'sequelize';
 import type { Schedule, ScheduleBlock } from '../../shared/api/production';
 import { tableDayMinutes, workingDates, dayNumber } from '../../shared/engine/schedule';
 import { Customer, Order, SchedulePlacement } from '../models';
 import { settingsFor } from '../commands/productionSettings';
 import { SCHEDULED_STATUSES } from '../commands/schedule';
+
+/** Orders ready to deliver (every truss banded), oldest promise first, with whether all is loaded. */
+async function readyOrders(plantId: number) {
+  const rows = await Order.sequelize!.query<{
+    id: number;
+    number: string;
+    customer: string;
+    promised_on: string | null;
+    loaded: boolean;
+    version: number;
+  }>(
+    `SELECT o.id, o.number, c.name AS customer, o.promised_on, o.version,
+            NOT EXISTS (SELECT 1 FROM order_lines l
+                         WHERE l.order_id = o.id AND l.loaded_count < l.quantity) AS loaded
+       FROM orders o JOIN customers c ON c.id = o.customer_id
+      WHERE o.plant_id = :plantId AND o.status = 'ready'
+      ORDER BY o.promised_on NULLS LAST, o.id`,
+    { replacements: { plantId }, type: QueryTypes.SELECT },
+  );
+  return rows.map((r) => ({
+    id: r.id,
+    number: r.number,
+    customer: r.customer,
+    promisedOn: r.promised_on,
+    loaded: r.loaded,
+    version: r.version,
+  }));
+}
 
 /** The board: working days from…to, each table's load against capacity, one block per order per table-day. */
 export async function presentSchedule(
@@ -78,6 +106,8 @@ export async function presentSchedule(
       plannedFinishOn: o.plannedFinishOn,
       late: o.plannedLate,
       minutes: minutes.get(o.id) ?? 0,
+      version: o.version,
     })),
+    ready: await readyOrders(plantId),
   };
 }

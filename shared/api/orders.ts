@@ -137,6 +137,9 @@ export const orderSummarySchema = z.object({
   promisedOn: z.string().nullable().default(null),
   plannedDeliveryOn: z.string().nullable().default(null),
   onHold: z.boolean().default(false),
+  holdReason: z.string().nullable().default(null),
+  /** The order's version: production changes (promise, hold, release, delivery) send it back. */
+  version: z.number().int().default(1),
 });
 export type OrderSummary = z.infer<typeof orderSummarySchema>;
 

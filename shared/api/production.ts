@@ -53,13 +53,34 @@ export const productionSettingsResponseSchema = z.object({
 
 const reason = z.string().trim().min(3, 'Give a reason').max(500);
 
+/** The order's `version` the user saw; a newer order answers 409 `stale` and changes nothing. */
+const seenVersion = z
+  .number({ message: 'Reload the order: send the version you looked at' })
+  .int()
+  .positive();
+
 /** Body of `POST /api/orders/:id/promised-date`; a change of an existing date needs a reason. */
 export const promisedDateSchema = z.object({
   promisedOn: isoDate,
   reason: z.string().trim().max(500).default(''),
+  version: seenVersion,
 });
+export type PromisedDateInput = z.input<typeof promisedDateSchema>;
 /** Body of `POST /api/orders/:id/hold` and `/release` (plant manager). */
-export const holdSchema = z.object({ reason });
+export const holdSchema = z.object({ reason, version: seenVersion });
+export type HoldInput = z.input<typeof holdSchema>;
+
+/** Body of `POST /api/orders/:id/delivery`: who received the trusses, when, and a note. */
+export const deliverySchema = z.object({
+  receivedBy: z.string().trim().min(2, 'Who signed for the delivery?').max(120),
+  /** When the builder received them (ISO date-time); now when left out. */
+  receivedAt: z.iso
+    .datetime({ offset: true, local: true, message: 'Use a date and time' })
+    .optional(),
+  note: z.string().trim().max(1000).default(''),
+  version: seenVersion,
+});
+export type DeliveryInput = z.input<typeof deliverySchema>;
 
 /** Body of `POST /api/schedule/moves`: pin an order to start on this table and day. */
 export const moveSchema = z.object({
@@ -95,7 +116,20 @@ export const scheduleOrderSchema = z.object({
   plannedFinishOn: z.string().nullable(),
   late: z.boolean(),
   minutes: z.number(),
+  version: z.number().int().default(1),
 });
+
+/** An order ready to go out (every truss banded): the foreman signs off its delivery. */
+export const readyOrderSchema = z.object({
+  id: z.number().int(),
+  number: z.string(),
+  customer: z.string(),
+  promisedOn: z.string().nullable(),
+  /** Every truss loaded: the delivery can be signed off. */
+  loaded: z.boolean(),
+  version: z.number().int(),
+});
+export type ReadyOrder = z.infer<typeof readyOrderSchema>;
 
 export const scheduleSchema = z.object({
   from: z.string(),
@@ -106,6 +140,7 @@ export const scheduleSchema = z.object({
   ),
   blocks: z.array(scheduleBlockSchema),
   orders: z.array(scheduleOrderSchema),
+  ready: z.array(readyOrderSchema).default([]),
 });
 export type Schedule = z.infer<typeof scheduleSchema>;
 

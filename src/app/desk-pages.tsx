@@ -14,6 +14,7 @@ import { JobPage } from '../features/jobs/components/JobPage';
 import { JobsPage } from '../features/jobs/components/JobsPage';
 import { JobOrders } from '../features/orders/components/JobOrders';
 import { OrderPage } from '../features/orders/components/OrderPage';
+import { OrderProductionCard } from '../features/schedule/components/OrderProductionCard';
 import { OrdersPage } from '../features/orders/components/OrdersPage';
 import { UsersPage } from '../features/users/components/UsersPage';
 import { DeskPayments } from '../features/payments/components/DeskPayments';
@@ -106,6 +107,14 @@ export function OrderRoute() {
           payments={
             canManageSales(me.user.role) ? (order) => <DeskPayments order={order} /> : undefined
           }
+          production={(order) => (
+            <OrderProductionCard
+              order={order}
+              canPromise={canManageSales(me.user.role)}
+              canHoldRelease={me.user.role === 'admin'}
+              canSignOff={me.user.role === 'admin' || me.user.role === 'foreman'}
+            />
+          )}
         />
       )}
     />

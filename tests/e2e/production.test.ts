@@ -33,7 +33,7 @@ async function releasedOrder(plantId: number, builder: string, marks: string[]) 
   const order = await createOrder({ job: await createJob({ customer }) });
   for (const mark of marks) await createLine({ order, mark, reviewState: 'approved' });
   await order.update({ status: 'deposit_paid', promisedOn: addCalendarDays(today, 6) });
-  expect(await releaseIfReady(null, order.id, null)).toBe(true);
+  expect(await releaseIfReady(null, order.id)).toBe(true);
   return order;
 }
 

@@ -15,7 +15,6 @@ import {
 } from '../../commands/orders';
 import { redesignWithJobLoads } from '../../commands/staleLines';
 import { Order, type OrderLine } from '../../models';
-import { releaseWhenReady } from '../../services/autoRelease';
 import { conflict, notFound } from '../../errors';
 import { presentLine, presentOrderSummary } from '../../presenters/order';
 import { presentPage } from '../../presenters/page';
@@ -220,9 +219,6 @@ export function ordersRouter() {
     authorize(orderPolicy.review),
     handle(async (req, res) => {
       const line = await reviewLine(req.user!, res.locals.record, res.locals.line, res.locals.body);
-      // An approval may complete the release gate (production planning).
-      if (line.reviewState === 'approved')
-        await releaseWhenReady(line.orderId, req.app.locals.mailer ?? null, req.user!);
       // The line as stored now; deleted by a concurrent request since, the reviewed row itself.
       res.json(presentLine((await findLine(line.orderId, line.id)) ?? line));
     }),

@@ -15,7 +15,6 @@ import { presentMailState, presentPayment } from '../../presenters/portal';
 import { receiptPdf } from '../../services/mailAttachments';
 import { findOrder, orderPage } from '../orders/queries';
 import { handle, load } from '../load';
-import { releaseWhenReady } from '../../services/autoRelease';
 import { cancelOrderSchema, offlinePaymentSchema } from '../../../shared/api/portal';
 
 const order = load('Order', findOrder);
@@ -56,7 +55,6 @@ export function orderPaymentsRouter() {
     authorize(portalPolicy.recordPayment),
     handle(async (req, res) => {
       const p = await recordOfflinePayment(req.user!, res.locals.record, res.locals.body);
-      await releaseWhenReady(p.orderId, req.app.locals.mailer ?? null);
       res.status(201).json(presentPayment(p));
     }),
   );

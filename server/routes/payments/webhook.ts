@@ -1,8 +1,7 @@
 import express, { Router } from 'express';
 import type Stripe from 'stripe';
 import { AppError } from '../../errors';
-import { applyPaymentEvent, eventOrderId } from '../../commands/paymentEvents';
-import { releaseWhenReady } from '../../services/autoRelease';
+import { applyPaymentEvent } from '../../commands/paymentEvents';
 import type { Payments } from '../../services/payments';
 import { handle } from '../load';
 
@@ -31,7 +30,6 @@ export function paymentsWebhookRouter() {
         throw new AppError(400, 'bad_signature', 'The webhook signature does not verify.');
       }
       const fresh = await applyPaymentEvent(event);
-      if (fresh) await releaseWhenReady(eventOrderId(event), req.app.locals.mailer ?? null);
       res.json({ received: true, duplicate: !fresh });
     }),
   );

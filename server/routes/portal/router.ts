@@ -9,7 +9,6 @@ import { findOrder } from '../orders/queries';
 import { orderPage } from '../orders/queries';
 import { loadQuote } from '../quotes/router';
 import { handle, load } from '../load';
-import { releaseWhenReady } from '../../services/autoRelease';
 import { acceptQuoteSchema, requestChangesSchema } from '../../../shared/api/portal';
 
 const order = load('Order', findOrder);
@@ -33,8 +32,6 @@ export function acceptanceRouter() {
         res.locals.body,
         req.ip ?? null,
       );
-      // An account builder's order whose designs are approved goes to production at once.
-      await releaseWhenReady(res.locals.record.id, req.app.locals.mailer ?? null);
       res.json(await orderPage(res.locals.record.id, req.user!));
     }),
   );

@@ -6,11 +6,10 @@ import { authorize } from '../../policies/predicates';
 import { productionPolicy } from '../../policies/production';
 import { orderPolicy } from '../../policies/order';
 import { saveSettings, settingsFor } from '../../commands/productionSettings';
-import { deliveryChangeMails, moveOrder, plantToday, replan } from '../../commands/schedule';
+import { moveOrder, plantToday, replanAndTell } from '../../commands/schedule';
 import { Order } from '../../models';
 import { notFound } from '../../errors';
 import { presentSchedule } from '../../presenters/schedule';
-import { sendBuilderMail } from '../../services/productionMail';
 import { addCalendarDays } from '../../../shared/engine/schedule';
 import {
   moveSchema,
@@ -39,12 +38,10 @@ export function productionRouter() {
     validate(productionSettingsSchema),
     authorize(productionPolicy.writeSettings),
     handle(async (req, res) => {
-      const mails = await Order.sequelize!.transaction(async (t) => {
+      await Order.sequelize!.transaction(async (t) => {
         await saveSettings(req.user!, res.locals.body, t);
-        const { changes } = await replan(t, req.user!.plantId);
-        return deliveryChangeMails(changes, t);
+        await replanAndTell(t, req.user!.plantId);
       });
-      await sendBuilderMail(req.app.locals.mailer ?? null, mails);
       const s = await settingsFor(req.user!.plantId);
       res.json({ ...s, updatedAt: s.updatedAt?.toISOString() ?? null });
     }),
@@ -73,11 +70,10 @@ export function productionRouter() {
         where: { [Op.and]: [{ id: body.orderId }, orderPolicy.scope(req.user!)] },
       });
       if (!order) throw notFound('Order');
-      const { plan, changes } = await moveOrder(req.user!, order, {
+      const { plan } = await moveOrder(req.user!, order, {
         tableId: body.tableId,
         date: body.date,
       });
-      await sendBuilderMail(req.app.locals.mailer ?? null, await deliveryChangeMails(changes));
       const mine = plan.orders.find((o) => o.orderId === order.id);
       res.json({
         orderId: order.id,

@@ -35,6 +35,8 @@ export interface OrderPageProps {
   markHref?: (orderId: number, line: LineSummary) => string;
   /** The desk's payments, balance and mail states (composed in by the app, sales and admin only). */
   payments?: (order: OrderDetail) => ReactNode;
+  /** Production facts and changes (promised date, hold, release, delivery), composed by the app. */
+  production?: (order: OrderDetail) => ReactNode;
 }
 
 function Header({
@@ -213,6 +215,7 @@ export function OrderPage({
   canSeeShop = false,
   markHref,
   payments,
+  production,
 }: OrderPageProps) {
   const order = useOrder(id);
   const saved = (useLocation().state as { saved?: string } | null)?.saved;
@@ -241,6 +244,7 @@ export function OrderPage({
             </Alert>
           ) : null}
           <div className="grid gap-6">
+            {production?.(o)}
             <Lines
               order={o}
               canEdit={canEdit}

@@ -23,6 +23,7 @@ import {
 import { useSchedule } from '../api/get-schedule';
 import { useMoveOrder, type MoveResult } from '../api/move-order';
 import { hours, moveWarnings } from './board-warnings';
+import { ReadyToDeliver } from './ReadyToDeliver';
 
 const LoadChart = lazy(() => import('./LoadChart'));
 const DAYS = 10;
@@ -187,6 +188,7 @@ export function SchedulePage({ canMove }: { canMove: boolean }) {
             : `Order ${result.number} moved; it finishes ${result.plannedFinishOn}.`}
         </Alert>
       ) : null}
+      {query.data ? <ReadyToDeliver orders={query.data.ready} canSignOff={canMove} /> : null}
       <QueryState query={query} what="the schedule">
         {(board) => (
           <Card className="overflow-x-auto p-0">

@@ -9,7 +9,7 @@ import {
   createUser,
 } from '../../../support/factories';
 import { signedIn } from '../../../support/session';
-import { Order, type Plant } from '../../../../server/models';
+import { MailMessage, Order, type Plant } from '../../../../server/models';
 import type { OrderStatus } from '../../../../shared/api/orders';
 
 export type Session = Awaited<ReturnType<typeof signedIn>>;
@@ -61,3 +61,16 @@ export const tap = (lineId: number, stage: string, delta = 1, clientId = randomU
   stage,
   delta,
 });
+
+/** The order's version now: what a user who just opened it sends with a production change. */
+export const versionOf = async (orderId: number) => (await Order.findByPk(orderId))!.version;
+
+/** A production change's body as sent from a freshly opened page (with the order's version). */
+export const seen = async (orderId: number, body: object) => ({
+  ...body,
+  version: await versionOf(orderId),
+});
+
+/** E-mails queued for an address (the outbox the mail queue sends from), newest first. */
+export const queuedTo = (to: string) =>
+  MailMessage.findAll({ where: { toAddress: to }, order: [['id', 'DESC']] });

@@ -1,7 +1,7 @@
 import { randomUUID } from 'node:crypto';
 import { beforeAll, describe, expect, it } from 'vitest';
 import { Order, OrderLine, ProgressEvent } from '../../../../server/models';
-import { orderIn, productionWorld, tap } from './helpers';
+import { orderIn, productionWorld, seen, tap } from './helpers';
 
 let w: Awaited<ReturnType<typeof productionWorld>>;
 beforeAll(async () => {
@@ -65,11 +65,11 @@ describe('progress on the floor', () => {
     await w.foreman.post('/api/floor/progress', tap(lines[1].id, 'banded', 4)).expect(201);
     expect(await status()).toBe('ready');
     await w.foreman
-      .post(`/api/orders/${order.id}/delivery`, { receivedBy: 'Sam Site' })
+      .post(`/api/orders/${order.id}/delivery`, await seen(order.id, { receivedBy: 'Sam Site' }))
       .expect(409);
     for (const l of lines) await w.foreman.post('/api/floor/progress', tap(l.id, 'loaded', 4));
     const res = await w.foreman
-      .post(`/api/orders/${order.id}/delivery`, { receivedBy: 'Sam Site' })
+      .post(`/api/orders/${order.id}/delivery`, await seen(order.id, { receivedBy: 'Sam Site' }))
       .expect(200);
     expect(res.body.status).toBe('delivered');
     expect((await OrderLine.findByPk(lines[1].id))!.deliveredCount).toBe(4);

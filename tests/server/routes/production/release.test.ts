@@ -1,6 +1,6 @@
 import { beforeAll, describe, expect, it } from 'vitest';
 import { AuditEvent, Order, OrderLine, SchedulePlacement } from '../../../../server/models';
-import { orderIn, productionWorld } from './helpers';
+import { orderIn, productionWorld, queuedTo, seen } from './helpers';
 
 let w: Awaited<ReturnType<typeof productionWorld>>;
 beforeAll(async () => {
@@ -20,7 +20,6 @@ const approve = (orderId: number, lineId: number) => ({
   },
 });
 const statusOf = async (id: number) => (await Order.findByPk(id))!.status;
-const mailsTo = (to: string) => w.mailer.fake!.messages().filter((m) => m.to.includes(to));
 
 describe('the release gate', () => {
   it('does not release on approval alone (deposit terms, deposit unpaid)', async () => {
@@ -66,7 +65,7 @@ describe('the release gate', () => {
     ).toBe(1);
     expect(await SchedulePlacement.count({ where: { orderId: order.id } })).toBeGreaterThan(0);
     expect(o.plannedFinishOn).not.toBeNull();
-    expect(mailsTo(customer.email).map((m) => m.subject)).toContain(
+    expect((await queuedTo(customer.email)).map((m) => m.subject)).toContain(
       `Order ${order.number} is released to production`,
     );
   });
@@ -86,12 +85,16 @@ describe('the release gate', () => {
       status: 'deposit_paid',
       reviews: ['pending'],
     });
-    await w.admin.post(`/api/orders/${order.id}/hold`, { reason: 'Site not ready' }).expect(200);
+    await w.admin
+      .post(`/api/orders/${order.id}/hold`, await seen(order.id, { reason: 'Site not ready' }))
+      .expect(200);
     await approve(order.id, lines[0].id).expect(200);
     expect(await statusOf(order.id)).toBe('deposit_paid');
-    await w.admin.post(`/api/orders/${order.id}/release`, { reason: 'x' }).expect(400);
+    await w.admin
+      .post(`/api/orders/${order.id}/release`, await seen(order.id, { reason: 'x' }))
+      .expect(400);
     const res = await w.admin
-      .post(`/api/orders/${order.id}/release`, { reason: 'Site ready now' })
+      .post(`/api/orders/${order.id}/release`, await seen(order.id, { reason: 'Site ready now' }))
       .expect(200);
     expect(res.body.status).toBe('released');
     expect(res.body.history[0].summary).toBe('Released by hand: Site ready now');
@@ -100,7 +103,10 @@ describe('the release gate', () => {
   it('never releases by hand past the design review', async () => {
     const { order } = await orderIn(w.plant, { status: 'accepted', reviews: ['pending'] });
     const res = await w.admin
-      .post(`/api/orders/${order.id}/release`, { reason: 'Builder is in a hurry' })
+      .post(
+        `/api/orders/${order.id}/release`,
+        await seen(order.id, { reason: 'Builder is in a hurry' }),
+      )
       .expect(409);
     expect(res.body.error.message).toMatch(/approved/);
   });
@@ -108,7 +114,9 @@ describe('the release gate', () => {
   it('holding and releasing is the plant manager’s alone', async () => {
     const { order } = await orderIn(w.plant, { status: 'deposit_paid' });
     for (const s of [w.sales, w.foreman, w.engineer])
-      await s.post(`/api/orders/${order.id}/hold`, { reason: 'Because' }).expect(403);
+      await s
+        .post(`/api/orders/${order.id}/hold`, await seen(order.id, { reason: 'Because' }))
+        .expect(403);
   });
 });
 
@@ -116,33 +124,48 @@ describe('the promised delivery date', () => {
   it('is set by the desk, changes only with a reason, is audited and mailed to the builder', async () => {
     const { order, customer } = await orderIn(w.plant, { status: 'accepted' });
     await w.sales
-      .post(`/api/orders/${order.id}/promised-date`, { promisedOn: '2030-05-06' })
+      .post(
+        `/api/orders/${order.id}/promised-date`,
+        await seen(order.id, { promisedOn: '2030-05-06' }),
+      )
       .expect(200);
     const res = await w.sales
-      .post(`/api/orders/${order.id}/promised-date`, { promisedOn: '2030-05-08' })
+      .post(
+        `/api/orders/${order.id}/promised-date`,
+        await seen(order.id, { promisedOn: '2030-05-08' }),
+      )
       .expect(400);
     expect(res.body.error.fields.reason).toBe('Give a reason');
     const ok = await w.sales
-      .post(`/api/orders/${order.id}/promised-date`, {
-        promisedOn: '2030-05-08',
-        reason: 'Crane booked later',
-      })
+      .post(
+        `/api/orders/${order.id}/promised-date`,
+        await seen(order.id, {
+          promisedOn: '2030-05-08',
+          reason: 'Crane booked later',
+        }),
+      )
       .expect(200);
     expect(ok.body.promisedOn).toBe('2030-05-08');
     expect(ok.body.history[0].summary).toBe(
       'Promised date 2030-05-06 → 2030-05-08: Crane booked later',
     );
-    const mails = mailsTo(customer.email);
+    const mails = await queuedTo(customer.email);
     expect(mails[0].subject).toMatch(/delivery date changed/); // newest first
     await w.foreman
-      .post(`/api/orders/${order.id}/promised-date`, { promisedOn: '2030-05-09', reason: 'no' })
+      .post(
+        `/api/orders/${order.id}/promised-date`,
+        await seen(order.id, { promisedOn: '2030-05-09', reason: 'no' }),
+      )
       .expect(403);
   });
 
   it('cannot be promised before the builder accepts', async () => {
     const { order } = await orderIn(w.plant, { status: 'quoted' });
     await w.sales
-      .post(`/api/orders/${order.id}/promised-date`, { promisedOn: '2030-05-06' })
+      .post(
+        `/api/orders/${order.id}/promised-date`,
+        await seen(order.id, { promisedOn: '2030-05-06' }),
+      )
       .expect(409);
   });
 });
