@@ -8,6 +8,7 @@ import {
   cutPieces,
   describeEnd,
   type CutEnd,
+  type CutList,
   type CutListTruss,
 } from '../../shared/engine/pieces';
 import { generateProfile } from '../../shared/engine/profiles';
@@ -45,19 +46,26 @@ export function lineTruss(line: OrderLine): CutListTruss {
   }
 }
 
+/** The order's cut list as the engine builds it (mm): what the saw cuts and the lumber plan plans. */
+export const orderCutList = (lines: readonly OrderLine[]): CutList =>
+  buildCutList(lines.map(lineTruss));
+
 const round = (v: number, places: number) => Number(v.toFixed(places));
 
 /**
  * The order's cut list in its units (the first line's): imperial lengths in inches with
  * feet-inches-sixteenths text, metric in mm. Every line must be approved (the caller checks).
  */
-export function computeCutList(order: ShopOrder, lines: OrderLine[]): CutListView {
+export function computeCutList(
+  order: ShopOrder,
+  lines: readonly OrderLine[],
+  list: CutList = orderCutList(lines),
+): CutListView {
   const units =
     (lines[0]?.designInput as { units?: string } | undefined)?.units === 'metric'
       ? 'metric'
       : 'imperial';
   const imperial = units === 'imperial';
-  const list = buildCutList(lines.map(lineTruss));
   const length = (mm: number) =>
     imperial
       ? { value: round(mm / 25.4, 4), text: formatFeetInches(mm) }

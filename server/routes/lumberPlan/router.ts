@@ -7,6 +7,7 @@ import { authorize } from '../../policies/predicates';
 import { lumberPlanPolicy } from '../../policies/lumberPlan';
 import { lumberPlanCsv } from '../../services/lumberPlanCsv';
 import { lumberPlanFor } from '../../services/lumberPlan';
+import { orderCutList } from '../../services/cutList';
 import { renderLumberPlanPdf } from '../../services/lumberPlanPdf';
 import { handle, load } from '../load';
 import { findOrder } from '../orders/queries';
@@ -24,7 +25,7 @@ async function planOf(res: Response) {
   if (lines.length === 0 || lines.some((l) => l.reviewState !== 'approved')) {
     throw conflict('The lumber plan is ready once every line’s design is approved.');
   }
-  return lumberPlanFor(order, lines, await stockFor(order.plantId));
+  return lumberPlanFor(order, orderCutList(lines), await stockFor(order.plantId));
 }
 
 /** `GET /api/shop/orders/:id/lumber-plan` (JSON), `…/lumber-plan.csv` and `…/lumber-plan.pdf`. */
