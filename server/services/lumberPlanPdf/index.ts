@@ -1,8 +1,7 @@
-import PDFDocument from 'pdfkit';
 import type { LumberPlanBody, LumberPlanSection } from '../../../shared/api/lumberPlan';
 import { formatFeetInches } from '../../../shared/engine/format';
 import { mm, MM_PER_INCH } from '../../../shared/engine/units';
-import { FONTS } from '../quotePdf/fonts';
+import { openDocument, pageFooters } from '../quotePdf/document';
 import { contentBottom, paragraph, textAt } from '../quotePdf/text';
 import { COLORS, MARGIN, type Doc } from '../quotePdf/theme';
 
@@ -95,19 +94,9 @@ export function renderLumberPlanPdf(
   plan: LumberPlanBody,
   meta: { plantName: string },
 ): Promise<Buffer> {
-  const doc = new PDFDocument({
+  const { doc, done } = openDocument({
     size: 'LETTER',
-    margins: { top: MARGIN.top, left: MARGIN.side, right: MARGIN.side, bottom: MARGIN.bottom },
-    bufferPages: true,
-    font: FONTS.regular,
     info: { Title: `Lumber plan ${plan.orderNumber}`, Author: meta.plantName },
-  });
-  for (const [name, path] of Object.entries(FONTS)) doc.registerFont(name, path);
-  const chunks: Buffer[] = [];
-  doc.on('data', (c: Buffer) => chunks.push(c));
-  const done = new Promise<Buffer>((resolve, reject) => {
-    doc.on('end', () => resolve(Buffer.concat(chunks)));
-    doc.on('error', reject);
   });
   const newPage = () => {
     doc.addPage();
@@ -133,25 +122,7 @@ export function renderLumberPlanPdf(
   if (y + 60 > contentBottom(doc)) y = newPage();
   for (const c of plan.cautions)
     y = paragraph(doc, c, MARGIN.side, y, w, { size: 7.5, color: COLORS.muted }) + 2;
-  const range = doc.bufferedPageRange();
-  for (let i = 0; i < range.count; i++) {
-    doc.switchToPage(range.start + i);
-    const bottom = doc.page.margins.bottom;
-    doc.page.margins.bottom = 0;
-    textAt(
-      doc,
-      `Lumber plan ${plan.orderNumber}  ·  page ${i + 1} of ${range.count}`,
-      MARGIN.side,
-      doc.page.height - 34,
-      {
-        size: 7.5,
-        color: COLORS.faint,
-        width: w,
-        align: 'right',
-      },
-    );
-    doc.page.margins.bottom = bottom;
-  }
+  pageFooters(doc, `${meta.plantName}  ·  Lumber plan ${plan.orderNumber}`);
   doc.end();
   return done;
 }
