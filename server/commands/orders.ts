@@ -4,6 +4,7 @@ import { Order, OrderLine, Plant, type Job, type User } from '../models';
 import { AppError, badRequest, conflict, notFound } from '../errors';
 import { computeDesign, type ComputedDesign } from '../services/design';
 import { orderEvent } from './audit';
+import { queueShopPlanIfReady } from './shopPlans';
 import { assertMarkFree, isNoChange } from './lineMarks';
 
 /**
@@ -321,6 +322,7 @@ export async function reviewLine(actor: User, order: Order, loaded: OrderLine, i
         designVersion: line.designVersion,
       },
     );
+    if (input.decision === 'approve') await queueShopPlanIfReady(t, order, actor);
     return line;
   });
 }

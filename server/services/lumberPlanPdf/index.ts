@@ -92,7 +92,7 @@ function section(doc: Doc, s: LumberPlanSection, y: number, newPage: () => numbe
 /** The lumber plan on paper: per lumber, boards to pull and what to cut, drawn to scale. */
 export function renderLumberPlanPdf(
   plan: LumberPlanBody,
-  meta: { plantName: string },
+  meta: { plantName: string; madeAt: string | null; outOfDate: boolean },
 ): Promise<Buffer> {
   const { doc, done } = openDocument({
     size: 'LETTER',
@@ -111,6 +111,8 @@ export function renderLumberPlanPdf(
     doc,
     `${meta.plantName}  ·  kerf ${plan.kerfIn} in, end trim ${plan.trimIn} in per board  ·  ` +
       `${plan.totals.boardCount} boards, ${money(plan.totals.totalCost)} (lower bound ${money(plan.totals.lowerBound)})` +
+      (meta.madeAt ? `  ·  Made ${meta.madeAt.slice(0, 16).replace('T', ' ')} UTC` : '') +
+      (meta.outOfDate ? ' (OUT OF DATE: designs or stock changed since)' : '') +
       (plan.demoStock ? '  ·  Demo stock lengths and prices (invented).' : ''),
     MARGIN.side,
     MARGIN.top + 24,
