@@ -10,6 +10,7 @@ import {
   type CutEnd,
   type CutList,
   type CutListTruss,
+  type TrussPieces,
 } from '../../shared/engine/pieces';
 import { generateProfile } from '../../shared/engine/profiles';
 import { ENGINE_VERSION } from '../../shared/engine/version';
@@ -21,12 +22,17 @@ export const CUT_LIST_ORDER =
   'By lumber size and grade (each cut in one run), then longest first so offcuts can serve shorter pieces (common practice).';
 
 /**
- * The pieces of one approved line as the shop cuts them: the design's line model (with the heel
- * it was analysed with) and the lumber the reviewer approved for each piece.
+ * Every piece of one stored design as the shop cuts it (pieces and outlines, mm): the design's
+ * line model (with the heel it was analysed with) and the lumber the reviewer approved for each
+ * piece. A design whose lumber does not fit its line model answers 409 naming the truss.
  */
-export function lineTruss(line: OrderLine): CutListTruss {
+export function cutStoredDesign(line: {
+  mark: string;
+  designInput: unknown;
+  designResult: unknown;
+}): TrussPieces {
   const input = toEngineInput(designInputSchema.parse(line.designInput));
-  const result = line.designResult as unknown as PresentedDesign;
+  const result = line.designResult as PresentedDesign;
   const pointed = result.heelHeight.analysed.value === 0;
   const profile = generateProfile({
     ...input.profile,
@@ -34,16 +40,21 @@ export function lineTruss(line: OrderLine): CutListTruss {
   });
   const lumber = Object.fromEntries(result.pieces.map((p) => [p.mark, p.lumber]));
   try {
-    return {
-      mark: line.mark,
-      quantity: line.quantity,
-      plies: line.plies,
-      pieces: cutPieces(profile, lumber).pieces,
-    };
+    return cutPieces(profile, lumber);
   } catch (e) {
     if (isEngineError(e)) throw new AppError(409, e.code, `Truss ${line.mark}: ${e.message}`);
     throw e;
   }
+}
+
+/** The pieces of one approved line as the shop cuts them, with its trusses and plies. */
+export function lineTruss(line: OrderLine): CutListTruss {
+  return {
+    mark: line.mark,
+    quantity: line.quantity,
+    plies: line.plies,
+    pieces: cutStoredDesign(line).pieces,
+  };
 }
 
 /** The order's cut list as the engine builds it (mm): what the saw cuts and the lumber plan plans. */
