@@ -46,6 +46,7 @@ import { orderProductionRouter } from './routes/orderProduction/router';
 import { floorRouter } from './routes/floor/router';
 import { healthReport, type HealthProbe } from './health';
 import { requestLog } from './middleware/requestLog';
+import { startShopPlanner } from './services/shopPlan/queue';
 
 export interface AppOptions {
   sequelize: Sequelize;
@@ -117,7 +118,19 @@ export function createApp(opts: AppOptions) {
             return null;
           })
       : null;
+  // Shop plans run on the same job queue as mail, wherever this app has one.
+  const planner = Promise.resolve(opts.mailQueue ?? ownQueue).then((q) =>
+    q
+      ? startShopPlanner(q.boss, { pollingIntervalSeconds: ownQueue ? 0.5 : 2 }).catch(
+          (e: Error) => {
+            console.error(`Shop planner did not start: ${e.message}`);
+            return null;
+          },
+        )
+      : null,
+  );
   app.locals.close = async () => {
+    await (await planner)?.stop();
     await (await ownQueue)?.stop();
     store.close();
     await pool.end().catch(() => undefined);

@@ -6,6 +6,7 @@ import { AppError, badRequest, conflict, notFound } from '../errors';
 import { computeDesign, type ComputedDesign } from '../services/design';
 import { orderEvent } from './audit';
 import { releaseAfterCommit } from './release';
+import { queueShopPlanIfReady } from './shopPlans';
 import { assertMarkFree, isNoChange } from './lineMarks';
 
 /**
@@ -324,8 +325,11 @@ export async function reviewLine(actor: User, order: Order, loaded: OrderLine, i
         designVersion: line.designVersion,
       },
     );
-    // An approval may complete the release gate (production planning).
-    if (input.decision === 'approve') releaseAfterCommit(t, order.id, actor);
+    // An approval may complete the release gate and the order's shop plan.
+    if (input.decision === 'approve') {
+      releaseAfterCommit(t, order.id, actor);
+      await queueShopPlanIfReady(t, order, actor);
+    }
     return line;
   });
 }

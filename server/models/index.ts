@@ -18,6 +18,7 @@ import { ProductionSettings } from './ProductionSettings';
 import { SchedulePlacement } from './SchedulePlacement';
 import { ProgressEvent } from './ProgressEvent';
 import { Inspection } from './Inspection';
+import { ShopPlan } from './ShopPlan';
 
 let initialised: Sequelize | null = null;
 
@@ -71,9 +72,11 @@ export function initModels(sequelize: Sequelize) {
   StockSettings.initModel(sequelize);
   StockSettings.belongsTo(User, { foreignKey: 'updatedBy', as: 'editor', constraints: false });
   Inspection.belongsTo(User, { foreignKey: 'inspectorId', as: 'inspector', constraints: false });
+  ShopPlan.initModel(sequelize);
 }
 
 export { Plant, Customer, User, Job, AuditEvent, Order, OrderLine, PriceBook, Quote, StoredFile };
 export { QuoteAcceptance, Payment, PaymentEvent, MailMessage };
 export { StockSettings };
 export { ProductionSettings, SchedulePlacement, ProgressEvent, Inspection };
+export { ShopPlan };

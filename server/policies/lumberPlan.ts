@@ -8,4 +8,6 @@ import { all, hasRole, samePlant, type Predicate } from './predicates';
  */
 export const lumberPlanPolicy = {
   show: all<Order>(hasRole('admin', 'sales', 'foreman'), samePlant as Predicate<Order>),
+  /** Whoever reads the plan may ask for a new one. */
+  replan: all<Order>(hasRole('admin', 'sales', 'foreman'), samePlant as Predicate<Order>),
 };

@@ -8,7 +8,9 @@ import {
   cutPieces,
   describeEnd,
   type CutEnd,
+  type CutList,
   type CutListTruss,
+  type TrussPieces,
 } from '../../shared/engine/pieces';
 import { generateProfile } from '../../shared/engine/profiles';
 import { ENGINE_VERSION } from '../../shared/engine/version';
@@ -20,12 +22,17 @@ export const CUT_LIST_ORDER =
   'By lumber size and grade (each cut in one run), then longest first so offcuts can serve shorter pieces (common practice).';
 
 /**
- * The pieces of one approved line as the shop cuts them: the design's line model (with the heel
- * it was analysed with) and the lumber the reviewer approved for each piece.
+ * Every piece of one stored design as the shop cuts it (pieces and outlines, mm): the design's
+ * line model (with the heel it was analysed with) and the lumber the reviewer approved for each
+ * piece. A design whose lumber does not fit its line model answers 409 naming the truss.
  */
-export function lineTruss(line: OrderLine): CutListTruss {
+export function cutStoredDesign(line: {
+  mark: string;
+  designInput: unknown;
+  designResult: unknown;
+}): TrussPieces {
   const input = toEngineInput(designInputSchema.parse(line.designInput));
-  const result = line.designResult as unknown as PresentedDesign;
+  const result = line.designResult as PresentedDesign;
   const pointed = result.heelHeight.analysed.value === 0;
   const profile = generateProfile({
     ...input.profile,
@@ -33,17 +40,26 @@ export function lineTruss(line: OrderLine): CutListTruss {
   });
   const lumber = Object.fromEntries(result.pieces.map((p) => [p.mark, p.lumber]));
   try {
-    return {
-      mark: line.mark,
-      quantity: line.quantity,
-      plies: line.plies,
-      pieces: cutPieces(profile, lumber).pieces,
-    };
+    return cutPieces(profile, lumber);
   } catch (e) {
     if (isEngineError(e)) throw new AppError(409, e.code, `Truss ${line.mark}: ${e.message}`);
     throw e;
   }
 }
+
+/** The pieces of one approved line as the shop cuts them, with its trusses and plies. */
+export function lineTruss(line: OrderLine): CutListTruss {
+  return {
+    mark: line.mark,
+    quantity: line.quantity,
+    plies: line.plies,
+    pieces: cutStoredDesign(line).pieces,
+  };
+}
+
+/** The order's cut list as the engine builds it (mm): what the saw cuts and the lumber plan plans. */
+export const orderCutList = (lines: readonly OrderLine[]): CutList =>
+  buildCutList(lines.map(lineTruss));
 
 const round = (v: number, places: number) => Number(v.toFixed(places));
 
@@ -51,13 +67,16 @@ const round = (v: number, places: number) => Number(v.toFixed(places));
  * The order's cut list in its units (the first line's): imperial lengths in inches with
  * feet-inches-sixteenths text, metric in mm. Every line must be approved (the caller checks).
  */
-export function computeCutList(order: ShopOrder, lines: OrderLine[]): CutListView {
+export function computeCutList(
+  order: ShopOrder,
+  lines: readonly OrderLine[],
+  list: CutList = orderCutList(lines),
+): CutListView {
   const units =
     (lines[0]?.designInput as { units?: string } | undefined)?.units === 'metric'
       ? 'metric'
       : 'imperial';
   const imperial = units === 'imperial';
-  const list = buildCutList(lines.map(lineTruss));
   const length = (mm: number) =>
     imperial
       ? { value: round(mm / 25.4, 4), text: formatFeetInches(mm) }

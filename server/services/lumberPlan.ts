@@ -1,17 +1,19 @@
 /**
- * An order's lumber plan: per lumber, the pieces (from `lumberDemand`) cut from the plant's stock
- * (its settings, else the invented demo stock) by the cutting-stock engine, presented in inches
- * and feet for the shop. Computed on request; each lumber is planned separately.
+ * An order's lumber plan: per lumber, the cut list's pieces (from `lumberDemand`) cut from the
+ * plant's stock (its settings, else the invented demo stock) by the cutting-stock engine,
+ * presented in inches and feet for the shop. Each lumber is planned separately; the shop-plan job
+ * (`shopPlanJob.ts`) runs it and stores the result.
  */
 import type { LumberPlanBody, LumberPlanSection } from '../../shared/api/lumberPlan';
 import { stockFor as stockEntryFor, type StockSettings } from '../../shared/api/stock';
-import { planCutting } from '../../shared/engine/cutting';
+import { planCutting, type CuttingProgress } from '../../shared/engine/cutting';
 import { DESIGN_CAUTIONS } from '../../shared/engine/design';
 import { isEngineError } from '../../shared/engine/errors';
 import { nominalBoardFeetPerFoot } from '../../shared/engine/lumber/cost';
 import { MM_PER_INCH } from '../../shared/engine/units';
 import { ENGINE_VERSION } from '../../shared/engine/version';
-import type { Order, OrderLine } from '../models';
+import type { CutList } from '../../shared/engine/pieces';
+import type { Order } from '../models';
 import { lumberDemand, type PieceDemandRow } from './lumberDemand';
 import { loadLpSolver } from './lp';
 
@@ -41,10 +43,20 @@ function groupBoards(boards: Board[]) {
   return [...groups.values()];
 }
 
+/** Where a plan is: which lumber (n of N), the solver's stage and its column-generation rounds. */
+export interface PlanProgress {
+  lumber: string;
+  section: number;
+  sections: number;
+  stage: CuttingProgress['stage'] | 'starting';
+  iterations: number;
+}
+
 async function planSection(
   lumber: string,
   rows: PieceDemandRow[],
   settings: StockSettings,
+  onProgress?: (p: CuttingProgress) => void,
 ): Promise<LumberPlanSection> {
   const pieceCount = rows.reduce((n, r) => n + r.quantity, 0);
   const entry = stockEntryFor(settings, lumber);
@@ -69,7 +81,7 @@ async function planSection(
         trim: settings.trimIn * MM_PER_INCH,
         pieces: rows.map((r) => ({ length: r.lengthMm, quantity: r.quantity, id: r.mark })),
       },
-      { lp: await loadLpSolver(), timeLimitMs: 500 },
+      { lp: await loadLpSolver(), timeLimitMs: 500, onProgress },
     );
     const feet = (boards: { stock: number }[]) =>
       boards.reduce((s, b) => s + boardFeet(lumber, b.stock / MM_PER_FOOT), 0);
@@ -116,15 +128,25 @@ async function planSection(
   }
 }
 
-/** The lumber plan of an order whose lines are all approved. */
+/**
+ * The lumber plan of an order whose lines are all approved, from its cut list. `onProgress` hears
+ * of each lumber before it is planned and after (with the solver's stage and rounds); the plan
+ * waits for it, so a caller may record progress between lumbers.
+ */
 export async function lumberPlanFor(
-  order: Order,
-  lines: readonly OrderLine[],
+  order: Pick<Order, 'id' | 'number'>,
+  cutList: CutList,
   stock: { settings: StockSettings; demo: boolean },
+  onProgress?: (p: PlanProgress) => Promise<void> | void,
 ): Promise<LumberPlanBody> {
   const sections: LumberPlanSection[] = [];
-  for (const [lumber, rows] of lumberDemand(lines)) {
-    sections.push(await planSection(lumber, rows, stock.settings));
+  const demand = [...lumberDemand(cutList)];
+  for (const [i, [lumber, rows]] of demand.entries()) {
+    const at = { lumber, section: i + 1, sections: demand.length };
+    let last: CuttingProgress = { stage: 'column-generation', iterations: 0 };
+    await onProgress?.({ ...at, stage: 'starting', iterations: 0 });
+    sections.push(await planSection(lumber, rows, stock.settings, (p) => (last = p)));
+    await onProgress?.({ ...at, ...last });
   }
   const planned = sections.flatMap((s) => (s.plan ? [s.plan] : []));
   const sum = (f: (p: NonNullable<LumberPlanSection['plan']>) => number) =>

@@ -11,6 +11,7 @@ import { Op, type Transaction } from 'sequelize';
 import { MailMessage } from '../models';
 import type { MailAttachment } from '../models/MailMessage';
 import type { Mailer, OutgoingMail } from './mail';
+import { serialRun } from './serialRun';
 
 export const MAIL_QUEUE = 'mail-send';
 const RETRY = { retryLimit: 12, retryDelay: 2, retryBackoff: true } as const;
@@ -134,24 +135,10 @@ export async function startMailQueue(opts: {
     },
   );
   // One relay at a time per process; a wake-up during a run runs it once more.
-  let running: Promise<void> | null = null;
-  let again = false;
-  const run = (): Promise<void> => {
-    if (running) {
-      again = true;
-      return running;
-    }
-    running = relay(boss)
-      .catch((e: Error) => void (lastError = e.message))
-      .finally(() => {
-        running = null;
-        if (again) {
-          again = false;
-          void run();
-        }
-      });
-    return running;
-  };
+  const { run, idle } = serialRun(
+    () => relay(boss),
+    (e) => void (lastError = e.message),
+  );
   const wake = () => void run();
   committed.on('mail', wake);
   await run();
@@ -163,7 +150,7 @@ export async function startMailQueue(opts: {
     stop: async () => {
       clearInterval(timer);
       committed.off('mail', wake);
-      await running;
+      await idle();
       await boss.stop({ graceful: true, wait: true, timeout: 5000 });
     },
   };

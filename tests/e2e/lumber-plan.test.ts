@@ -4,7 +4,7 @@ import type { BrowserContext, Page } from 'playwright-core';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import type { Order, User } from '../../server/models';
 import { launchBrowser, listen, SCREENSHOTS, signInAs } from '../support/browser';
-import { testApp } from '../support/db';
+import { testApp, testMailer } from '../support/db';
 import {
   createCustomer,
   createJob,
@@ -21,6 +21,7 @@ let base: string;
 let foreman: User;
 let admin: User;
 let order: Order;
+let app: ReturnType<typeof testApp>;
 
 const signIn = (page: Page, user: User) => signInAs(browser, page, base, user.email);
 
@@ -46,7 +47,8 @@ beforeAll(async () => {
       loads: { tcll: 20, tcdl: 10, bcll: 0, bcdl: 10 },
     },
   });
-  const app = testApp({ demo: true }, 'dist/client');
+  // With a mailer the app runs its job queue, where the shop-plan worker makes the plans.
+  app = testApp({ demo: true }, 'dist/client', await testMailer());
   ({ server, url: base } = await listen(app));
   ({ browser, close: closeBrowser } = await launchBrowser());
 });
@@ -54,12 +56,13 @@ beforeAll(async () => {
 afterAll(async () => {
   await closeBrowser?.();
   server?.close();
+  await (app?.locals.close as (() => Promise<void>) | undefined)?.();
 });
 
 describe('lumber plans, in a browser', () => {
-  it('the foreman opens an approved order’s lumber plan and prints it', async () => {
+  it('the foreman opens an approved order’s lumber plan, has it made and prints it', async () => {
     const page = await browser.newPage();
-    await page.setViewportSize({ width: 1440, height: 900 });
+    await page.setViewportSize({ width: 1024, height: 768 }); // the shop floor's tablet
     await signIn(page, foreman);
     await page.goto(`${base}/orders/${order.id}`);
     await page.getByRole('link', { name: 'Lumber plan' }).click();
@@ -67,6 +70,16 @@ describe('lumber plans, in a browser', () => {
     await expect
       .poll(() => page.locator('h1').first().textContent(), { timeout: 30000 })
       .toMatch(/^Lumber plan — order /);
+    // Lines approved outside the review have no plan yet: the foreman asks for one, and the page
+    // follows the job queue's run until the stored plan is there.
+    await page.getByRole('button', { name: 'Make the plan' }).click();
+    await expect
+      .poll(() => page.getByText(/Waiting for the job queue|Planning|Cutting|Plan made/).count(), {
+        timeout: 30000,
+      })
+      .toBeGreaterThan(0);
+    await page.screenshot({ path: `${SCREENSHOTS}/lumber-plan-running-tablet.png` });
+    await expect.poll(() => page.getByText(/^Plan made /).count(), { timeout: 60000 }).toBe(1);
     await expect
       .poll(() => page.getByText(/least possible cost/).count(), { timeout: 30000 })
       .toBeGreaterThan(0);
@@ -75,7 +88,7 @@ describe('lumber plans, in a browser', () => {
         timeout: 30000,
       })
       .toBeGreaterThan(0);
-    await page.screenshot({ path: `${SCREENSHOTS}/lumber-plan-desktop.png`, fullPage: true });
+    await page.screenshot({ path: `${SCREENSHOTS}/lumber-plan-tablet.png`, fullPage: true });
     // On paper: no navigation and no buttons.
     await page.emulateMedia({ media: 'print' });
     expect(await page.locator('nav').first().isVisible()).toBe(false);
@@ -110,6 +123,23 @@ describe('lumber plans, in a browser', () => {
     await page.getByRole('button', { name: 'Save stock' }).click();
     await expect.poll(() => page.getByText(/Last saved/).count(), { timeout: 30000 }).toBe(1);
     await page.screenshot({ path: `${SCREENSHOTS}/stock-settings-desktop.png`, fullPage: true });
+    await page.close();
+  });
+
+  it('after the stock changed, the plan says it is out of date until the foreman re-plans', async () => {
+    const page = await browser.newPage();
+    await page.setViewportSize({ width: 1024, height: 768 });
+    await signIn(page, foreman);
+    await page.goto(`${base}/shop/orders/${order.id}/lumber-plan`);
+    await expect
+      .poll(() => page.getByText(/the stock settings changed/).count(), { timeout: 30000 })
+      .toBe(1);
+    await page.screenshot({ path: `${SCREENSHOTS}/lumber-plan-out-of-date-tablet.png` });
+    await page.getByRole('button', { name: 'Re-plan' }).click();
+    await expect
+      .poll(() => page.getByText(/the stock settings changed/).count(), { timeout: 60000 })
+      .toBe(0);
+    await expect.poll(() => page.getByText(/^Plan made /).count(), { timeout: 60000 }).toBe(1);
     await page.close();
   });
 });

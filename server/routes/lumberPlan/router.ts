@@ -1,18 +1,20 @@
 import { Router, type Response } from 'express';
 import { stockFor } from '../../commands/stockSettings';
+import { replanOrder } from '../../commands/shopPlans';
 import { conflict } from '../../errors';
 import { requireUser } from '../../middleware/auth';
-import { OrderLine, Plant, type Order } from '../../models';
+import { OrderLine, Plant, ShopPlan, type Order } from '../../models';
 import { authorize } from '../../policies/predicates';
 import { lumberPlanPolicy } from '../../policies/lumberPlan';
+import { presentShopPlan } from '../../presenters/shopPlan';
 import { lumberPlanCsv } from '../../services/lumberPlanCsv';
-import { lumberPlanFor } from '../../services/lumberPlan';
 import { renderLumberPlanPdf } from '../../services/lumberPlanPdf';
+import { designsHash, stockHash } from '../../services/shopPlan/inputs';
 import { handle, load } from '../load';
 import { findOrder } from '../orders/queries';
 
-/** The order's plan, refused (409) until every line's design is approved. */
-async function planOf(res: Response) {
+/** The order's plan status, refused (409) until every line's design is approved. */
+async function statusOf(res: Response) {
   const order = res.locals.record as Order;
   const lines = await OrderLine.findAll({
     where: { orderId: order.id },
@@ -24,10 +26,31 @@ async function planOf(res: Response) {
   if (lines.length === 0 || lines.some((l) => l.reviewState !== 'approved')) {
     throw conflict('The lumber plan is ready once every line’s design is approved.');
   }
-  return lumberPlanFor(order, lines, await stockFor(order.plantId));
+  const row = await ShopPlan.findOne({ where: { orderId: order.id } });
+  const now = {
+    designsHash: designsHash(lines),
+    stockHash: stockHash(await stockFor(order.plantId)),
+  };
+  return { status: presentShopPlan(order, row, now), row };
 }
 
-/** `GET /api/shop/orders/:id/lumber-plan` (JSON), `…/lumber-plan.csv` and `…/lumber-plan.pdf`. */
+/** The stored plan for CSV and PDF (409 until the first one is made). */
+async function storedPlan(res: Response) {
+  const { status } = await statusOf(res);
+  if (!status.plan) {
+    throw conflict(
+      status.run.state === 'failed'
+        ? `The lumber plan could not be made: ${status.run.error ?? 'unknown error'}`
+        : 'The lumber plan is still being made; try again in a moment.',
+    );
+  }
+  return { plan: status.plan, madeAt: status.madeAt, outOfDate: status.outOfDate };
+}
+
+/**
+ * `GET /api/shop/orders/:id/lumber-plan` (the stored plan, its age and its run), `POST
+ * …/lumber-plan/replan` (queue a new one), `…/lumber-plan.csv` and `…/lumber-plan.pdf`.
+ */
 export function lumberPlanRouter() {
   const router = Router();
   const guard = [requireUser, load('Order', findOrder), authorize(lumberPlanPolicy.show)];
@@ -36,7 +59,18 @@ export function lumberPlanRouter() {
     '/:id/lumber-plan',
     ...guard,
     handle(async (_req, res) => {
-      res.json(await planOf(res));
+      res.set('Cache-Control', 'private, no-store').json((await statusOf(res)).status);
+    }),
+  );
+
+  router.post(
+    '/:id/lumber-plan/replan',
+    requireUser,
+    load('Order', findOrder),
+    authorize(lumberPlanPolicy.replan),
+    handle(async (req, res) => {
+      await replanOrder(req.user!, res.locals.record as Order);
+      res.status(202).json((await statusOf(res)).status);
     }),
   );
 
@@ -44,7 +78,7 @@ export function lumberPlanRouter() {
     '/:id/lumber-plan.csv',
     ...guard,
     handle(async (_req, res) => {
-      const plan = await planOf(res);
+      const { plan } = await storedPlan(res);
       res
         .type('text/csv; charset=utf-8')
         .set('Content-Disposition', `attachment; filename="lumber-plan-${plan.orderNumber}.csv"`)
@@ -56,8 +90,12 @@ export function lumberPlanRouter() {
     '/:id/lumber-plan.pdf',
     ...guard,
     handle(async (_req, res) => {
-      const plan = await planOf(res);
-      const pdf = await renderLumberPlanPdf(plan, { plantName: await plantName(res) });
+      const { plan, madeAt, outOfDate } = await storedPlan(res);
+      const pdf = await renderLumberPlanPdf(plan, {
+        plantName: await plantName(res),
+        madeAt,
+        outOfDate: outOfDate.length > 0,
+      });
       res
         .type('application/pdf')
         .set('Content-Disposition', `inline; filename="lumber-plan-${plan.orderNumber}.pdf"`)

@@ -1,8 +1,7 @@
-import PDFDocument from 'pdfkit';
 import type { LumberPlanBody, LumberPlanSection } from '../../../shared/api/lumberPlan';
 import { formatFeetInches } from '../../../shared/engine/format';
 import { mm, MM_PER_INCH } from '../../../shared/engine/units';
-import { FONTS } from '../quotePdf/fonts';
+import { openDocument, pageFooters } from '../quotePdf/document';
 import { contentBottom, paragraph, textAt } from '../quotePdf/text';
 import { COLORS, MARGIN, type Doc } from '../quotePdf/theme';
 
@@ -93,21 +92,11 @@ function section(doc: Doc, s: LumberPlanSection, y: number, newPage: () => numbe
 /** The lumber plan on paper: per lumber, boards to pull and what to cut, drawn to scale. */
 export function renderLumberPlanPdf(
   plan: LumberPlanBody,
-  meta: { plantName: string },
+  meta: { plantName: string; madeAt: string | null; outOfDate: boolean },
 ): Promise<Buffer> {
-  const doc = new PDFDocument({
+  const { doc, done } = openDocument({
     size: 'LETTER',
-    margins: { top: MARGIN.top, left: MARGIN.side, right: MARGIN.side, bottom: MARGIN.bottom },
-    bufferPages: true,
-    font: FONTS.regular,
     info: { Title: `Lumber plan ${plan.orderNumber}`, Author: meta.plantName },
-  });
-  for (const [name, path] of Object.entries(FONTS)) doc.registerFont(name, path);
-  const chunks: Buffer[] = [];
-  doc.on('data', (c: Buffer) => chunks.push(c));
-  const done = new Promise<Buffer>((resolve, reject) => {
-    doc.on('end', () => resolve(Buffer.concat(chunks)));
-    doc.on('error', reject);
   });
   const newPage = () => {
     doc.addPage();
@@ -122,6 +111,8 @@ export function renderLumberPlanPdf(
     doc,
     `${meta.plantName}  ·  kerf ${plan.kerfIn} in, end trim ${plan.trimIn} in per board  ·  ` +
       `${plan.totals.boardCount} boards, ${money(plan.totals.totalCost)} (lower bound ${money(plan.totals.lowerBound)})` +
+      (meta.madeAt ? `  ·  Made ${meta.madeAt.slice(0, 16).replace('T', ' ')} UTC` : '') +
+      (meta.outOfDate ? ' (OUT OF DATE: designs or stock changed since)' : '') +
       (plan.demoStock ? '  ·  Demo stock lengths and prices (invented).' : ''),
     MARGIN.side,
     MARGIN.top + 24,
@@ -133,25 +124,7 @@ export function renderLumberPlanPdf(
   if (y + 60 > contentBottom(doc)) y = newPage();
   for (const c of plan.cautions)
     y = paragraph(doc, c, MARGIN.side, y, w, { size: 7.5, color: COLORS.muted }) + 2;
-  const range = doc.bufferedPageRange();
-  for (let i = 0; i < range.count; i++) {
-    doc.switchToPage(range.start + i);
-    const bottom = doc.page.margins.bottom;
-    doc.page.margins.bottom = 0;
-    textAt(
-      doc,
-      `Lumber plan ${plan.orderNumber}  ·  page ${i + 1} of ${range.count}`,
-      MARGIN.side,
-      doc.page.height - 34,
-      {
-        size: 7.5,
-        color: COLORS.faint,
-        width: w,
-        align: 'right',
-      },
-    );
-    doc.page.margins.bottom = bottom;
-  }
+  pageFooters(doc, `${meta.plantName}  ·  Lumber plan ${plan.orderNumber}`);
   doc.end();
   return done;
 }

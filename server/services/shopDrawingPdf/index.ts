@@ -100,7 +100,7 @@ function sheet(doc: Doc, s: ShopDrawing) {
   const braces = s.bracing.map((b) => b.replace(/\.$/, ''));
   const notes = [
     braces.length ? `Bracing: ${braces.join('; ')}.` : 'No web bracing required by the design.',
-    `Dimensions to panel points, centre lines, feet-inches-sixteenths. Engine ${s.engineVersion}.`,
+    `Dimensions to panel points, centre lines, feet-inches-sixteenths; piece lengths long point as cut. Engine ${s.engineVersion}.`,
     s.demoPlates ? 'Demo plate catalog: its design values are invented.' : '',
     ...(s.plyFastening ?? []).map((t) => `Ply fastening: ${t}`),
   ].filter(Boolean);

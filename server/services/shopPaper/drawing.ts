@@ -5,7 +5,9 @@ import type {
 } from '../../../shared/api/shopPaper';
 import { dressedSize, isLumberSize } from '../../../shared/engine/lumber/sizes';
 import type { PresentedDesign } from '../../../shared/engine/design';
-import { lengthText, pitchText, type ShopLine, type ShopOrderPaper } from './lines';
+import type { TrussPieces } from '../../../shared/engine/pieces';
+import { cutStoredDesign } from '../cutList';
+import { fromMm, lengthText, pitchText, type ShopLine, type ShopOrderPaper } from './lines';
 
 type Point = [number, number];
 
@@ -27,32 +29,15 @@ export function depthOf(design: PresentedDesign, lumber: string): number {
 }
 
 /**
- * Each member drawn as a band of its lumber's dressed depth around its centre line: a stand-in
- * until exact piece outlines (cut ends, bevels) are available — the drawing takes any polygons.
+ * Each piece as the saw cuts it (`cutPieces`' outline: bevels, heel, peak, splice and tail cuts),
+ * in the design's units. Identical pieces keep their own outlines, marked with their profile mark.
  */
-export function memberBands(design: PresentedDesign): PieceOutline[] {
-  const at = new Map(design.joints.map((j) => [j.id, j]));
-  const out: PieceOutline[] = [];
-  for (const m of design.members) {
-    const a = at.get(m.from);
-    const b = at.get(m.to);
-    if (!a || !b) continue;
-    const len = Math.hypot(b.x - a.x, b.y - a.y) || 1;
-    const h = depthOf(design, m.lumber) / 2;
-    const nx = (-(b.y - a.y) / len) * h;
-    const ny = ((b.x - a.x) / len) * h;
-    out.push({
-      piece: m.piece,
-      role: m.role,
-      points: [
-        pt(a.x + nx, a.y + ny),
-        pt(b.x + nx, b.y + ny),
-        pt(b.x - nx, b.y - ny),
-        pt(a.x - nx, a.y - ny),
-      ],
-    });
-  }
-  return out;
+export function pieceOutlines(design: PresentedDesign, { outlines }: TrussPieces) {
+  return outlines.map((o): PieceOutline => ({
+    piece: o.piece,
+    role: o.role,
+    points: o.polygon.map(([x, y]) => pt(fromMm(design, x), fromMm(design, y))),
+  }));
 }
 
 /** Each joint's plate as a rectangle: length along its axis, width across, centre slid. */
@@ -154,7 +139,12 @@ export function shopDrawing(
   rows: JointPlateRow[],
 ): ShopDrawing {
   const d = line.design;
-  const geometry = shopDrawingGeometry(d, memberBands(d), plateOutlines(d, rows));
+  const cut = cutStoredDesign({ ...line, designResult: d });
+  const geometry = shopDrawingGeometry(d, pieceOutlines(d, cut), plateOutlines(d, rows));
+  // Each profile piece's long-point length as cut (the centre-line length if not found).
+  const cutLength = new Map(
+    cut.pieces.flatMap((c) => c.pieces.map((mark) => [mark, c.length] as const)),
+  );
   return {
     order: paper.order,
     lineId: line.id,
@@ -171,7 +161,9 @@ export function shopDrawing(
       mark: p.mark,
       role: p.role,
       lumber: p.lumber,
-      length: p.length.text,
+      length: cutLength.has(p.mark)
+        ? lengthText(d, fromMm(d, cutLength.get(p.mark)!))
+        : p.length.text,
       count: line.plies,
     })),
     plates: rows,

@@ -26,6 +26,10 @@ const MM_PER_INCH = 25.4;
 export const toMm = (design: Pick<PresentedDesign, 'units'>, value: number) =>
   design.units.length === 'mm' ? value : value * MM_PER_INCH;
 
+/** A length in mm to the design's units (in or mm). */
+export const fromMm = (design: Pick<PresentedDesign, 'units'>, mm: number) =>
+  design.units.length === 'mm' ? mm : mm / MM_PER_INCH;
+
 /** A length in the design's units as the shop reads it: feet-inches-sixteenths or mm. */
 export const lengthText = (design: Pick<PresentedDesign, 'units'>, value: number) =>
   design.units.length === 'mm' ? formatMm(value) : formatFeetInches(value * MM_PER_INCH);

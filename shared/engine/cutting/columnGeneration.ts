@@ -26,6 +26,8 @@ export interface MasterOptions {
   maxRounds?: number;
   /** Stop once the Lagrangian bound is within this fraction of the master's value. */
   relativeGap?: number;
+  /** Called at the start of each round (0, 1, 2, …): a progress report, nothing more. */
+  onRound?: (round: number) => void;
 }
 
 /**
@@ -113,10 +115,11 @@ export class Master {
    * value: the long tail of rounds that barely move the LP is not worth its time.
    */
   solve(options: MasterOptions = {}): MasterSolution {
-    const { maxRounds = 1000, relativeGap = 0 } = options;
+    const { maxRounds = 1000, relativeGap = 0, onRound } = options;
     let exact = true;
     let bound = -Infinity;
     for (let round = 0; ; round++) {
+      onRound?.(round);
       const result = this.session.solve();
       if (result.status !== 'optimal') throw new Error(`The master LP ended ${result.status}.`);
       const artificialUse = result.x.slice(0, this.n).reduce((a, b) => a + b, 0);

@@ -106,11 +106,18 @@ export function planCutting(input: CuttingInput, options: CuttingOptions = {}): 
   let bound = material;
   let lpValue: number | null = null;
   let method: CuttingPlan['method'] = 'first-fit-decreasing';
+  let rounds = 0;
+  const report = options.onProgress;
   if (options.lp && inst.demand.length > 0) {
     const master = new Master(inst, options.lp);
     try {
       master.add(ffdRaw ?? []);
-      const root = master.solve({ relativeGap: options.lpGap ?? 1e-5 });
+      const root = master.solve({
+        relativeGap: options.lpGap ?? 1e-5,
+        onRound:
+          report && ((r) => report({ stage: 'column-generation', iterations: (rounds = r + 1) })),
+      });
+      report?.({ stage: 'integer-phase', iterations: rounds });
       if (root.infeasible) throw shortfall();
       lpValue = root.bound;
       if (root.exact) bound = Math.max(material, roundUpBound(root.bound, costGrid(inst.cost)));
@@ -142,6 +149,7 @@ export function planCutting(input: CuttingInput, options: CuttingOptions = {}): 
     boards = ffdRaw;
   }
   const result = figures(inst, boards);
+  report?.({ stage: 'done', iterations: rounds });
   const gap = bound > 0 ? ((result.totalCost - bound) / bound) * 100 : 0;
   return {
     boards: presentBoards(inst, boards),

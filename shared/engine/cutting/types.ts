@@ -94,6 +94,14 @@ export interface CuttingOptions {
   lpGap?: number;
   /** Clock in ms (default `performance.now`); injectable for tests. */
   now?: () => number;
+  /** Told of each stage and each column-generation round of the root LP (for progress bars). */
+  onProgress?: (progress: CuttingProgress) => void;
+}
+
+/** Where `planCutting` is: its stage and the root LP's column-generation rounds so far. */
+export interface CuttingProgress {
+  stage: 'column-generation' | 'integer-phase' | 'done';
+  iterations: number;
 }
 
 /** One board of the plan: which stock, which pieces (longest first), what is left over. */

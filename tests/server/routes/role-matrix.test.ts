@@ -70,6 +70,10 @@ const routes: Record<string, Call> = {
     name: 'lumberPlan.show',
     run: (s) => s.get(`/api/shop/orders/${approved.id}/lumber-plan`),
   },
+  'POST /api/shop/orders/:id/lumber-plan/replan': {
+    name: 'lumberPlan.replan',
+    run: (s) => s.post(`/api/shop/orders/${approved.id}/lumber-plan/replan`),
+  },
   'GET /api/shop/orders': { name: 'shop.list', run: (s) => s.get('/api/shop/orders') },
   'GET /api/shop/orders/:id/cut-list': {
     name: 'shop.cutList',
@@ -109,6 +113,13 @@ const expected: Record<string, Record<Role, number>> = {
     sales: 200,
     engineer: 403,
     foreman: 200,
+    builder: 403,
+  },
+  'POST /api/shop/orders/:id/lumber-plan/replan': {
+    admin: 202,
+    sales: 202,
+    engineer: 403,
+    foreman: 202,
     builder: 403,
   },
   'GET /api/shop/orders': { admin: 200, sales: 200, engineer: 403, foreman: 200, builder: 403 },

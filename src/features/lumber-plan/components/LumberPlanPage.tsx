@@ -1,7 +1,8 @@
-import type { LumberPlanSection } from '../../../../shared/api/lumberPlan';
+import type { LumberPlanBody, LumberPlanSection } from '../../../../shared/api/lumberPlan';
 import { Alert, Button, Card, PageHeader, QueryState } from '../../../components/ui';
 import { lumberPlanFiles, useLumberPlan } from '../api/get-lumber-plan';
 import { BoardBar } from './BoardBar';
+import { PlanRun } from './PlanRun';
 import './print.css';
 
 const money = (v: number) =>
@@ -82,52 +83,68 @@ function Section({ s }: { s: LumberPlanSection }) {
   );
 }
 
-/** `/shop/orders/:id/lumber-plan`: which boards to pull and what to cut from each. */
-export function LumberPlanPage({ orderId }: { orderId: number }) {
-  const plan = useLumberPlan(orderId);
+/** The stored plan: per lumber, boards to pull and what to cut from each. */
+function Plan({ plan: p, orderId }: { plan: LumberPlanBody; orderId: number }) {
   const files = lumberPlanFiles(orderId);
   return (
+    <>
+      <div className="flex flex-wrap items-center gap-2" data-print-hide>
+        <Button variant="secondary" onClick={() => window.print()}>
+          Print
+        </Button>
+        <a
+          className="rounded px-3 py-2 text-sm font-medium text-timber-800 underline"
+          href={files.pdf}
+        >
+          PDF
+        </a>
+        <a
+          className="rounded px-3 py-2 text-sm font-medium text-timber-800 underline"
+          href={files.csv}
+        >
+          CSV
+        </a>
+      </div>
+      <p className="text-sm text-sand-700">
+        Kerf {p.kerfIn} in between pieces, end trim {p.trimIn} in per board. {p.totals.boardCount}{' '}
+        boards, {money(p.totals.totalCost)}; lower bound {money(p.totals.lowerBound)}.
+      </p>
+      {p.demoStock ? (
+        <Alert tone="warning" title="Demo stock">
+          Planned from invented demo stock lengths and prices; the plant manager enters the plant’s
+          own under Lumber stock.
+        </Alert>
+      ) : null}
+      {p.sections.map((s) => (
+        <Section key={s.lumber} s={s} />
+      ))}
+      <ul className="list-disc pl-5 text-xs text-sand-600">
+        {p.cautions.map((c) => (
+          <li key={c}>{c}</li>
+        ))}
+      </ul>
+    </>
+  );
+}
+
+/** `/shop/orders/:id/lumber-plan`: the stored plan, its age and run, and Re-plan. */
+export function LumberPlanPage({ orderId }: { orderId: number }) {
+  const status = useLumberPlan(orderId);
+  return (
     <div data-print-sheet>
-      <QueryState query={plan} what="the lumber plan">
-        {(p) => (
+      <QueryState query={status} what="the lumber plan">
+        {(s) => (
           <div className="flex flex-col gap-4">
             <PageHeader
-              title={`Lumber plan — order ${p.orderNumber}`}
-              description={`Kerf ${p.kerfIn} in between pieces, end trim ${p.trimIn} in per board. ${p.totals.boardCount} boards, ${money(p.totals.totalCost)}; lower bound ${money(p.totals.lowerBound)}.`}
-              actions={
-                <div className="flex gap-2" data-print-hide>
-                  <Button variant="secondary" onClick={() => window.print()}>
-                    Print
-                  </Button>
-                  <a
-                    className="rounded px-3 py-2 text-sm font-medium text-timber-800 underline"
-                    href={files.pdf}
-                  >
-                    PDF
-                  </a>
-                  <a
-                    className="rounded px-3 py-2 text-sm font-medium text-timber-800 underline"
-                    href={files.csv}
-                  >
-                    CSV
-                  </a>
-                </div>
+              title={`Lumber plan — order ${s.orderNumber}`}
+              description={
+                s.madeAt
+                  ? `Made ${new Date(s.madeAt).toLocaleString('en-US', { dateStyle: 'medium', timeStyle: 'short' })}${s.outOfDate.length ? ' — out of date' : ''}.`
+                  : undefined
               }
             />
-            {p.demoStock ? (
-              <Alert tone="warning" title="Demo stock">
-                Planned from invented demo stock lengths and prices; the plant manager enters the
-                plant’s own under Lumber stock.
-              </Alert>
-            ) : null}
-            {p.sections.map((s) => (
-              <Section key={s.lumber} s={s} />
-            ))}
-            <ul className="list-disc pl-5 text-xs text-sand-600">
-              {p.cautions.map((c) => (
-                <li key={c}>{c}</li>
-              ))}
-            </ul>
+            <PlanRun status={s} />
+            {s.plan ? <Plan plan={s.plan} orderId={orderId} /> : null}
           </div>
         )}
       </QueryState>

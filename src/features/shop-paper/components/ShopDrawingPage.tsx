@@ -50,7 +50,8 @@ export function ShopDrawingPage({
           <Card className="mb-4">
             <ShopDrawingSvg geometry={s.geometry} />
             <p className="mt-2 text-sm text-sand-600">
-              Dimensions to panel points, centre lines, feet-inches-sixteenths.
+              Dimensions to panel points, centre lines, feet-inches-sixteenths; piece outlines and
+              lengths as cut (long point).
             </p>
           </Card>
           <div className="grid gap-4 xl:grid-cols-2 print:grid-cols-1">

@@ -3,8 +3,11 @@ import { mkdtempSync, writeFileSync } from 'node:fs';
 import { tmpdir } from 'node:os';
 import { join } from 'node:path';
 import { beforeAll, describe, expect, it } from 'vitest';
+import { saveStockSettings } from '../../../../server/commands/stockSettings';
 import type { Customer, Order, Plant } from '../../../../server/models';
-import { lumberPlanSchema } from '../../../../shared/api/lumberPlan';
+import { runShopPlan } from '../../../../server/services/shopPlan/job';
+import { DEMO_STOCK_SETTINGS } from '../../../../shared/api/stock';
+import { shopPlanStatusSchema } from '../../../../shared/api/shopPlan';
 import { testApp } from '../../../support/db';
 import {
   createCustomer,
@@ -36,10 +39,26 @@ beforeAll(async () => {
 });
 
 describe('the lumber plan of an approved order', () => {
-  it('the foreman gets every piece planned from the (demo) stock, within its bound', async () => {
+  it('is made on request by the shop-plan job and stored; GET shows it with its age', async () => {
     const foreman = await signedIn(app, (await createUser({ role: 'foreman', plant })).email);
+    const before = shopPlanStatusSchema.parse((await foreman.get(url(order)).expect(200)).body);
+    expect(before.plan).toBeNull();
+    expect(before.run.state).toBe('idle');
+    // PDF and CSV wait for a stored plan.
+    await foreman.get(url(order, '.csv')).expect(409);
+    const queued = await foreman.post(url(order, '/replan')).expect(202);
+    expect(shopPlanStatusSchema.parse(queued.body).run.state).toBe('queued');
+    // A second request while one waits does not queue another.
+    expect((await foreman.post(url(order, '/replan')).expect(202)).body.run.state).toBe('queued');
+    await runShopPlan(order.id); // what the queue's worker runs
     const res = await foreman.get(url(order)).expect(200);
-    const plan = lumberPlanSchema.parse(res.body);
+    const status = shopPlanStatusSchema.parse(res.body);
+    expect(status.run.state).toBe('idle');
+    expect(status.outOfDate).toEqual([]);
+    expect(Date.parse(status.madeAt!)).toBeGreaterThan(
+      Date.parse(before.run.requestedAt ?? '0') || 0,
+    );
+    const plan = status.plan!;
     expect(plan.demoStock).toBe(true);
     expect(plan.sections.length).toBeGreaterThan(0);
     // 2 lines × 4 trusses × 1 ply × the design's pieces.
@@ -60,6 +79,23 @@ describe('the lumber plan of an approved order', () => {
       }
     }
     expect(plan.cautions.length).toBeGreaterThan(0);
+  });
+
+  it('is marked out of date when the stock settings change, and current again after a re-plan', async () => {
+    const admin = await createUser({ role: 'admin', plant });
+    const session = await signedIn(app, admin.email);
+    await session.post(url(order, '/replan')).expect(202);
+    await runShopPlan(order.id);
+    expect((await session.get(url(order)).expect(200)).body.outOfDate).toEqual([]);
+    await saveStockSettings(admin, { ...DEMO_STOCK_SETTINGS, kerfIn: 0.25 });
+    const stale = shopPlanStatusSchema.parse((await session.get(url(order)).expect(200)).body);
+    expect(stale.outOfDate).toEqual(['stock']);
+    expect(stale.plan!.kerfIn).toBe(DEMO_STOCK_SETTINGS.kerfIn);
+    await session.post(url(order, '/replan')).expect(202);
+    await runShopPlan(order.id);
+    const fresh = shopPlanStatusSchema.parse((await session.get(url(order)).expect(200)).body);
+    expect(fresh.outOfDate).toEqual([]);
+    expect(fresh.plan!.kerfIn).toBe(0.25);
   });
 
   it('the desk and the plant manager may read it; the engineer and a builder may not', async () => {
@@ -84,6 +120,10 @@ describe('the lumber plan of an approved order', () => {
     const foreman = await signedIn(app, (await createUser({ role: 'foreman', plant })).email);
     const res = await foreman.get(url(pending)).expect(409);
     expect(res.body.error.message).toMatch(/approved/);
+    await foreman.post(url(pending, '/replan')).expect(409);
+    const engineer = await signedIn(app, (await createUser({ role: 'engineer', plant })).email);
+    await engineer.post(url(order, '/replan')).expect(403);
+    await elsewhere.post(url(order, '/replan')).expect(404);
   });
 
   it('CSV has one row per board group; the PDF renders (looked at with pdftoppm)', async () => {

@@ -29,16 +29,31 @@ describe('shop drawings', () => {
       .get(`/api/orders/${order.id}/shop-paper/lines/${line.id}`)
       .expect(200)) as { body: ShopDrawing };
     expect(body.mark).toBe('T1');
-    expect(body.geometry.outlines).toHaveLength(design.members.length);
+    // One outline per piece as cut (a chord's outline spans its panels).
+    expect(body.geometry.outlines.map((o) => o.piece).sort()).toEqual(
+      design.pieces.map((p) => p.mark).sort(),
+    );
     expect(body.geometry.plates.map((p) => p.joint)).toEqual(design.plates.map((p) => p.joint));
     expect(body.pieces.map((p) => p.mark)).toEqual(design.pieces.map((p) => p.mark));
     expect(body.geometry.pieceLabels.map((l) => l.text).sort()).toEqual(
       design.pieces.map((p) => p.mark).sort(),
     );
-    // A band is as deep as the dressed lumber: 3.5 in for a 2x4 (NDS Supplement Table 1A).
+    // A web's outline is as wide as the dressed lumber across its centre line (3.5 in for a 2x4,
+    // NDS Supplement Table 1A) and cut back to the chords' edges along it, so shorter than the
+    // centre line between its panel points; its listed length is the long point as cut.
     const web = body.geometry.outlines.find((o) => o.role === 'web')!;
-    const [a, , , d] = web.points;
-    expect(Math.hypot(a[0] - d[0], a[1] - d[1])).toBeCloseTo(3.5, 2);
+    const member = design.members.find((m) => m.piece === web.piece)!;
+    const at = (id: string) => design.joints.find((j) => j.id === id)!;
+    const [a, b] = [at(member.from), at(member.to)];
+    const len = Math.hypot(b.x - a.x, b.y - a.y);
+    const u = [(b.x - a.x) / len, (b.y - a.y) / len];
+    const across = web.points.map(([x, y]) => (x - a.x) * -u[1] + (y - a.y) * u[0]);
+    const along = web.points.map(([x, y]) => (x - a.x) * u[0] + (y - a.y) * u[1]);
+    expect(Math.max(...across) - Math.min(...across)).toBeCloseTo(3.5, 2);
+    const longPoint = Math.max(...along) - Math.min(...along);
+    expect(longPoint).toBeLessThan(len);
+    const listed = body.pieces.find((p) => p.mark === web.piece)!.length;
+    expect(listed).toBe(formatFeetInches(longPoint * 25.4));
     // The bottom chord chain runs heel to heel in feet-inches-sixteenths and adds up to the span.
     const below = body.geometry.dimensions.filter((x) => x.offset < 0);
     const chain = below.slice(0, -1);
