@@ -13,13 +13,8 @@ import {
 } from '../designFacts';
 import { jointPlateRows } from '../shopPaper/plateSchedule';
 import { lengthText, shortLengthText, type ShopLine } from '../shopPaper/lines';
-import {
-  depthOf,
-  memberBands,
-  plateOutlines,
-  shopDrawingGeometry,
-  type PieceOutline,
-} from '../shopPaper/drawing';
+import { pieceOutlines, plateOutlines, shopDrawingGeometry } from '../shopPaper/drawing';
+import { cutStoredDesign } from '../cutList';
 import type { ShopDrawingGeometry } from '../../../shared/api/shopPaper';
 
 /** Who and where, as the sheet's title block prints them. */
@@ -209,12 +204,9 @@ export function designDrawingSheet(ctx: DesignDrawingContext): DesignDrawingShee
         : 'Waiting for review: preliminary, not for construction';
 
   const overhangs = overhangTips(input, d);
-  const topChord = d.members.find((m) => m.role === 'topChord');
-  const bands = [
-    ...memberBands(d),
-    ...overhangs.map((o) => overhangOutline(o, topChord ? depthOf(d, topChord.lumber) : 0)),
-  ];
-  const geometry = shopDrawingGeometry(d, bands, plateOutlines(d, plateRows));
+  // The pieces as the saw cuts them (tails included), like the shop drawing.
+  const outlines = pieceOutlines(d, cutStoredDesign({ ...line, designResult: d }));
+  const geometry = shopDrawingGeometry(d, outlines, plateOutlines(d, plateRows));
   widenBounds(geometry);
 
   return {
@@ -257,23 +249,4 @@ function widenBounds(g: ShopDrawingGeometry) {
   const side = (g.bounds.maxX - g.bounds.minX) * 0.06;
   g.bounds.minX -= side;
   g.bounds.maxX += side;
-}
-
-/** Outline of an overhang band (for callers that draw lumber), in the design's units. */
-export function overhangOutline(o: PaperOverhang, depth: number): PieceOutline {
-  const dx = o.tip.x - o.heel.x;
-  const dy = o.tip.y - o.heel.y;
-  const len = Math.hypot(dx, dy) || 1;
-  const nx = (-dy / len) * (depth / 2);
-  const ny = (dx / len) * (depth / 2);
-  return {
-    piece: 'OH',
-    role: 'overhang',
-    points: [
-      [o.heel.x + nx, o.heel.y + ny],
-      [o.tip.x + nx, o.tip.y + ny],
-      [o.tip.x - nx, o.tip.y - ny],
-      [o.heel.x - nx, o.heel.y - ny],
-    ],
-  };
 }
