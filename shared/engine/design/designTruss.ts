@@ -6,6 +6,7 @@ import { generateProfile } from '../profiles';
 import type { TrussProfile } from '../profiles/types';
 import { KPA_PER_PSF } from '../units';
 import { ENGINE_VERSION } from '../version';
+import { chordShearChecks, type AdditionalChecks } from './additionalChecks';
 import { DESIGN_CAUTIONS } from './cautions';
 import { designLoads } from './combinedLoads';
 import { designDeflection } from './deflection';
@@ -238,6 +239,14 @@ export function designTruss(input: EngineDesignInput, options: DesignOptions = {
   const catalog = options.plateCatalog ?? DEMO_PLATE_CATALOG;
   const plates = designPlates(profile, demands, ctx.cds, sized.lumberOf, catalog);
   for (const p of plates.filter((x) => !x.ok)) warnings.push(`Plate at ${p.joint}: ${p.message}.`);
+  const additional: AdditionalChecks = {
+    shear: chordShearChecks(profile, demands, combos, sized.lumberOf, input.plies),
+  };
+  for (const s of additional.shear.filter((x) => !x.pass)) {
+    warnings.push(
+      `Shear in ${s.member}: fv/Fv′ = ${s.ratio.toFixed(2)} under ${s.combination} (NDS 2018 §3.4.2).`,
+    );
+  }
 
   notes.push(
     `Load combinations: ASCE ${loads.edition} §2.4.1 allowable stress design, each with the CD of its shortest load.`,
@@ -254,6 +263,7 @@ export function designTruss(input: EngineDesignInput, options: DesignOptions = {
       ? 'Repetitive member factor Cr = 1.15 on chord bending (spacing 24 in. o.c. or less).'
       : 'No repetitive member factor: spacing over 24 in. o.c.',
     'Deflection of the bottom-chord panel points from the same frame (axial and bending strain; no joint slip or creep).',
+    "Chord shear fv = 1.5V/A ≤ Fv′ = Fv·CD (NDS 2018 §3.4.2) with V the largest shear along each chord member in the frame, taken at the panel point (loads within d of it are not neglected); it counts in the member's CSI.",
     ...(catalog.demo ? [catalog.label] : []),
   );
   const ok =
@@ -261,7 +271,8 @@ export function designTruss(input: EngineDesignInput, options: DesignOptions = {
     bearing.every((b) => b.pass) &&
     deflection.total.pass &&
     (deflection.live?.pass ?? true) &&
-    plates.every((p) => p.ok);
+    plates.every((p) => p.ok) &&
+    additional.shear.every((x) => x.pass);
   return {
     joints: profile.joints,
     span: profile.params.span,
@@ -275,6 +286,7 @@ export function designTruss(input: EngineDesignInput, options: DesignOptions = {
     plates,
     demoPlates: catalog.demo,
     bearing,
+    additional,
     warnings,
     notes,
     cautions: [...DESIGN_CAUTIONS],

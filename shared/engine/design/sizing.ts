@@ -19,7 +19,7 @@ export interface SizingContext {
 
 /**
  * The combinations that can govern member k, whatever the lumber. Combination B cannot govern
- * when some A has CD_A ≤ CD_B, M_A ≥ M_B and an axial force of the same sign at least as large
+ * when some A has CD_A ≤ CD_B, M_A ≥ M_B, V_A ≥ V_B and an axial force of the same sign at least as large
  * (any axial force when N_B = 0): every NDS ratio of B is then at most one of A's (capacities
  * grow with CD; the (fb − ft)/Fb** term of B is at most B's own fb/Fb′ ≤ A's). Ties keep the
  * first. Checking only these keeps sizing fast without changing any result.
@@ -29,21 +29,23 @@ export function criticalCombinations(
   cds: readonly number[],
   k: number,
 ): number[] {
-  const { axial, moment, members: m } = demands;
+  const { axial, moment, shear, members: m } = demands;
   const n = cds.length;
   const keep: number[] = [];
   for (let b = 0; b < n; b++) {
     const nb = axial[b * m + k];
     const mb = moment[b * m + k];
+    const vb = shear[b * m + k];
     let dominated = false;
     for (let a = 0; a < n && !dominated; a++) {
       if (a === b) continue;
       const na = axial[a * m + k];
       const ma = moment[a * m + k];
+      const va = shear[a * m + k];
       const sameSide = nb === 0 || (nb > 0 ? na >= nb : na <= nb);
-      if (!(cds[a] <= cds[b] && ma >= mb && sameSide)) continue;
+      if (!(cds[a] <= cds[b] && ma >= mb && va >= vb && sameSide)) continue;
       // Equal demands and CD: keep the earlier combination only.
-      const equal = cds[a] === cds[b] && ma === mb && na === nb;
+      const equal = cds[a] === cds[b] && ma === mb && va === vb && na === nb;
       dominated = !equal || a < b;
     }
     if (!dominated) keep.push(b);
@@ -100,7 +102,7 @@ export function checkOverCombinations(
 ): MemberVerdict {
   const member = ctx.profile.members[k];
   const { leStrong, leWeak } = effectiveLengths(member, option.braced);
-  const { axial, moment, spanMoment, supportMoment, members: m } = ctx.demands;
+  const { axial, moment, spanMoment, supportMoment, shear, members: m } = ctx.demands;
   const repetitive = ctx.repetitive && member.role !== 'web';
   let worst: MemberVerdict = { csi: -1, combination: 0, governing: 'tension' };
   const combos = order ?? ctx.critical[k];
@@ -117,6 +119,7 @@ export function checkOverCombinations(
       leWeak,
       cd: ctx.cds[i],
       repetitive,
+      shear: shear[i * m + k],
     });
     if (perCombination) perCombination[i] = result.csi;
     if (result.csi > worst.csi) {

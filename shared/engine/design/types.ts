@@ -1,4 +1,5 @@
 import type { Joint } from '../analysis/types';
+import type { AdditionalChecks } from './additionalChecks';
 import type { AsceEdition } from '../loads/snow';
 import type { GoverningCheck } from '../members/checkMember';
 import type { JointPlateDesign, PlateCatalog, PlateJointKind } from '../plates/types';
@@ -163,6 +164,8 @@ export interface TrussDesign {
   /** True when the plates come from a demo catalog with invented values. */
   demoPlates: boolean;
   bearing: DesignBearing[];
+  /** Chord shear and the other checks of `AdditionalChecks`. */
+  additional: AdditionalChecks;
   /** Things that fail or need attention (failing checks, ignored input); empty when all is well. */
   warnings: string[];
   /** Assumptions made, in words. */

@@ -2,6 +2,7 @@ import { EngineError } from '../errors';
 import { designValues, parseLumberId, sectionProperties, dressedSize } from '../lumber';
 import { columnDesignValue, MAX_SLENDERNESS } from './columnStability';
 import { compressionBendingIndex, tensionBendingIndex } from './interaction';
+import { shearStress } from './shear';
 
 /** One member, one load combination (NDS 2018 ASD; N, mm, MPa). */
 export interface MemberCheckInput {
@@ -27,11 +28,13 @@ export interface MemberCheckInput {
   cd: number;
   /** Cr on Fb (trusses ≤ 24 in. o.c.). */
   repetitive: boolean;
+  /** Largest |V| along the member, N: checked as fv = 1.5V/A ≤ Fv′ (NDS 2018 §3.4.2). */
+  shear?: number;
 }
 
 /** The check that sets the CSI. */
 export type GoverningCheck =
-  'tension' | 'compression' | 'bending' | 'tension+bending' | 'compression+bending';
+  'tension' | 'compression' | 'bending' | 'tension+bending' | 'compression+bending' | 'shear';
 
 /** Demand/capacity ratios; only those that apply are present. */
 export interface MemberRatios {
@@ -42,6 +45,8 @@ export interface MemberRatios {
   compressionBending?: number;
   /** max(le/d)/50 for a compression member (NDS 2018 3.7.1.4); above 1 is a failure. */
   slenderness?: number;
+  /** fv/Fv′ (NDS 2018 §3.4.2), when a shear is given. */
+  shear?: number;
 }
 
 /** Result of a member check. Stresses and design values in MPa. */
@@ -63,6 +68,7 @@ const GOVERNING_OF: Record<keyof MemberRatios, GoverningCheck> = {
   tensionBending: 'tension+bending',
   compressionBending: 'compression+bending',
   slenderness: 'compression',
+  shear: 'shear',
 };
 
 function validate(input: MemberCheckInput): void {
@@ -143,6 +149,7 @@ export function checkMember(input: MemberCheckInput): MemberCheckResult {
   } else {
     ratios.bending = fb / dv.fb;
   }
+  if (input.shear) ratios.shear = shearStress(input.shear, section.area) / dv.fv;
 
   // The largest ratio governs; on a tie the later (combined) check is reported.
   let governing: GoverningCheck = axial >= 0 ? (moment > 0 ? 'bending' : 'tension') : 'compression';

@@ -1,0 +1,56 @@
+import { describe, expect, it } from 'vitest';
+import { designTruss } from '../../../../shared/engine/design';
+import { engineInput } from './support/inputs';
+
+/**
+ * Chord shear on a whole design, computed here by hand. A 16 ft 4/12 king-post truss with no
+ * overhang: each top chord is one piece from heel to peak, hinged at both ends (heel without an
+ * overhang, peak), so it spans as a simple beam and V = w⊥·L/2 at its ends. Dead load acts along
+ * the slope (TCDL·s per ft of slope), roof live load on the horizontal projection (TCLL·s per ft
+ * of plan = TCLL·s·cosθ per ft of slope); the part across the chord is w·cosθ of each.
+ * NDS 2018 §3.4.2: fv = 1.5V/A; Fv′ = Fv·CD, Fv = 135 psi for SPF No.1/No.2 (Supplement Table 4A),
+ * CD 0.9 (D) and 1.25 (Lr) (NDS 2018 Table 2.3.2). Units lb, ft, in.
+ */
+describe('top-chord shear of a king-post truss (NDS 2018 §3.4.2)', () => {
+  const N_PER_LB = 4.4482216152605;
+  const s = 2; // ft, 24 in o.c.
+  const cos = 12 / Math.hypot(12, 4);
+  const slope = 8 / cos; // ft, heel to peak
+  const design = designTruss(
+    engineInput({
+      units: 'imperial',
+      profile: 'kingPost',
+      span: 16 * 12,
+      pitch: 4,
+      spacing: 24,
+      loads: { tcll: 20, tcdl: 10, bcll: 0, bcdl: 10 },
+      lumber: { topChord: '2x4 SPF-1/2', bottomChord: '2x4 SPF-1/2', webs: '2x4 SPF-1/2' },
+    }),
+  );
+  const dead = 10 * s * cos; // plf across the chord
+  const live = 20 * s * cos * cos;
+  const vD = (dead * slope) / 2; // 80.0 lb
+  const vDLr = ((dead + live) * slope) / 2; // 231.8 lb
+
+  it('V under D + Lr is (w⊥D + w⊥Lr)·L/2 = 231.8 lb, and it governs', () => {
+    expect(vDLr).toBeWithin(231.8, { abs: 0.05 });
+    const tc = design.additional.shear.find((c) => c.member === 'AD')!;
+    expect(tc.combination).toBe('D + Lr');
+    expect(tc.shear / N_PER_LB).toBeWithin(vDLr, { rel: 1e-6 });
+    const ratio = (1.5 * vDLr) / 5.25 / (135 * 1.25);
+    expect(tc.ratio).toBeWithin(ratio, { rel: 1e-6 });
+    expect(tc.pass).toBe(true);
+  });
+
+  it("the member's shear envelope is the D + Lr value; D alone (80.0 lb at CD 0.9) does not govern", () => {
+    expect(vD).toBeWithin(80.0, { abs: 0.05 });
+    const ad = design.members.find((m) => m.id === 'AD')!;
+    expect(ad.maxShear / N_PER_LB).toBeWithin(vDLr, { rel: 1e-6 });
+    expect((1.5 * vD) / 5.25 / (135 * 0.9)).toBeLessThan((1.5 * vDLr) / 5.25 / (135 * 1.25));
+  });
+
+  it('says how shear is checked, and webs carry none', () => {
+    expect(design.notes.join(' ')).toMatch(/NDS 2018 §3\.4\.2/);
+    expect(design.additional.shear.map((c) => c.member)).not.toContain('BD');
+  });
+});
