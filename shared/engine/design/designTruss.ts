@@ -264,6 +264,7 @@ export function designTruss(input: EngineDesignInput, options: DesignOptions = {
       : 'No repetitive member factor: spacing over 24 in. o.c.',
     'Deflection of the bottom-chord panel points from the same frame (axial and bending strain; no joint slip or creep).',
     "Chord shear fv = 1.5V/A ≤ Fv′ = Fv·CD (NDS 2018 §3.4.2) with V the largest shear along each chord member in the frame, taken at the panel point (loads within d of it are not neglected); it counts in the member's CSI.",
+    'Plates: tooth holding with |F|/CD of each combination (tooth values take CD); the steel across heel and splice lines with the full |F| (steel capacities take no load-duration factor).',
     ...(catalog.demo ? [catalog.label] : []),
   );
   const ok =

@@ -54,3 +54,52 @@ describe('top-chord shear of a king-post truss (NDS 2018 §3.4.2)', () => {
     expect(design.additional.shear.map((c) => c.member)).not.toContain('BD');
   });
 });
+
+/**
+ * Heel plate steel on a whole design, by hand (method of joints). A 16 ft 4/12 king-post truss
+ * with no bottom-chord load and no overhang: each side's top chord carries W = TCDL·s·L_slope +
+ * TCLL·s·8 ft; half of it goes to the heel joint, the bearing takes W, so the top-chord force at
+ * mid-length is C = (W − W/2)/sinθ = W/(2 sinθ). The heel steel along the bottom chord carries
+ * C·cosθ in shear and C·sinθ in tension, with the full force of the worst combination (steel
+ * takes no CD), not C/CD. The frame's bottom chord is continuous through the king post, so as the
+ * peak settles it bends and the post carries a few pounds: the frame's C is within 1 % of the
+ * pin-jointed value (a 25 % CD slip could not hide in that).
+ */
+describe('heel plate steel with the full force (king post, method of joints)', () => {
+  const N_PER_LB = 4.4482216152605;
+  const cos = 12 / Math.hypot(12, 4);
+  const sin = 4 / Math.hypot(12, 4);
+  const design = designTruss(
+    engineInput({
+      units: 'imperial',
+      profile: 'kingPost',
+      span: 16 * 12,
+      pitch: 4,
+      spacing: 24,
+      loads: { tcll: 20, tcdl: 10, bcll: 0, bcdl: 0 },
+      lumber: { topChord: '2x4 SPF-1/2', bottomChord: '2x4 SPF-1/2', webs: '2x4 SPF-1/2' },
+    }),
+  );
+  const w = 10 * 2 * (8 / cos) + 20 * 2 * 8; // 488.6 lb under D + Lr
+  const c = w / (2 * sin);
+
+  it('the top chord carries C = W/(2 sinθ) = 772.6 lb under D + Lr', () => {
+    expect(c).toBeWithin(772.6, { abs: 0.05 });
+    const ad = design.members.find((m) => m.id === 'AD')!;
+    expect(ad.maxCompression / N_PER_LB).toBeWithin(c, { rel: 0.01 });
+  });
+
+  it('the heel steel takes C·cosθ (shear) and C·sinθ (tension), not divided by CD 1.25', () => {
+    const heel = design.plates.find((p) => p.joint === 'A')!;
+    expect(heel.kind).toBe('heel');
+    const shear = heel.design!.steel.find((s) => s.kind === 'shear')!;
+    const tension = heel.design!.steel.find((s) => s.kind === 'tension')!;
+    expect(shear.demand / N_PER_LB).toBeWithin(c * cos, { rel: 0.01 });
+    expect(tension.demand / N_PER_LB).toBeWithin(c * sin, { rel: 0.01 });
+    const ad = design.members.find((m) => m.id === 'AD')!;
+    expect(shear.demand).toBeWithin(ad.maxCompression * cos, { rel: 1e-9 });
+    // Tooth holding is checked with C/CD: 772.6/1.25 = 618.1 lb.
+    const tooth = heel.design!.members.find((m) => m.member === 'AD')!;
+    expect(tooth.demand / N_PER_LB).toBeWithin(c / 1.25, { rel: 0.01 });
+  });
+});
