@@ -2,6 +2,22 @@ import { describe, expect, it } from 'vitest';
 import { designTruss } from '../../../../shared/engine/design';
 import { engineInput } from './support/inputs';
 
+const N_PER_LB = 4.4482216152605;
+const ALL_SPF = { topChord: '2x4 SPF-1/2', bottomChord: '2x4 SPF-1/2', webs: '2x4 SPF-1/2' };
+/** A 16 ft 4/12 king-post truss at 24 in o.c., no heel, no overhang, SPF No.1/No.2 2x4 (psf). */
+const kingPost = (bcdl: number) =>
+  designTruss(
+    engineInput({
+      units: 'imperial',
+      profile: 'kingPost',
+      span: 16 * 12,
+      pitch: 4,
+      spacing: 24,
+      loads: { tcll: 20, tcdl: 10, bcll: 0, bcdl },
+      lumber: ALL_SPF,
+    }),
+  );
+
 /**
  * Chord shear on a whole design, computed here by hand. A 16 ft 4/12 king-post truss with no
  * overhang: each top chord is one piece from heel to peak, hinged at both ends (heel without an
@@ -12,21 +28,10 @@ import { engineInput } from './support/inputs';
  * CD 0.9 (D) and 1.25 (Lr) (NDS 2018 Table 2.3.2). Units lb, ft, in.
  */
 describe('top-chord shear of a king-post truss (NDS 2018 §3.4.2)', () => {
-  const N_PER_LB = 4.4482216152605;
   const s = 2; // ft, 24 in o.c.
   const cos = 12 / Math.hypot(12, 4);
   const slope = 8 / cos; // ft, heel to peak
-  const design = designTruss(
-    engineInput({
-      units: 'imperial',
-      profile: 'kingPost',
-      span: 16 * 12,
-      pitch: 4,
-      spacing: 24,
-      loads: { tcll: 20, tcdl: 10, bcll: 0, bcdl: 10 },
-      lumber: { topChord: '2x4 SPF-1/2', bottomChord: '2x4 SPF-1/2', webs: '2x4 SPF-1/2' },
-    }),
-  );
+  const design = kingPost(10);
   const dead = 10 * s * cos; // plf across the chord
   const live = 20 * s * cos * cos;
   const vD = (dead * slope) / 2; // 80.0 lb
@@ -66,20 +71,9 @@ describe('top-chord shear of a king-post truss (NDS 2018 §3.4.2)', () => {
  * pin-jointed value (a 25 % CD slip could not hide in that).
  */
 describe('heel plate steel with the full force (king post, method of joints)', () => {
-  const N_PER_LB = 4.4482216152605;
   const cos = 12 / Math.hypot(12, 4);
   const sin = 4 / Math.hypot(12, 4);
-  const design = designTruss(
-    engineInput({
-      units: 'imperial',
-      profile: 'kingPost',
-      span: 16 * 12,
-      pitch: 4,
-      spacing: 24,
-      loads: { tcll: 20, tcdl: 10, bcll: 0, bcdl: 0 },
-      lumber: { topChord: '2x4 SPF-1/2', bottomChord: '2x4 SPF-1/2', webs: '2x4 SPF-1/2' },
-    }),
-  );
+  const design = kingPost(0);
   const w = 10 * 2 * (8 / cos) + 20 * 2 * 8; // 488.6 lb under D + Lr
   const c = w / (2 * sin);
 
