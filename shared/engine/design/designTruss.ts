@@ -6,7 +6,14 @@ import { generateProfile } from '../profiles';
 import type { TrussProfile } from '../profiles/types';
 import { KPA_PER_PSF } from '../units';
 import { ENGINE_VERSION } from '../version';
-import { chordShearChecks, type AdditionalChecks } from './additionalChecks';
+import {
+  chordShearChecks,
+  KCR_SEASONED_DRY,
+  longTermDeflection,
+  upliftChecks,
+  upliftWarning,
+  type AdditionalChecks,
+} from './additionalChecks';
 import { DESIGN_CAUTIONS } from './cautions';
 import { designLoads } from './combinedLoads';
 import { designDeflection } from './deflection';
@@ -241,10 +248,19 @@ export function designTruss(input: EngineDesignInput, options: DesignOptions = {
   for (const p of plates.filter((x) => !x.ok)) warnings.push(`Plate at ${p.joint}: ${p.message}.`);
   const additional: AdditionalChecks = {
     shear: chordShearChecks(profile, demands, combos, sized.lumberOf, input.plies),
+    uplift: upliftChecks(reactions, combos),
+    longTermDeflection: longTermDeflection(deflection, profile.params.span, input.deflection.total),
   };
   for (const s of additional.shear.filter((x) => !x.pass)) {
     warnings.push(
       `Shear in ${s.member}: fv/Fv′ = ${s.ratio.toFixed(2)} under ${s.combination} (NDS 2018 §3.4.2).`,
+    );
+  }
+  warnings.push(...additional.uplift.map(upliftWarning));
+  const creep = additional.longTermDeflection;
+  if (!creep.pass) {
+    warnings.push(
+      `Long-term deflection under ${creep.load} (NDS 2018 §3.5.2): span/${Math.round(creep.ratio)} at ${creep.joint}, limit span/${creep.limit}.`,
     );
   }
 
@@ -263,6 +279,7 @@ export function designTruss(input: EngineDesignInput, options: DesignOptions = {
       ? 'Repetitive member factor Cr = 1.15 on chord bending (spacing 24 in. o.c. or less).'
       : 'No repetitive member factor: spacing over 24 in. o.c.',
     'Deflection of the bottom-chord panel points from the same frame (axial and bending strain; no joint slip or creep).',
+    `Long-term deflection ${KCR_SEASONED_DRY}·Δ(dead) + Δ(live) against the total-load limit: creep factor Kcr = ${KCR_SEASONED_DRY} for seasoned lumber in dry service (NDS 2018 §3.5.2).`,
     "Chord shear fv = 1.5V/A ≤ Fv′ = Fv·CD (NDS 2018 §3.4.2) with V the largest shear along each chord member in the frame, taken at the panel point (loads within d of it are not neglected); it counts in the member's CSI.",
     'Plates: tooth holding with |F|/CD of each combination (tooth values take CD); the steel across heel and splice lines with the full |F| (steel capacities take no load-duration factor).',
     ...(catalog.demo ? [catalog.label] : []),
@@ -273,7 +290,8 @@ export function designTruss(input: EngineDesignInput, options: DesignOptions = {
     deflection.total.pass &&
     (deflection.live?.pass ?? true) &&
     plates.every((p) => p.ok) &&
-    additional.shear.every((x) => x.pass);
+    additional.shear.every((x) => x.pass) &&
+    additional.longTermDeflection.pass;
   return {
     joints: profile.joints,
     span: profile.params.span,

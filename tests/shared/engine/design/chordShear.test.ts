@@ -1,22 +1,10 @@
 import { describe, expect, it } from 'vitest';
 import { designTruss } from '../../../../shared/engine/design';
-import { engineInput } from './support/inputs';
+import { engineInput, kingPost16 } from './support/inputs';
 
 const N_PER_LB = 4.4482216152605;
-const ALL_SPF = { topChord: '2x4 SPF-1/2', bottomChord: '2x4 SPF-1/2', webs: '2x4 SPF-1/2' };
-/** A 16 ft 4/12 king-post truss at 24 in o.c., no heel, no overhang, SPF No.1/No.2 2x4 (psf). */
 const kingPost = (bcdl: number) =>
-  designTruss(
-    engineInput({
-      units: 'imperial',
-      profile: 'kingPost',
-      span: 16 * 12,
-      pitch: 4,
-      spacing: 24,
-      loads: { tcll: 20, tcdl: 10, bcll: 0, bcdl },
-      lumber: ALL_SPF,
-    }),
-  );
+  designTruss(engineInput(kingPost16({ tcll: 20, tcdl: 10, bcll: 0, bcdl })));
 
 /**
  * Chord shear on a whole design, computed here by hand. A 16 ft 4/12 king-post truss with no

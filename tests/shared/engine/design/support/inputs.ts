@@ -24,3 +24,17 @@ export const lightFink = (extra: Partial<DesignInputDraft> = {}): DesignInputDra
   loads: TYPICAL_LOADS,
   ...extra,
 });
+
+/**
+ * A 16 ft 4/12 king-post truss at 24 in o.c., no heel, no overhang, every member 2x4 SPF
+ * No.1/No.2: each top chord is one piece hinged at heel and peak (a simple beam for hand checks).
+ */
+export const kingPost16 = (loads: DesignInputDraft['loads']): DesignInputDraft => ({
+  units: 'imperial',
+  profile: 'kingPost',
+  span: 16 * 12,
+  pitch: 4,
+  spacing: 24,
+  loads,
+  lumber: { topChord: '2x4 SPF-1/2', bottomChord: '2x4 SPF-1/2', webs: '2x4 SPF-1/2' },
+});
