@@ -2,6 +2,7 @@ import { checkShear } from '../members/shear';
 import type { TrussProfile } from '../profiles/types';
 import { N_PER_LBF } from '../units';
 import type { MemberDemands } from './demands';
+import type { ServiceDeflection } from './serviceDeflection';
 import type { DeflectionCheck, DesignCombination, DesignDeflection, DesignReaction } from './types';
 
 /** Creep factor Kcr for seasoned lumber in dry service, NDS 2018 §3.5.2. */
@@ -109,4 +110,6 @@ export interface AdditionalChecks {
   uplift: UpliftCheck[];
   /** NDS 2018 §3.5.2: Kcr·Δ(dead) + Δ(live) at the bottom-chord panel points, total-load limit. */
   longTermDeflection: DeflectionCheck;
+  /** Mid-panel and overhang-tip deflection, and a scissor's roller movement. */
+  deflection: ServiceDeflection;
 }

@@ -20,6 +20,7 @@ import { designDeflection } from './deflection';
 import type { MemberDemands } from './demands';
 import { analyseAndSize, type Sized } from './frameSizing';
 import { designPlates } from './jointPlates';
+import { serviceDeflection } from './serviceDeflection';
 import type { GroupChoice, SizingGroup } from './sizing';
 import type {
   DesignBearing,
@@ -250,7 +251,21 @@ export function designTruss(input: EngineDesignInput, options: DesignOptions = {
     shear: chordShearChecks(profile, demands, combos, sized.lumberOf, input.plies),
     uplift: upliftChecks(reactions, combos),
     longTermDeflection: longTermDeflection(deflection, profile.params.span, input.deflection.total),
+    deflection: serviceDeflection(frame, profile, loads.cases, deflection, input.deflection),
   };
+  const service = additional.deflection;
+  const serviceChecks = [
+    service.midPanel.live,
+    service.midPanel.total,
+    service.overhangTip?.live,
+    service.overhangTip?.total,
+  ].filter((d) => d !== undefined);
+  for (const d of serviceChecks.filter((x) => !x.pass)) {
+    const of = d.joint.includes('tip') ? 'twice the overhang' : 'span';
+    warnings.push(
+      `Deflection under ${d.load} at the ${d.joint}: ${of}/${Math.round(d.ratio)}, limit ${of}/${d.limit}.`,
+    );
+  }
   for (const s of additional.shear.filter((x) => !x.pass)) {
     warnings.push(
       `Shear in ${s.member}: fv/Fv′ = ${s.ratio.toFixed(2)} under ${s.combination} (NDS 2018 §3.4.2).`,
@@ -279,6 +294,12 @@ export function designTruss(input: EngineDesignInput, options: DesignOptions = {
       ? 'Repetitive member factor Cr = 1.15 on chord bending (spacing 24 in. o.c. or less).'
       : 'No repetitive member factor: spacing over 24 in. o.c.',
     'Deflection of the bottom-chord panel points from the same frame (axial and bending strain; no joint slip or creep).',
+    "Deflection at mid-length of each bottom-chord panel: the panel points' drop plus the panel's own bending (Euler–Bernoulli, end moments from the frame); at an overhang tip: the heel's drop and rotation plus the cantilever's bending, against twice the overhang's run over the limit (IBC Table 1604.3 footnote for cantilevers, from memory).",
+    ...(service.rollerMovement
+      ? [
+          `Roller bearing ${service.rollerMovement.joint} moves ${(service.rollerMovement.movement / 25.4).toFixed(2)} in (${service.rollerMovement.movement.toFixed(1)} mm) ${service.rollerMovement.movement >= 0 ? 'outward' : 'inward'} relative to the pinned bearing under ${service.rollerMovement.load}: the bearing must let it slide that far, or the walls take the thrust.`,
+        ]
+      : []),
     `Long-term deflection ${KCR_SEASONED_DRY}·Δ(dead) + Δ(live) against the total-load limit: creep factor Kcr = ${KCR_SEASONED_DRY} for seasoned lumber in dry service (NDS 2018 §3.5.2).`,
     "Chord shear fv = 1.5V/A ≤ Fv′ = Fv·CD (NDS 2018 §3.4.2) with V the largest shear along each chord member in the frame, taken at the panel point (loads within d of it are not neglected); it counts in the member's CSI.",
     'Plates: tooth holding with |F|/CD of each combination (tooth values take CD); the steel across heel and splice lines with the full |F| (steel capacities take no load-duration factor).',
@@ -291,7 +312,8 @@ export function designTruss(input: EngineDesignInput, options: DesignOptions = {
     (deflection.live?.pass ?? true) &&
     plates.every((p) => p.ok) &&
     additional.shear.every((x) => x.pass) &&
-    additional.longTermDeflection.pass;
+    additional.longTermDeflection.pass &&
+    serviceChecks.every((d) => d.pass);
   return {
     joints: profile.joints,
     span: profile.params.span,
