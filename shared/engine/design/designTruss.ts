@@ -14,6 +14,7 @@ import {
   upliftWarning,
   type AdditionalChecks,
 } from './additionalChecks';
+import { bracingText, chordBracingNote } from './bracing';
 import { DESIGN_CAUTIONS } from './cautions';
 import { designLoads } from './combinedLoads';
 import { designDeflection } from './deflection';
@@ -38,20 +39,12 @@ import type {
  */
 export const STANDARD_HEEL_MAX_MM = 8 * 25.4;
 
-const bracingText = (role: string, braced: boolean) =>
-  role === 'topChord'
-    ? 'Braced out of plane by the roof sheathing.'
-    : role === 'bottomChord'
-      ? 'Braced out of plane by the ceiling.'
-      : braced
-        ? 'Lateral brace at mid-length (permanent bracing per the drawings).'
-        : 'No lateral brace needed.';
-
 function designMembers(
   profile: TrussProfile,
   demands: MemberDemands,
   combos: DesignCombination[],
   sized: Sized,
+  input: EngineDesignInput,
 ): DesignMember[] {
   const pieceOf = new Map<string, string>();
   for (const p of profile.pieces) for (const id of p.members) pieceOf.set(id, p.id);
@@ -82,7 +75,7 @@ function designMembers(
       csi: v.csi,
       governingCombination: combos[v.combination].name,
       governingCheck: v.governing,
-      bracing: bracingText(mb.role, sized.bracedOf[k]),
+      bracing: bracingText(mb, sized.bracedOf[k], sized.lumberOf[k], input),
       ...(v.note && { note: v.note }),
     };
   });
@@ -226,7 +219,7 @@ export function designTruss(input: EngineDesignInput, options: DesignOptions = {
     warnings.push(sizingWarning(group, choice, combos, input.lumber[key]?.length === 1));
   }
 
-  const members = designMembers(profile, demands, combos, sized);
+  const members = designMembers(profile, demands, combos, sized, input);
   const pieces = designPieces(profile, sized);
   const reactions = designReactions(demands);
   const bearing = designBearings(profile, reactions, sized, input);
@@ -287,7 +280,10 @@ export function designTruss(input: EngineDesignInput, options: DesignOptions = {
         ]
       : []),
     ...loads.notes,
-    'Top chord braced out of plane by the sheathing, bottom chord by the ceiling; webs over their length unless braced.',
+    chordBracingNote(input),
+    options.amplifyPanelPointMoment
+      ? 'Panel-point moments are checked with the NDS 2018 §3.9.2 amplifier 1/(1 − fc/FcE1) as well (the stricter plant setting).'
+      : 'Panel-point moments are checked without the NDS 2018 §3.9.2 amplifier (common practice: the chord is held in plane at a panel point); span moments are amplified. A stricter plant setting amplifies both.',
     'Forces, moments and shears from a plane frame (direct stiffness method, each member with its E, A and I): chords continuous through the panel points within each piece of lumber and hinged at splices, at the peak and at the heel (continuous into an overhang), webs pinned at both ends, roof and ceiling loads as line loads on the chord members (live and snow on the horizontal projection, dead along the member). Members are checked with the larger of the span and panel-point moments.',
     `Frame analysed ${passes === 1 ? 'once' : `${passes} times`}, until the lumber it was analysed with is the lumber sizing chose (stiffness sets the force distribution).`,
     ctx.repetitive

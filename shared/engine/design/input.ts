@@ -37,4 +37,13 @@ export interface EngineDesignInput {
   /** Span / deflection limits, e.g. 240 for L/240. */
   deflection: { live: number; total: number };
   webBraces: string[];
+  /** Out-of-plane chord bracing; default: sheathing on the top chord, a ceiling on the bottom. */
+  bracing?: {
+    /** False when no ceiling braces the bottom chord. */
+    ceiling?: boolean;
+    /** Bottom-chord lateral bracing spacing without a ceiling, mm (default 10 ft). */
+    bottomChordBracing?: Mm;
+    /** Purlin spacing where no sheathing braces the top chord, mm. */
+    purlinSpacing?: Mm;
+  };
 }

@@ -15,6 +15,10 @@ export interface SizingContext {
   bracedWebs: ReadonlySet<string>;
   /** Per member index, the combinations that can govern (see `criticalCombinations`). */
   critical: readonly (readonly number[])[];
+  /** Out-of-plane unbraced lengths of the chords, mm (0 or absent: braced continuously). */
+  chordBracing?: { top: number; bottom: number };
+  /** Amplify the panel-point moment too (NDS 2018 §3.9.2 read literally; a plant setting). */
+  amplifyPanelPoint?: boolean;
 }
 
 /**
@@ -79,13 +83,21 @@ export interface GroupChoice extends SizingOption {
 
 /**
  * Effective lengths, mm (NDS 2018 3.7.1): chords buckle in plane over one panel and are braced
- * out of plane by sheathing (top) or the ceiling (bottom); a web buckles over its length both
- * ways unless a lateral brace at mid-length halves it out of plane.
+ * out of plane by sheathing (top) or the ceiling (bottom), or else over the purlin or bracing
+ * spacing of `chordBracing`; a web buckles over its length both ways unless a lateral brace at
+ * mid-length halves it out of plane.
  */
-export const effectiveLengths = (member: ProfileMember, braced: boolean) =>
+export const effectiveLengths = (
+  member: ProfileMember,
+  braced: boolean,
+  chordBracing?: { top: number; bottom: number },
+) =>
   member.role === 'web'
     ? { leStrong: member.length, leWeak: braced ? member.length / 2 : member.length }
-    : { leStrong: member.length, leWeak: 0 };
+    : {
+        leStrong: member.length,
+        leWeak: (member.role === 'topChord' ? chordBracing?.top : chordBracing?.bottom) ?? 0,
+      };
 
 /**
  * Checks member k with one option over its critical combinations (in `order` when given).
@@ -101,7 +113,7 @@ export function checkOverCombinations(
   perCombination?: Float64Array,
 ): MemberVerdict {
   const member = ctx.profile.members[k];
-  const { leStrong, leWeak } = effectiveLengths(member, option.braced);
+  const { leStrong, leWeak } = effectiveLengths(member, option.braced, ctx.chordBracing);
   const { axial, moment, spanMoment, supportMoment, shear, members: m } = ctx.demands;
   const repetitive = ctx.repetitive && member.role !== 'web';
   let worst: MemberVerdict = { csi: -1, combination: 0, governing: 'tension' };
@@ -120,6 +132,7 @@ export function checkOverCombinations(
       cd: ctx.cds[i],
       repetitive,
       shear: shear[i * m + k],
+      ...(ctx.amplifyPanelPoint && { amplifyPanelPoint: true }),
     });
     if (perCombination) perCombination[i] = result.csi;
     if (result.csi > worst.csi) {

@@ -20,6 +20,11 @@ export interface DesignOptions {
   defaultLumber?: LumberChoices;
   /** ASCE 7 edition of the load combinations when the snow input names none (default 7-16). */
   edition?: AsceEdition;
+  /**
+   * Check the chord's panel-point moment with the NDS 2018 §3.9.2 amplifier too (stricter than
+   * common practice, which checks it unamplified: the chord is held in plane there).
+   */
+  amplifyPanelPointMoment?: boolean;
 }
 
 /** One load combination as designed: name (e.g. "D + S") and its load-duration factor CD. */

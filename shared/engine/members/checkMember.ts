@@ -30,6 +30,11 @@ export interface MemberCheckInput {
   repetitive: boolean;
   /** Largest |V| along the member, N: checked as fv = 1.5V/A ≤ Fv′ (NDS 2018 §3.4.2). */
   shear?: number;
+  /**
+   * Amplify the panel-point (support) moment by 1/(1 − fc/FcE1) as well, as NDS 2018 §3.9.2
+   * reads literally (stricter than the common-practice check; a plant setting).
+   */
+  amplifyPanelPoint?: boolean;
 }
 
 /** The check that sets the CSI. */
@@ -137,9 +142,12 @@ export function checkMember(input: MemberCheckInput): MemberCheckResult {
       const split = input.supportMoment !== undefined;
       const fbSpan = split ? Math.abs(input.spanMoment ?? input.moment) / section.sx : fb;
       const cb = compressionBendingIndex(fa, column.fcPrime, fbSpan, dv.fb, column.fcEStrong);
-      const atPanelPoint = split
-        ? (fa / column.fcPrime) ** 2 + Math.abs(input.supportMoment!) / section.sx / dv.fb
-        : 0;
+      const fbSupport = split ? Math.abs(input.supportMoment!) / section.sx : 0;
+      const atPanelPoint = !split
+        ? 0
+        : input.amplifyPanelPoint
+          ? compressionBendingIndex(fa, column.fcPrime, fbSupport, dv.fb, column.fcEStrong).index
+          : (fa / column.fcPrime) ** 2 + fbSupport / dv.fb;
       ratios.compressionBending = Math.max(cb.index, atPanelPoint);
       if (cb.buckles)
         notes.push(
