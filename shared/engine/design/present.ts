@@ -1,6 +1,6 @@
 import { formatFeetInches, formatMm } from '../format';
 import { MM_PER_INCH, MPA_PER_PSI, N_PER_LBF } from '../units';
-import type { AdditionalChecks } from './additionalChecks';
+import type { AdditionalChecks, ShearCheck, UpliftCheck } from './additionalChecks';
 import type { DeflectionCheck, TrussDesign } from './types';
 
 /** Unit system of a presented design. */
@@ -131,18 +131,10 @@ export interface PresentedDesign {
   demoPlates: boolean;
   /** Chord shear, uplift, long-term, mid-panel and overhang-tip deflection, roller movement. */
   additional?: {
-    /** Per chord member: largest shear (force), fv and Fv′ (stress), the worst combination. */
-    shear: {
-      member: string;
-      shear: number;
-      fv: number;
-      fvPrime: number;
-      ratio: number;
-      combination: string;
-      pass: boolean;
-    }[];
-    /** Bearings with net uplift: the force a hold-down must carry. */
-    uplift: { joint: string; force: number; combination: string }[];
+    /** Per chord member, as `ShearCheck`: shear in force units, fv and Fv′ in stress units. */
+    shear: ShearCheck[];
+    /** Bearings with net uplift (force units): what a hold-down must carry. */
+    uplift: UpliftCheck[];
     longTermDeflection: PresentedDeflection;
     midPanel: { live?: PresentedDeflection; total: PresentedDeflection };
     overhangTip?: { live?: PresentedDeflection; total: PresentedDeflection };
