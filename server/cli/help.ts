@@ -32,10 +32,13 @@ design FILE.json — one roof truss as the sales desk describes it:
                "snow"?: { "pg", "ce"?, "ct"?, "is"?, "slippery"?, "edition"?: "7-16" | "7-22" } },
     "lumber"?: { "topChord"?, "bottomChord"?, "webs"? }   one id ("2x4 SPF-1/2") or a list,
     "deflection"?: { "live"? (240), "total"? (180) }       span / limit,
-    "webBraces"?: ["BK", ...] }                            webs braced at mid-length
+    "webBraces"?: ["BK", ...],                             webs braced at mid-length
+    "bracing"?: { "ceiling"? (true), "bottomChordBracing"? (120 in without a ceiling),
+                  "purlinSpacing"? (none: sheathed top chord) } }
   Output: the design in the request's units (see "units" in the output): members with lumber,
-  forces per combination and CSI, pieces, reactions, bearing, deflection, plates, warnings,
-  notes, cautions, engineVersion and "ok".
+  forces per combination and CSI, pieces, reactions, bearing, deflection, plates, additional
+  (chord shear, uplift hold-downs, long-term / mid-panel / overhang-tip deflection, scissor
+  roller movement), warnings, notes, cautions, engineVersion and "ok".
 
 cut FILE.json — a lumber plan: which stock boards to pull and what to cut from each, at least
   cost. Any one consistent unit for lengths (cost defaults to the stock's length):

@@ -159,6 +159,14 @@ const baseSchema = z.object({
     .optional(),
   maxStockLength: num('Longest stock length').optional(),
   pointLoads: z.array(pointLoadSchema).max(20, 'At most 20 point loads').optional(),
+  /** Chord bracing: no ceiling (then bracing spacing, in or mm), purlins instead of sheathing. */
+  bracing: z
+    .object({
+      ceiling: z.boolean({ error: 'Ceiling must be yes or no' }).optional(),
+      bottomChordBracing: num('Bottom-chord bracing spacing').optional(),
+      purlinSpacing: num('Purlin spacing').optional(),
+    })
+    .optional(),
 });
 
 type Base = z.infer<typeof baseSchema>;
@@ -195,6 +203,8 @@ const LIMITS = {
   areaLoad: lim('', [0, 200, '0', '200 psf'], [0, 9.6, '0', '9.6 kPa']),
   snowLoad: lim('Ground snow load', [0, 300, '0', '300 psf'], [0, 14.4, '0', '14.4 kPa']),
   deflection: lim('', same(60, 1200, 'L/60', 'L/1200')),
+  // Purlins and bottom-chord bracing 1–20 ft o.c. (common practice).
+  bracing: lim('', [12, 240, '12 in', '20 ft'], [300, 6100, '300 mm', '6.1 m']),
 } satisfies Record<string, Limit>;
 
 const LOAD_LABELS = {
@@ -246,6 +256,13 @@ const checkRanges = (v: Base, ctx: z.RefinementCtx): void => {
   within(['spacing'], v.spacing, LIMITS.spacing);
   within(['bearingWidth'], v.bearingWidth, LIMITS.bearingWidth);
   within(['maxStockLength'], v.maxStockLength, LIMITS.maxStockLength);
+  within(
+    ['bracing', 'bottomChordBracing'],
+    v.bracing?.bottomChordBracing,
+    LIMITS.bracing,
+    'Bottom-chord bracing spacing',
+  );
+  within(['bracing', 'purlinSpacing'], v.bracing?.purlinSpacing, LIMITS.bracing, 'Purlin spacing');
   if (v.profile === 'scissor') {
     if (v.bottomPitch === undefined) {
       ctx.addIssue({
@@ -450,6 +467,17 @@ export const toEngineInput = (input: DesignInput): EngineDesignInput => {
           ...(l.label && { label: l.label }),
         })),
       }),
+    ...(input.bracing && {
+      bracing: {
+        ...(input.bracing.ceiling !== undefined && { ceiling: input.bracing.ceiling }),
+        ...(input.bracing.bottomChordBracing !== undefined && {
+          bottomChordBracing: len(input.bracing.bottomChordBracing),
+        }),
+        ...(input.bracing.purlinSpacing !== undefined && {
+          purlinSpacing: len(input.bracing.purlinSpacing),
+        }),
+      },
+    }),
   };
 };
 

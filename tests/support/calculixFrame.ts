@@ -67,6 +67,8 @@ export interface CcxResult {
   reactions: Map<string, { rx: number; ry: number }>;
   /** Joint displacements (ux, uy), mm. */
   displacements: Map<string, [number, number]>;
+  /** Displacement (ux, uy) of each member's mid-length node, mm. */
+  midDisplacements: Map<string, [number, number]>;
 }
 
 interface Layout {
@@ -321,5 +323,8 @@ export function runCalculixFrame(work: string, name: string, frame: CcxFrame): C
   }
   const displacements = new Map<string, [number, number]>();
   for (const [id, n] of l.master) displacements.set(id, u.get(n)! as [number, number]);
-  return { members, reactions, displacements };
+  const midDisplacements = new Map<string, [number, number]>(
+    frame.members.map((m, k) => [m.id, u.get(l.nodesOf[k][SUBDIVISIONS / 2])! as [number, number]]),
+  );
+  return { members, reactions, displacements, midDisplacements };
 }

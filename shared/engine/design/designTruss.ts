@@ -6,6 +6,15 @@ import { generateProfile } from '../profiles';
 import type { TrussProfile } from '../profiles/types';
 import { KPA_PER_PSF } from '../units';
 import { ENGINE_VERSION } from '../version';
+import {
+  chordShearChecks,
+  KCR_SEASONED_DRY,
+  longTermDeflection,
+  upliftChecks,
+  upliftWarning,
+  type AdditionalChecks,
+} from './additionalChecks';
+import { bracingText, chordBracingNote } from './bracing';
 import { DESIGN_CAUTIONS } from './cautions';
 import { designLoads } from './combinedLoads';
 import { designDeflection } from './deflection';
@@ -14,6 +23,7 @@ import { analyseAndSize, type Sized } from './frameSizing';
 import { girderNotes } from './girder';
 import { designPlates } from './jointPlates';
 import { plyFastening } from './plyFastening';
+import { serviceDeflection } from './serviceDeflection';
 import type { GroupChoice, SizingGroup } from './sizing';
 import type {
   DesignBearing,
@@ -31,20 +41,12 @@ import type {
  */
 export const STANDARD_HEEL_MAX_MM = 8 * 25.4;
 
-const bracingText = (role: string, braced: boolean) =>
-  role === 'topChord'
-    ? 'Braced out of plane by the roof sheathing.'
-    : role === 'bottomChord'
-      ? 'Braced out of plane by the ceiling.'
-      : braced
-        ? 'Lateral brace at mid-length (permanent bracing per the drawings).'
-        : 'No lateral brace needed.';
-
 function designMembers(
   profile: TrussProfile,
   demands: MemberDemands,
   combos: DesignCombination[],
   sized: Sized,
+  input: EngineDesignInput,
 ): DesignMember[] {
   const pieceOf = new Map<string, string>();
   for (const p of profile.pieces) for (const id of p.members) pieceOf.set(id, p.id);
@@ -75,7 +77,7 @@ function designMembers(
       csi: v.csi,
       governingCombination: combos[v.combination].name,
       governingCheck: v.governing,
-      bracing: bracingText(mb.role, sized.bracedOf[k]),
+      bracing: bracingText(mb, sized.bracedOf[k], sized.lumberOf[k], input),
       ...(v.note && { note: v.note }),
     };
   });
@@ -219,7 +221,7 @@ export function designTruss(input: EngineDesignInput, options: DesignOptions = {
     warnings.push(sizingWarning(group, choice, combos, input.lumber[key]?.length === 1));
   }
 
-  const members = designMembers(profile, demands, combos, sized);
+  const members = designMembers(profile, demands, combos, sized, input);
   const pieces = designPieces(profile, sized);
   const reactions = designReactions(demands);
   const bearing = designBearings(profile, reactions, sized, input);
@@ -250,6 +252,37 @@ export function designTruss(input: EngineDesignInput, options: DesignOptions = {
     warnings.push(`Ply fastening fails: ${c.text}`);
   }
   for (const p of plates.filter((x) => !x.ok)) warnings.push(`Plate at ${p.joint}: ${p.message}.`);
+  const additional: AdditionalChecks = {
+    shear: chordShearChecks(profile, demands, combos, sized.lumberOf, input.plies),
+    uplift: upliftChecks(reactions, combos),
+    longTermDeflection: longTermDeflection(deflection, profile.params.span, input.deflection.total),
+    deflection: serviceDeflection(frame, profile, loads.cases, deflection, input.deflection),
+  };
+  const service = additional.deflection;
+  const serviceChecks = [
+    service.midPanel.live,
+    service.midPanel.total,
+    service.overhangTip?.live,
+    service.overhangTip?.total,
+  ].filter((d) => d !== undefined);
+  for (const d of serviceChecks.filter((x) => !x.pass)) {
+    const of = d.joint.includes('tip') ? 'twice the overhang' : 'span';
+    warnings.push(
+      `Deflection under ${d.load} at the ${d.joint}: ${of}/${Math.round(d.ratio)}, limit ${of}/${d.limit}.`,
+    );
+  }
+  for (const s of additional.shear.filter((x) => !x.pass)) {
+    warnings.push(
+      `Shear in ${s.member}: fv/Fv′ = ${s.ratio.toFixed(2)} under ${s.combination} (NDS 2018 §3.4.2).`,
+    );
+  }
+  warnings.push(...additional.uplift.map(upliftWarning));
+  const creep = additional.longTermDeflection;
+  if (!creep.pass) {
+    warnings.push(
+      `Long-term deflection under ${creep.load} (NDS 2018 §3.5.2): span/${Math.round(creep.ratio)} at ${creep.joint}, limit span/${creep.limit}.`,
+    );
+  }
 
   notes.push(
     `Load combinations: ASCE ${loads.edition} §2.4.1 allowable stress design, each with the CD of its shortest load.`,
@@ -259,7 +292,10 @@ export function designTruss(input: EngineDesignInput, options: DesignOptions = {
         ]
       : []),
     ...loads.notes,
-    'Top chord braced out of plane by the sheathing, bottom chord by the ceiling; webs over their length unless braced.',
+    chordBracingNote(input),
+    options.amplifyPanelPointMoment
+      ? 'Panel-point moments are checked with the NDS 2018 §3.9.2 amplifier 1/(1 − fc/FcE1) as well (the stricter plant setting).'
+      : 'Panel-point moments are checked without the NDS 2018 §3.9.2 amplifier (common practice: the chord is held in plane at a panel point); span moments are amplified. A stricter plant setting amplifies both.',
     'Forces, moments and shears from a plane frame (direct stiffness method, each member with its E, A and I): chords continuous through the panel points within each piece of lumber and hinged at splices, at the peak and at the heel (continuous into an overhang), webs pinned at both ends, roof and ceiling loads as line loads on the chord members (live and snow on the horizontal projection, dead along the member). Members are checked with the larger of the span and panel-point moments.',
     `Frame analysed ${passes === 1 ? 'once' : `${passes} times`}, until the lumber it was analysed with is the lumber sizing chose (stiffness sets the force distribution).`,
     ...(input.plies >= 2
@@ -270,6 +306,15 @@ export function designTruss(input: EngineDesignInput, options: DesignOptions = {
             : 'No repetitive member factor: spacing over 24 in. o.c.',
         ]),
     'Deflection of the bottom-chord panel points from the same frame (axial and bending strain; no joint slip or creep).',
+    "Deflection at mid-length of each bottom-chord panel: the panel points' drop plus the panel's own bending (Euler–Bernoulli, end moments from the frame); at an overhang tip: the heel's drop and rotation plus the cantilever's bending, against twice the overhang's run over the limit (IBC Table 1604.3 footnote for cantilevers, from memory).",
+    ...(service.rollerMovement
+      ? [
+          `Roller bearing ${service.rollerMovement.joint} moves ${(service.rollerMovement.movement / 25.4).toFixed(2)} in (${service.rollerMovement.movement.toFixed(1)} mm) ${service.rollerMovement.movement >= 0 ? 'outward' : 'inward'} relative to the pinned bearing under ${service.rollerMovement.load}: the bearing must let it slide that far, or the walls take the thrust.`,
+        ]
+      : []),
+    `Long-term deflection ${KCR_SEASONED_DRY}·Δ(dead) + Δ(live) against the total-load limit: creep factor Kcr = ${KCR_SEASONED_DRY} for seasoned lumber in dry service (NDS 2018 §3.5.2).`,
+    "Chord shear fv = 1.5V/A ≤ Fv′ = Fv·CD (NDS 2018 §3.4.2) with V the largest shear along each chord member in the frame, taken at the panel point (loads within d of it are not neglected); it counts in the member's CSI.",
+    'Plates: tooth holding with |F|/CD of each combination (tooth values take CD); the steel across heel and splice lines with the full |F| (steel capacities take no load-duration factor).',
     ...(catalog.demo ? [catalog.label] : []),
     ...girderNotes(input.plies),
     ...plyConnections.map((c) => c.text),
@@ -280,7 +325,10 @@ export function designTruss(input: EngineDesignInput, options: DesignOptions = {
     deflection.total.pass &&
     (deflection.live?.pass ?? true) &&
     plates.every((p) => p.ok) &&
-    plyConnections.every((c) => c.pass);
+    plyConnections.every((c) => c.pass) &&
+    additional.shear.every((x) => x.pass) &&
+    additional.longTermDeflection.pass &&
+    serviceChecks.every((d) => d.pass);
   return {
     joints: profile.joints,
     span: profile.params.span,
@@ -294,6 +342,7 @@ export function designTruss(input: EngineDesignInput, options: DesignOptions = {
     plates,
     demoPlates: catalog.demo,
     bearing,
+    additional,
     warnings,
     notes,
     cautions: [...DESIGN_CAUTIONS],

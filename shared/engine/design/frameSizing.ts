@@ -3,6 +3,7 @@ import type { TrussProfile } from '../profiles/types';
 import type { CombinedLoads } from './combinedLoads';
 import { memberDemands, type MemberDemands } from './demands';
 import { designFrame } from './frameModel';
+import { chordBracing } from './bracing';
 import type { EngineDesignInput } from './input';
 import { girderRepetitive } from './girder';
 import { lumberCandidates } from './lumberChoice';
@@ -151,6 +152,8 @@ export function analyseAndSize(
     repetitive,
     bracedWebs: new Set(input.webBraces),
     critical: profile.members.map((_, k) => criticalCombinations(demands, cds, k)),
+    chordBracing: chordBracing(input),
+    ...(options.amplifyPanelPointMoment && { amplifyPanelPoint: true }),
   });
   const analyse = (lumber: readonly string[]) => {
     const frame = designFrame(profile, lumber, input.plies);

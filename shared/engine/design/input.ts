@@ -40,4 +40,13 @@ export interface EngineDesignInput {
   webBraces: string[];
   /** Concentrated loads on the chords (hung trusses on a girder, equipment); none when absent. */
   pointLoads?: EnginePointLoad[];
+  /** Out-of-plane chord bracing; default: sheathing on the top chord, a ceiling on the bottom. */
+  bracing?: {
+    /** False when no ceiling braces the bottom chord. */
+    ceiling?: boolean;
+    /** Bottom-chord lateral bracing spacing without a ceiling, mm (default 10 ft). */
+    bottomChordBracing?: Mm;
+    /** Purlin spacing where no sheathing braces the top chord, mm. */
+    purlinSpacing?: Mm;
+  };
 }

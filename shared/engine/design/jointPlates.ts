@@ -33,9 +33,12 @@ export function jointKinds(profile: TrussProfile): Map<string, PlateJointKind> {
 }
 
 /**
- * Plates (both faces) at every joint. Each member's demand is its envelope max over the
+ * Plates (both faces) at every joint. Each member's tooth demand is its envelope max over the
  * combinations of |F|/CD with the plate's CD = 1: tooth holding scales with CD, so this is the
- * same check as one per combination, done in one call per joint. A joint with no fitting plate
+ * same check as one per combination, done in one call per joint. The steel (tension and shear
+ * across the joint line) takes the envelope max of the full |F|: steel capacities are not
+ * adjusted for load duration (common practice; ANSI/TPI 1-2014 Ch. 5 tests the steel without a
+ * duration factor, from memory). A joint with no fitting plate
  * is reported (`ok: false`, with the reason), never thrown.
  */
 export function designPlates(
@@ -48,11 +51,13 @@ export function designPlates(
 ): DesignPlate[] {
   const m = profile.members.length;
   const envelope = new Float64Array(m);
+  const steelEnvelope = new Float64Array(m);
   for (let i = 0; i < cds.length; i++) {
     for (let k = 0; k < m; k++) {
       // Each ply is plated on its own faces and carries 1/plies of the force.
-      const f = Math.abs(demands.axial[i * m + k]) / cds[i] / plies;
-      if (f > envelope[k]) envelope[k] = f;
+      const full = Math.abs(demands.axial[i * m + k]) / plies;
+      if (full / cds[i] > envelope[k]) envelope[k] = full / cds[i];
+      if (full > steelEnvelope[k]) steelEnvelope[k] = full;
     }
   }
   const depthOf = new Map<string, number>();
@@ -72,6 +77,7 @@ export function designPlates(
       direction: { x: dx, y: dy },
       depth: mm(depth(lumberOf[k])),
       force: newton(envelope[k]),
+      steelForce: newton(steelEnvelope[k]),
     });
     meeting.get(a.id)!.push(member(b.x - a.x, b.y - a.y));
     meeting.get(b.id)!.push(member(a.x - b.x, a.y - b.y));

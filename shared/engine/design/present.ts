@@ -1,5 +1,6 @@
 import { formatFeetInches, formatMm } from '../format';
 import { MM_PER_INCH, MPA_PER_PSI, N_PER_LBF } from '../units';
+import type { AdditionalChecks, ShearCheck, UpliftCheck } from './additionalChecks';
 import type { DeflectionCheck, TrussDesign } from './types';
 
 /** Unit system of a presented design. */
@@ -128,6 +129,18 @@ export interface PresentedDesign {
     message?: string;
   }[];
   demoPlates: boolean;
+  /** Chord shear, uplift, long-term, mid-panel and overhang-tip deflection, roller movement. */
+  additional?: {
+    /** Per chord member, as `ShearCheck`: shear in force units, fv and Fv′ in stress units. */
+    shear: ShearCheck[];
+    /** Bearings with net uplift (force units): what a hold-down must carry. */
+    uplift: UpliftCheck[];
+    longTermDeflection: PresentedDeflection;
+    midPanel: { live?: PresentedDeflection; total: PresentedDeflection };
+    overhangTip?: { live?: PresentedDeflection; total: PresentedDeflection };
+    /** Horizontal movement of a scissor's roller bearing (in or mm, + outward). */
+    rollerMovement?: { joint: string; load: string; movement: number };
+  };
   warnings: string[];
   notes: string[];
   cautions: string[];
@@ -272,6 +285,7 @@ export function presentDesign(design: TrussDesign, units: PresentUnits): Present
       ...(p.message && { message: p.message }),
     })),
     demoPlates: design.demoPlates,
+    additional: presentAdditional(design.additional, { force, stress, ratio, deflection, drop }),
     warnings: design.warnings,
     notes: design.notes,
     ...(design.plyConnections && {
@@ -283,5 +297,44 @@ export function presentDesign(design: TrussDesign, units: PresentUnits): Present
       })),
     }),
     cautions: design.cautions,
+  };
+}
+
+/** The unit converters of one presented design. */
+interface Converters {
+  force: (v: number) => number;
+  stress: (v: number) => number;
+  ratio: (v: number) => number;
+  deflection: (d: DeflectionCheck) => PresentedDeflection;
+  drop: (v: number) => number;
+}
+
+function presentAdditional(a: AdditionalChecks, c: Converters): PresentedDesign['additional'] {
+  const pair = (p: { live?: DeflectionCheck; total: DeflectionCheck }) => ({
+    ...(p.live && { live: c.deflection(p.live) }),
+    total: c.deflection(p.total),
+  });
+  const { midPanel, overhangTip, rollerMovement } = a.deflection;
+  return {
+    shear: a.shear.map((s) => ({
+      member: s.member,
+      shear: c.force(s.shear),
+      fv: c.stress(s.fv),
+      fvPrime: c.stress(s.fvPrime),
+      ratio: c.ratio(s.ratio),
+      combination: s.combination,
+      pass: s.pass,
+    })),
+    uplift: a.uplift.map((u) => ({
+      joint: u.joint,
+      force: c.force(u.force),
+      combination: u.combination,
+    })),
+    longTermDeflection: c.deflection(a.longTermDeflection),
+    midPanel: pair(midPanel),
+    ...(overhangTip && { overhangTip: pair(overhangTip) }),
+    ...(rollerMovement && {
+      rollerMovement: { ...rollerMovement, movement: c.drop(rollerMovement.movement) },
+    }),
   };
 }

@@ -15,11 +15,15 @@ export interface SizingContext {
   bracedWebs: ReadonlySet<string>;
   /** Per member index, the combinations that can govern (see `criticalCombinations`). */
   critical: readonly (readonly number[])[];
+  /** Out-of-plane unbraced lengths of the chords, mm (0 or absent: braced continuously). */
+  chordBracing?: { top: number; bottom: number };
+  /** Amplify the panel-point moment too (NDS 2018 §3.9.2 read literally; a plant setting). */
+  amplifyPanelPoint?: boolean;
 }
 
 /**
  * The combinations that can govern member k, whatever the lumber. Combination B cannot govern
- * when some A has CD_A ≤ CD_B, M_A ≥ M_B and an axial force of the same sign at least as large
+ * when some A has CD_A ≤ CD_B, M_A ≥ M_B, V_A ≥ V_B and an axial force of the same sign at least as large
  * (any axial force when N_B = 0): every NDS ratio of B is then at most one of A's (capacities
  * grow with CD; the (fb − ft)/Fb** term of B is at most B's own fb/Fb′ ≤ A's). Ties keep the
  * first. Checking only these keeps sizing fast without changing any result.
@@ -29,21 +33,23 @@ export function criticalCombinations(
   cds: readonly number[],
   k: number,
 ): number[] {
-  const { axial, moment, members: m } = demands;
+  const { axial, moment, shear, members: m } = demands;
   const n = cds.length;
   const keep: number[] = [];
   for (let b = 0; b < n; b++) {
     const nb = axial[b * m + k];
     const mb = moment[b * m + k];
+    const vb = shear[b * m + k];
     let dominated = false;
     for (let a = 0; a < n && !dominated; a++) {
       if (a === b) continue;
       const na = axial[a * m + k];
       const ma = moment[a * m + k];
+      const va = shear[a * m + k];
       const sameSide = nb === 0 || (nb > 0 ? na >= nb : na <= nb);
-      if (!(cds[a] <= cds[b] && ma >= mb && sameSide)) continue;
+      if (!(cds[a] <= cds[b] && ma >= mb && va >= vb && sameSide)) continue;
       // Equal demands and CD: keep the earlier combination only.
-      const equal = cds[a] === cds[b] && ma === mb && na === nb;
+      const equal = cds[a] === cds[b] && ma === mb && va === vb && na === nb;
       dominated = !equal || a < b;
     }
     if (!dominated) keep.push(b);
@@ -77,13 +83,21 @@ export interface GroupChoice extends SizingOption {
 
 /**
  * Effective lengths, mm (NDS 2018 3.7.1): chords buckle in plane over one panel and are braced
- * out of plane by sheathing (top) or the ceiling (bottom); a web buckles over its length both
- * ways unless a lateral brace at mid-length halves it out of plane.
+ * out of plane by sheathing (top) or the ceiling (bottom), or else over the purlin or bracing
+ * spacing of `chordBracing`; a web buckles over its length both ways unless a lateral brace at
+ * mid-length halves it out of plane.
  */
-export const effectiveLengths = (member: ProfileMember, braced: boolean) =>
+export const effectiveLengths = (
+  member: ProfileMember,
+  braced: boolean,
+  chordBracing?: { top: number; bottom: number },
+) =>
   member.role === 'web'
     ? { leStrong: member.length, leWeak: braced ? member.length / 2 : member.length }
-    : { leStrong: member.length, leWeak: 0 };
+    : {
+        leStrong: member.length,
+        leWeak: (member.role === 'topChord' ? chordBracing?.top : chordBracing?.bottom) ?? 0,
+      };
 
 /**
  * Checks member k with one option over its critical combinations (in `order` when given).
@@ -99,8 +113,8 @@ export function checkOverCombinations(
   perCombination?: Float64Array,
 ): MemberVerdict {
   const member = ctx.profile.members[k];
-  const { leStrong, leWeak } = effectiveLengths(member, option.braced);
-  const { axial, moment, spanMoment, supportMoment, members: m } = ctx.demands;
+  const { leStrong, leWeak } = effectiveLengths(member, option.braced, ctx.chordBracing);
+  const { axial, moment, spanMoment, supportMoment, shear, members: m } = ctx.demands;
   const repetitive = ctx.repetitive && member.role !== 'web';
   let worst: MemberVerdict = { csi: -1, combination: 0, governing: 'tension' };
   const combos = order ?? ctx.critical[k];
@@ -117,6 +131,8 @@ export function checkOverCombinations(
       leWeak,
       cd: ctx.cds[i],
       repetitive,
+      shear: shear[i * m + k],
+      ...(ctx.amplifyPanelPoint && { amplifyPanelPoint: true }),
     });
     if (perCombination) perCombination[i] = result.csi;
     if (result.csi > worst.csi) {

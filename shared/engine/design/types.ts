@@ -1,4 +1,5 @@
 import type { Joint } from '../analysis/types';
+import type { AdditionalChecks } from './additionalChecks';
 import type { AsceEdition } from '../loads/snow';
 import type { GoverningCheck } from '../members/checkMember';
 import type { JointPlateDesign, PlateCatalog, PlateJointKind } from '../plates/types';
@@ -20,6 +21,11 @@ export interface DesignOptions {
   defaultLumber?: LumberChoices;
   /** ASCE 7 edition of the load combinations when the snow input names none (default 7-16). */
   edition?: AsceEdition;
+  /**
+   * Check the chord's panel-point moment with the NDS 2018 §3.9.2 amplifier too (stricter than
+   * common practice, which checks it unamplified: the chord is held in plane there).
+   */
+  amplifyPanelPointMoment?: boolean;
 }
 
 /** One load combination as designed: name (e.g. "D + S") and its load-duration factor CD. */
@@ -164,6 +170,8 @@ export interface TrussDesign {
   /** True when the plates come from a demo catalog with invented values. */
   demoPlates: boolean;
   bearing: DesignBearing[];
+  /** Chord shear and the other checks of `AdditionalChecks`. */
+  additional: AdditionalChecks;
   /** Things that fail or need attention (failing checks, ignored input); empty when all is well. */
   warnings: string[];
   /** Assumptions made, in words. */

@@ -2,6 +2,7 @@ import { EngineError } from '../errors';
 import { designValues, parseLumberId, sectionProperties, dressedSize } from '../lumber';
 import { columnDesignValue, MAX_SLENDERNESS } from './columnStability';
 import { compressionBendingIndex, tensionBendingIndex } from './interaction';
+import { shearStress } from './shear';
 
 /** One member, one load combination (NDS 2018 ASD; N, mm, MPa). */
 export interface MemberCheckInput {
@@ -27,11 +28,18 @@ export interface MemberCheckInput {
   cd: number;
   /** Cr on Fb (trusses ≤ 24 in. o.c.). */
   repetitive: boolean;
+  /** Largest |V| along the member, N: checked as fv = 1.5V/A ≤ Fv′ (NDS 2018 §3.4.2). */
+  shear?: number;
+  /**
+   * Amplify the panel-point (support) moment by 1/(1 − fc/FcE1) as well, as NDS 2018 §3.9.2
+   * reads literally (stricter than the common-practice check; a plant setting).
+   */
+  amplifyPanelPoint?: boolean;
 }
 
 /** The check that sets the CSI. */
 export type GoverningCheck =
-  'tension' | 'compression' | 'bending' | 'tension+bending' | 'compression+bending';
+  'tension' | 'compression' | 'bending' | 'tension+bending' | 'compression+bending' | 'shear';
 
 /** Demand/capacity ratios; only those that apply are present. */
 export interface MemberRatios {
@@ -42,6 +50,8 @@ export interface MemberRatios {
   compressionBending?: number;
   /** max(le/d)/50 for a compression member (NDS 2018 3.7.1.4); above 1 is a failure. */
   slenderness?: number;
+  /** fv/Fv′ (NDS 2018 §3.4.2), when a shear is given. */
+  shear?: number;
 }
 
 /** Result of a member check. Stresses and design values in MPa. */
@@ -63,6 +73,7 @@ const GOVERNING_OF: Record<keyof MemberRatios, GoverningCheck> = {
   tensionBending: 'tension+bending',
   compressionBending: 'compression+bending',
   slenderness: 'compression',
+  shear: 'shear',
 };
 
 function validate(input: MemberCheckInput): void {
@@ -131,9 +142,12 @@ export function checkMember(input: MemberCheckInput): MemberCheckResult {
       const split = input.supportMoment !== undefined;
       const fbSpan = split ? Math.abs(input.spanMoment ?? input.moment) / section.sx : fb;
       const cb = compressionBendingIndex(fa, column.fcPrime, fbSpan, dv.fb, column.fcEStrong);
-      const atPanelPoint = split
-        ? (fa / column.fcPrime) ** 2 + Math.abs(input.supportMoment!) / section.sx / dv.fb
-        : 0;
+      const fbSupport = split ? Math.abs(input.supportMoment!) / section.sx : 0;
+      const atPanelPoint = !split
+        ? 0
+        : input.amplifyPanelPoint
+          ? compressionBendingIndex(fa, column.fcPrime, fbSupport, dv.fb, column.fcEStrong).index
+          : (fa / column.fcPrime) ** 2 + fbSupport / dv.fb;
       ratios.compressionBending = Math.max(cb.index, atPanelPoint);
       if (cb.buckles)
         notes.push(
@@ -143,6 +157,7 @@ export function checkMember(input: MemberCheckInput): MemberCheckResult {
   } else {
     ratios.bending = fb / dv.fb;
   }
+  if (input.shear) ratios.shear = shearStress(input.shear, section.area) / dv.fv;
 
   // The largest ratio governs; on a tie the later (combined) check is reported.
   let governing: GoverningCheck = axial >= 0 ? (moment > 0 ? 'bending' : 'tension') : 'compression';

@@ -2,3 +2,4 @@ export * from './columnStability';
 export * from './interaction';
 export * from './checkMember';
 export * from './bearing';
+export * from './shear';

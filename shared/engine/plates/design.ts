@@ -69,6 +69,9 @@ const check = (demand: number, capacity: number) => ({
   ratio: demand === 0 ? 0 : capacity > 0 ? demand / capacity : Infinity,
 });
 
+/** The force in the plate steel: the full |F| (steel takes no CD), else the tooth force. */
+const steelForceOf = (m: PlateJointMember) => Math.abs(m.steelForce ?? m.force);
+
 /**
  * Steel across the joint line. Splice: the chord force crosses the line square to the chord, in
  * tension over the plate's steel width there. Heel: the top-chord force crosses the line along
@@ -86,7 +89,7 @@ const steelChecks = (
   const lbfToN = N_PER_LBF / MM_PER_INCH; // (lbf/in) · mm → N
   if (kind === 'splice') {
     const chords = local
-      .map((m, i) => ({ m, id: members[i].id, f: Math.abs(members[i].force) }))
+      .map((m, i) => ({ m, id: members[i].id, f: steelForceOf(members[i]) }))
       .filter((c) => c.m.role !== 'web');
     if (chords.length === 0) return [];
     const top = chords.reduce((a, b) => (b.f > a.f ? b : a));
@@ -101,7 +104,7 @@ const steelChecks = (
     if (!bc || tcIndex < 0) return [];
     const line = bc.direction;
     const section = centreLineLength(line, halfLength, halfWidth);
-    const f = Math.abs(members[tcIndex].force);
+    const f = steelForceOf(members[tcIndex]);
     const d = local[tcIndex].direction;
     const along = Math.abs(d[0] * line[0] + d[1] * line[1]);
     const square = Math.sqrt(Math.max(0, 1 - along * along));

@@ -53,6 +53,12 @@ export interface PlateJointMember {
   /** Axial force, N: the envelope magnitude (sign is ignored). */
   force: Newton;
   /**
+   * The force the plate steel carries, N, when it differs from `force`: a design passes tooth
+   * demands as |F|/CD (tooth values scale with CD), but steel capacities take no load-duration
+   * factor, so the steel sees the full |F|. Default `force`.
+   */
+  steelForce?: Newton;
+  /**
    * Angle between this member's load on the plate and its grain, radians; 0 (the default) for
    * the axial force of a member, which runs along its grain.
    */

@@ -142,6 +142,80 @@ export function SupportsAndDeflection({ design }: { design: PresentedDesign }) {
   );
 }
 
+/**
+ * Chord shear, long-term, mid-panel and overhang-tip deflection, uplift hold-downs and a
+ * scissor's roller movement (absent on designs saved before these checks).
+ */
+export function AdditionalChecksCard({ design }: { design: PresentedDesign }) {
+  const a = design.additional;
+  if (!a) return null;
+  const unit = design.units.length;
+  const shear = a.shear.reduce<(typeof a.shear)[number] | undefined>(
+    (w, s) => (!w || s.ratio > w.ratio ? s : w),
+    undefined,
+  );
+  const rows: { label: string; d: PresentedDeflection }[] = [
+    { label: 'Long-term (creep)', d: a.longTermDeflection },
+    ...(a.midPanel.live ? [{ label: 'Mid-panel, live', d: a.midPanel.live }] : []),
+    { label: 'Mid-panel, total', d: a.midPanel.total },
+    ...(a.overhangTip?.live ? [{ label: 'Overhang tip, live', d: a.overhangTip.live }] : []),
+    ...(a.overhangTip ? [{ label: 'Overhang tip, total', d: a.overhangTip.total }] : []),
+  ];
+  return (
+    <Card title="More checks" flush>
+      <SimpleTable caption="More checks" headers={['Check', 'Largest', 'Ratio', 'Limit', '']}>
+        {shear ? (
+          <tr>
+            <td className={cell}>
+              Chord shear <span className="text-xs text-sand-600">({shear.combination})</span>
+            </td>
+            <td className={`${cell} whitespace-nowrap`}>
+              {formatPresentedForce(shear.shear, design.units.force)} in {shear.member}
+            </td>
+            <td className={cell}>{formatCsi(shear.ratio)}</td>
+            <td className={cell}>fv ≤ Fv′</td>
+            <td className={cell}>{passBadge(shear.pass)}</td>
+          </tr>
+        ) : null}
+        {rows.map((r) => (
+          <DeflectionRow key={r.label} label={r.label} d={r.d} unit={unit} />
+        ))}
+        {a.uplift.map((u) => (
+          <tr key={u.joint}>
+            <td className={cell}>
+              Uplift at {u.joint} <span className="text-xs text-sand-600">({u.combination})</span>
+            </td>
+            <td className={`${cell} whitespace-nowrap`}>
+              {formatPresentedForce(u.force, design.units.force)}
+            </td>
+            <td className={cell} colSpan={2}>
+              Hold-down rated for at least this force
+            </td>
+            <td className={cell}>
+              <Badge tone="warning">Hold-down</Badge>
+            </td>
+          </tr>
+        ))}
+        {a.rollerMovement ? (
+          <tr>
+            <td className={cell}>
+              Roller {a.rollerMovement.joint} slides{' '}
+              <span className="text-xs text-sand-600">({a.rollerMovement.load})</span>
+            </td>
+            <td className={`${cell} whitespace-nowrap`}>
+              {formatPresentedDeflection(Math.abs(a.rollerMovement.movement), unit)}{' '}
+              {a.rollerMovement.movement >= 0 ? 'outward' : 'inward'}
+            </td>
+            <td className={cell} colSpan={3}>
+              The bearing must allow it
+            </td>
+          </tr>
+        ) : null}
+      </SimpleTable>
+    </Card>
+  );
+}
+
 /** The plate chosen at each joint, with its worst ratio; demo catalogs say so. */
 export function PlatesTable({ design }: { design: PresentedDesign }) {
   return (
@@ -197,6 +271,7 @@ export const DesignResults = memo(function DesignResults({ design }: { design: P
         <MemberTable design={design} />
       </Card>
       <SupportsAndDeflection design={design} />
+      <AdditionalChecksCard design={design} />
       <PlatesTable design={design} />
       <PlyFastening design={design} />
       {design.notes.length > 0 ? (

@@ -24,3 +24,40 @@ export const lightFink = (extra: Partial<DesignInputDraft> = {}): DesignInputDra
   loads: TYPICAL_LOADS,
   ...extra,
 });
+
+/**
+ * A 16 ft 4/12 king-post truss at 24 in o.c., no heel, no overhang, every member 2x4 SPF
+ * No.1/No.2: each top chord is one piece hinged at heel and peak (a simple beam for hand checks).
+ */
+export const kingPost16 = (loads: DesignInputDraft['loads']): DesignInputDraft => ({
+  units: 'imperial',
+  profile: 'kingPost',
+  span: 16 * 12,
+  pitch: 4,
+  spacing: 24,
+  loads,
+  lumber: { topChord: '2x4 SPF-1/2', bottomChord: '2x4 SPF-1/2', webs: '2x4 SPF-1/2' },
+});
+
+/** A 28 ft 6/12 Fink with 24 in overhangs, 24 in o.c., "20/10/0/10" psf. */
+export const FINK_28_OVERHANGS: DesignInputDraft = {
+  units: 'imperial',
+  profile: 'fink',
+  span: 28 * 12,
+  pitch: 6,
+  overhang: 24,
+  spacing: 24,
+  loads: TYPICAL_LOADS,
+};
+
+/** A 32 ft 6/12 scissor truss, 3/12 bottom chords, 12 in overhangs, 24 in o.c., "20/10/0/10" psf. */
+export const SCISSOR_32: DesignInputDraft = {
+  units: 'imperial',
+  profile: 'scissor',
+  span: 32 * 12,
+  pitch: 6,
+  bottomPitch: 3,
+  overhang: 12,
+  spacing: 24,
+  loads: TYPICAL_LOADS,
+};

@@ -1,0 +1,76 @@
+import { describe, expect, it } from 'vitest';
+import { designTruss } from '../../../../shared/engine/design';
+import { engineInput, kingPost16 } from './support/inputs';
+
+const UPLIFT = { tcll: 20, tcdl: 10, bcll: 0, bcdl: 10, windUplift: 30 };
+const N_PER_LB = 4.4482216152605;
+
+/**
+ * A bottom chord that goes into compression under net uplift (0.6D + 0.6W) is checked with its
+ * real bracing. NDS 2018 §3.7.1: le/d ≤ 50 (§3.7.1.4); Cp = (1+α)/(2c) − √[((1+α)/(2c))² − α/c],
+ * α = FcE/Fc*, FcE = 0.822·Emin′/(le/d)², c = 0.8 (engineering.md §2). 2x4 SPF No.1/No.2:
+ * Fc = 1150 psi, Emin = 510,000 psi (Supplement Table 4A), CF(Fc) = 1.15, CD = 1.6 (wind);
+ * weak-axis d = 1.5 in (one ply).
+ */
+describe('bottom chord in compression under uplift, with and without a ceiling', () => {
+  const ceiling = designTruss(engineInput(kingPost16(UPLIFT)));
+  const i = ceiling.combinations.findIndex((c) => c.name === '0.6D + 0.6W');
+  const bc = (d: typeof ceiling) => d.members.find((m) => m.id === 'AB')!;
+
+  it('the bottom chord is in compression under 0.6D + 0.6W', () => {
+    expect(bc(ceiling).forces[i]).toBeLessThan(0);
+    expect(bc(ceiling).bracing).toBe('Braced out of plane by the ceiling.');
+  });
+
+  it('no ceiling, bracing at the default 10 ft: le/d = 120/1.5 = 80 > 50 fails (NDS 2018 §3.7.1.4)', () => {
+    const open = designTruss(engineInput({ ...kingPost16(UPLIFT), bracing: { ceiling: false } }));
+    expect(bc(open).csi).toBeGreaterThanOrEqual(80 / 50 - 1e-9);
+    expect(bc(open).note).toMatch(/le\/d = 80\.0 about the weak axis exceeds 50/);
+    expect(bc(open).bracing).toMatch(/No ceiling: lateral bracing at 10'-0" o\.c\./);
+    expect(open.ok).toBe(false);
+    expect(open.notes.join(' ')).toMatch(
+      /bottom chord \(no ceiling\) by lateral bracing at 10'-0"/,
+    );
+  });
+
+  it('no ceiling, bracing at 6 ft: le/d = 48, Cp = 0.0844, fc/Fc′ by hand', () => {
+    const open = designTruss(
+      engineInput({ ...kingPost16(UPLIFT), bracing: { ceiling: false, bottomChordBracing: 72 } }),
+    );
+    const fcE = (0.822 * 510000) / 48 ** 2; // 181.95 psi
+    const fcStar = 1150 * 1.6 * 1.15; // 2116 psi
+    const alpha = fcE / fcStar;
+    const h = (1 + alpha) / (2 * 0.8);
+    const cp = h - Math.sqrt(h * h - alpha / 0.8);
+    expect(cp).toBeWithin(0.0844, { abs: 1e-4 });
+    const c = -bc(open).forces[open.combinations.findIndex((x) => x.name === '0.6D + 0.6W')];
+    const ratio = c / N_PER_LB / 5.25 / (cp * fcStar);
+    // The CSI is the largest ratio, so at least this compression ratio.
+    expect(bc(open).csi).toBeGreaterThanOrEqual(ratio * (1 - 1e-6));
+    expect(open.members.find((m) => m.id === 'AB')!.note ?? '').not.toMatch(/exceeds 50/);
+  });
+});
+
+describe('named bracing', () => {
+  it('purlins instead of sheathing set the top chord le and say so', () => {
+    const d = designTruss(engineInput({ ...kingPost16(UPLIFT), bracing: { purlinSpacing: 24 } }));
+    expect(d.members.find((m) => m.id === 'AD')!.bracing).toBe(
+      `Braced out of plane by purlins at 2'-0" o.c.`,
+    );
+    expect(d.notes.join(' ')).toMatch(/Top chord braced out of plane by purlins at 2'-0" o\.c\./);
+  });
+
+  it('a braced web names a continuous lateral brace with diagonal bracing, or a T-brace, and where', () => {
+    const d = designTruss(
+      engineInput({ ...kingPost16({ tcll: 20, tcdl: 10, bcll: 0, bcdl: 10 }), webBraces: ['BD'] }),
+    );
+    const web = d.members.find((m) => m.id === 'BD')!;
+    // The king post is 8 ft × 4/12 = 32 in long: mid-length is 16 in = 1'-4" from B.
+    expect(web.braced).toBe(true);
+    expect(web.bracing).toMatch(
+      /^Continuous lateral brace \(2x4\) at mid-length, 1'-4" from joint B/,
+    );
+    expect(web.bracing).toMatch(/diagonal bracing/);
+    expect(web.bracing).toMatch(/or a 2x4 T-brace/);
+  });
+});
