@@ -1,6 +1,6 @@
 import { useQueryClient } from '@tanstack/react-query';
 import { useMemo, useState } from 'react';
-import { Link, useNavigate, useParams, useSearchParams } from 'react-router';
+import { Link, useParams, useSearchParams } from 'react-router';
 import { reviewSchema, type LineDetail, type ReviewQueueItem } from '../../../../shared/api/orders';
 import { isPresentedDesign } from '../../../components/truss/from-design';
 import { DesignResults } from '../../../components/truss/DesignResults';
@@ -21,6 +21,8 @@ import { reviewKeys } from '../../../lib/query-keys';
 import { useReviewLine } from '../api/get-line';
 import { useSubmitReview, type ReviewDecision } from '../api/submit-review';
 import { orderIdFromSearch } from '../review-link';
+import { DecisionOutcome, type Outcome } from './DecisionOutcome';
+import { SignOffSummary } from './SignOffSummary';
 
 /** The order of a line: from `?order=`, else from any cached page of the queue. */
 function useOrderIdOf(lineId: number): number | undefined {
@@ -58,8 +60,15 @@ function ReviewState({ line }: { line: LineDetail }) {
   return null;
 }
 
-function Decision({ line, orderId }: { line: LineDetail; orderId: number }) {
-  const navigate = useNavigate();
+function Decision({
+  line,
+  orderId,
+  onDecided,
+}: {
+  line: LineDetail;
+  orderId: number;
+  onDecided: (outcome: Outcome) => void;
+}) {
   const review = useSubmitReview(orderId, line.id);
   const [comment, setComment] = useState('');
   const [message, setMessage] = useState<string | null>(null);
@@ -75,7 +84,10 @@ function Decision({ line, orderId }: { line: LineDetail; orderId: number }) {
       return;
     }
     setMessage(null);
-    review.mutate(parsed.data, { onSuccess: () => void navigate('/reviews') });
+    review.mutate(parsed.data, {
+      onSuccess: (reviewed) =>
+        onDecided({ decision, mark: reviewed.mark, comment: parsed.data.comment }),
+    });
   };
   return (
     <Card title="Decision">
@@ -128,6 +140,8 @@ function Decision({ line, orderId }: { line: LineDetail; orderId: number }) {
 export function ReviewPage() {
   const lineId = Number(useParams().lineId);
   const orderId = useOrderIdOf(lineId);
+  const [outcome, setOutcome] = useState<(Outcome & { lineId: number }) | null>(null);
+  const decided = outcome?.lineId === lineId ? outcome : null;
   const line = useReviewLine(orderId, lineId);
   const result = line.data?.result;
   const drawing = useMemo(
@@ -192,7 +206,8 @@ export function ReviewPage() {
         actions={back}
       />
       <div className="flex flex-col gap-4">
-        <ReviewState line={l} />
+        {decided ? <DecisionOutcome outcome={decided} lineId={lineId} /> : <ReviewState line={l} />}
+        <SignOffSummary line={l} orderId={orderId} />
         <Card title="Drawing">
           {drawing && isPresentedDesign(result) ? (
             <TrussDrawing
@@ -206,7 +221,9 @@ export function ReviewPage() {
             </p>
           )}
         </Card>
-        {l.reviewState === 'approved' ? null : <Decision line={l} orderId={orderId} />}
+        {l.reviewState === 'approved' || decided ? null : (
+          <Decision line={l} orderId={orderId} onDecided={(o) => setOutcome({ ...o, lineId })} />
+        )}
         {isPresentedDesign(result) ? <DesignResults design={result} /> : null}
       </div>
     </>
