@@ -76,3 +76,9 @@ export const shopKeys = {
   orders: () => ['shop', 'orders'] as const,
   cutList: (orderId: number) => ['shop', 'cut-list', orderId] as const,
 };
+
+/** Query keys of the home pages' task lists (`GET /api/tasks`). */
+export const taskKeys = {
+  all: ['tasks'] as const,
+  mine: () => ['tasks', 'mine'] as const,
+};

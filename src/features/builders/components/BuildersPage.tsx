@@ -69,6 +69,7 @@ export function BuildersPage() {
         caption="Builder companies"
         columns={builderColumns}
         rowKey={(c) => c.id}
+        rowHref={(c) => `/builders/${c.id}`}
         sorting={{
           sort: query.sort,
           onSort: (sort) => update({ sort, page: 1 }),

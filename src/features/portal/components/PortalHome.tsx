@@ -1,6 +1,7 @@
 import { Link } from 'react-router';
 import { Badge, Card, EmptyState, PageHeader, QueryState } from '../../../components/ui';
 import { usePortalHome } from '../api/get-home';
+import { PortalJobs } from './PortalJobs';
 
 const money = (v: number, c: string) =>
   new Intl.NumberFormat('en-US', { style: 'currency', currency: c }).format(v);
@@ -85,6 +86,7 @@ export function PortalHome() {
                 </ul>
               )}
             </Card>
+            <PortalJobs />
             <Card title="Recent messages from the plant">
               {h.messages.length === 0 ? (
                 <EmptyState title="No messages yet" />

@@ -84,6 +84,7 @@ export function QuoteRevisions({ quotes, canCreate }: QuoteRevisionsProps) {
       data={quotes}
       caption="Quote revisions"
       rowKey={(q) => q.id}
+      rowHref={(q) => quotePath(q.orderId, q.number)}
       empty={
         <EmptyState title="No quotes for this order yet">
           {canCreate
