@@ -90,7 +90,7 @@ function Decision({
     });
   };
   return (
-    <Card title="Decision">
+    <Card title="Decision" className="print:hidden">
       <div className="flex flex-col gap-3">
         {!line.designOk ? (
           <Alert tone="danger">
