@@ -1,10 +1,11 @@
 import { DESIGN_CAUTIONS, type PresentedDesign } from '../../shared/engine/design';
+import { depositSentence, validUntilText } from '../../shared/api/terms';
 import { Customer, Job, Order, OrderLine, Plant, Quote, type User } from '../models';
 import { AppError, conflict } from '../errors';
 import { greetingName, quoteRecipients, type QuoteRecipient } from '../../shared/api/quoteSend';
 import { queueMail } from '../services/mailQueue';
 import { priceQuote, summarizeDesign, type QuoteSnapshot } from '../services/pricing';
-import { formatMoney, formatDate } from '../services/quotePdf/format';
+import { formatMoney } from '../services/quotePdf/format';
 import { orderEvent } from './audit';
 import { stableJson } from './lineMarks';
 import { pricesFor } from './priceBook';
@@ -151,10 +152,7 @@ export async function createQuote(actor: User, order: Order) {
 export function quoteMessage(quote: Quote, greet?: string) {
   const s = quote.snapshot as unknown as QuoteSnapshot;
   const money = (v: number) => formatMoney(v, s.currency);
-  const deposit =
-    s.price.depositDue > 0
-      ? `Deposit due on acceptance: ${money(s.price.depositDue)}.`
-      : 'No deposit is due: your account terms apply.';
+  const deposit = depositSentence(s.price.depositDue, money);
   return {
     subject: `Truss quote ${quote.reference} — ${s.job.name}`,
     text: [
@@ -164,7 +162,7 @@ export function quoteMessage(quote: Quote, greet?: string) {
       '',
       `Total: ${money(s.price.total)} (including delivery and tax).`,
       deposit,
-      `Valid until: ${formatDate(quote.validUntil)}.`,
+      `${validUntilText(quote.validUntil)}.`,
       '',
       s.cautions.join(' '),
       '',

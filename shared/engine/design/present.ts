@@ -271,7 +271,15 @@ export function presentDesign(design: TrussDesign, units: PresentUnits): Present
     })),
     demoPlates: design.demoPlates,
     warnings: design.warnings,
-    notes: design.notes,
+    notes: imperial ? design.notes.map(psfFirst) : design.notes,
     cautions: design.cautions,
   };
+}
+
+/**
+ * An imperial reader's note leads with psf: "0.958 kPa (20.0 psf)" reads "20.0 psf (0.958 kPa)".
+ * The engine writes its notes in SI with the psf beside; only the order changes.
+ */
+export function psfFirst(note: string): string {
+  return note.replace(/(-?\d+(?:\.\d+)?) kPa \((-?\d+(?:\.\d+)?) psf\)/g, '$2 psf ($1 kPa)');
 }
