@@ -84,10 +84,13 @@ function Decision({
       return;
     }
     setMessage(null);
-    review.mutate(parsed.data, {
-      onSuccess: (reviewed) =>
+    // A promise, not a mutate callback: the approved line unmounts this card before callbacks run.
+    review
+      .mutateAsync(parsed.data)
+      .then((reviewed) =>
         onDecided({ decision, mark: reviewed.mark, comment: parsed.data.comment }),
-    });
+      )
+      .catch(() => undefined); // the error shows through review.error
   };
   return (
     <Card title="Decision" className="print:hidden">
