@@ -20,6 +20,7 @@ import { plantRouter } from './routes/plant/router';
 import { designDrawingRouter } from './routes/designDrawing/router';
 import { ordersRouter } from './routes/orders/router';
 import { reviewsRouter } from './routes/reviews/router';
+import { tasksRouter } from './routes/tasks/router';
 import { designsRouter } from './routes/designs/router';
 import { devRouter } from './routes/dev/router';
 import { priceBookRouter } from './routes/priceBook/router';
@@ -197,6 +198,7 @@ export function createApp(opts: AppOptions) {
   app.use('/api/portal', portalHomeRouter());
   app.use('/api/price-book', priceBookRouter());
   app.use('/api/reviews', reviewsRouter());
+  app.use('/api/tasks', tasksRouter());
   app.use('/api/designs', designsRouter());
   app.use('/api/stock', stockRouter());
   app.use('/api/shop/orders', lumberPlanRouter());

@@ -1,4 +1,5 @@
 import type { Transaction } from 'sequelize';
+import { TERMS } from '../../shared/api/terms';
 import type { AcceptQuoteInput, RequestChangesInput } from '../../shared/api/portal';
 import { Customer, Order, Quote, QuoteAcceptance, User } from '../models';
 import { badRequest, conflict } from '../errors';
@@ -135,7 +136,7 @@ async function acceptanceMail(
     `Total: ${money(Number(quote.total))}`,
     deposit > 0
       ? `Deposit due now: ${money(deposit)} — pay it from your Spanwise portal.`
-      : 'No deposit is due: account terms apply.',
+      : `${TERMS.noDeposit}: account terms apply.`,
     '',
     s.cautions.join(' '),
     '',

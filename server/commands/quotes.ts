@@ -1,9 +1,11 @@
 import { DESIGN_CAUTIONS, type PresentedDesign } from '../../shared/engine/design';
+import { depositSentence, validUntilText } from '../../shared/api/terms';
 import { Customer, Job, Order, OrderLine, Plant, Quote, type User } from '../models';
 import { AppError, conflict } from '../errors';
+import { greetingName, quoteRecipients, type QuoteRecipient } from '../../shared/api/quoteSend';
 import { queueMail } from '../services/mailQueue';
 import { priceQuote, summarizeDesign, type QuoteSnapshot } from '../services/pricing';
-import { formatMoney, formatDate } from '../services/quotePdf/format';
+import { formatMoney } from '../services/quotePdf/format';
 import { orderEvent } from './audit';
 import { stableJson } from './lineMarks';
 import { pricesFor } from './priceBook';
@@ -152,23 +154,20 @@ export async function createQuote(actor: User, order: Order) {
 }
 
 /** The plain-text e-mail of a quote: reference, total, deposit, validity and the cautions. */
-export function quoteMessage(quote: Quote) {
+export function quoteMessage(quote: Quote, greet?: string) {
   const s = quote.snapshot as unknown as QuoteSnapshot;
   const money = (v: number) => formatMoney(v, s.currency);
-  const deposit =
-    s.price.depositDue > 0
-      ? `Deposit due on acceptance: ${money(s.price.depositDue)}.`
-      : 'No deposit is due: your account terms apply.';
+  const deposit = depositSentence(s.price.depositDue, money);
   return {
     subject: `Truss quote ${quote.reference} — ${s.job.name}`,
     text: [
-      `Hello ${s.customer.name},`,
+      `Hello ${greet ?? s.customer.name},`,
       '',
       `Please find attached our quote ${quote.reference} for ${s.job.name} (${s.job.address}).`,
       '',
       `Total: ${money(s.price.total)} (including delivery and tax).`,
       deposit,
-      `Valid until: ${formatDate(quote.validUntil)}.`,
+      `${validUntilText(quote.validUntil)}.`,
       '',
       s.cautions.join(' '),
       '',
@@ -178,11 +177,30 @@ export function quoteMessage(quote: Quote) {
 }
 
 /**
- * Send the latest revision to the builder company: the e-mail (the PDF attached when it goes out)
- * joins the mail queue in the same transaction that records when and to whom it went (the only
- * columns a quote lets change).
+ * The people a quote goes to: the chosen addresses, each one of the builder's contacts with an
+ * address or the company's own; none chosen means the company's address.
  */
-export async function sendQuote(actor: User, order: Order, quote: Quote) {
+function chooseRecipients(customer: Customer, chosen: string[] | undefined): QuoteRecipient[] {
+  const known = quoteRecipients(customer);
+  if (chosen === undefined) return [{ email: customer.email, name: customer.name, company: true }];
+  const byEmail = new Map(known.map((r) => [r.email, r]));
+  const unknown = chosen.filter((e) => !byEmail.has(e));
+  if (unknown.length)
+    throw new AppError(
+      400,
+      'unknown_recipient',
+      `${unknown.join(', ')} is not an address of ${customer.name}; add the contact to the builder first.`,
+      { recipients: 'Choose from the builder’s contacts' },
+    );
+  return [...new Set(chosen)].map((e) => byEmail.get(e)!);
+}
+
+/**
+ * Send the latest revision to the builder's chosen people: one e-mail each, greeting them by
+ * name (the PDF attached when it goes out), joins the mail queue in the same transaction that
+ * records when and to whom it went (the only columns a quote lets change).
+ */
+export async function sendQuote(actor: User, order: Order, quote: Quote, chosen?: string[]) {
   const latest = (await Quote.max('number', { where: { orderId: order.id } })) as number;
   if (quote.number !== latest)
     throw conflict(
@@ -191,19 +209,22 @@ export async function sendQuote(actor: User, order: Order, quote: Quote) {
   if (order.status === 'draft')
     throw conflict('The order changed after this quote; make a new revision before sending it.');
   const customer = await Customer.findByPk(order.customerId);
-  const to = customer!.email;
-  const message = quoteMessage(quote);
+  const recipients = chooseRecipients(customer!, chosen);
+  const to = recipients.map((r) => r.email).join(', ');
   return Order.sequelize!.transaction(async (t) => {
-    await quote.update({ sentAt: new Date(), sentTo: to }, { transaction: t });
-    await queueMail(t, {
-      plantId: order.plantId,
-      orderId: order.id,
-      kind: 'quote',
-      to,
-      subject: message.subject,
-      body: message.text,
-      attachment: { type: 'quote', quoteId: quote.id },
-    });
+    await quote.update({ sentAt: new Date(), sentTo: to.slice(0, 200) }, { transaction: t });
+    for (const r of recipients) {
+      const message = quoteMessage(quote, greetingName(r));
+      await queueMail(t, {
+        plantId: order.plantId,
+        orderId: order.id,
+        kind: 'quote',
+        to: r.email,
+        subject: message.subject,
+        body: message.text,
+        attachment: { type: 'quote', quoteId: quote.id },
+      });
+    }
     await orderEvent(t, actor, order, 'quote.sent', {
       quoteId: quote.id,
       number: quote.number,

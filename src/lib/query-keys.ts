@@ -84,3 +84,9 @@ export const shopKeys = {
 export const orderMailKeys = {
   list: (orderId: number) => [...orderKeys.detail(orderId), 'mail'] as const,
 };
+
+/** Query keys of the home pages' task lists (`GET /api/tasks`). */
+export const taskKeys = {
+  all: ['tasks'] as const,
+  mine: () => ['tasks', 'mine'] as const,
+};

@@ -105,7 +105,10 @@ describe('the sales desk, in a browser', () => {
     await page.getByRole('link', { name: 'T1' }).first().click();
     await page.screenshot({ path: `${SCREENSHOTS}/review-T1.png`, fullPage: true });
     await page.getByRole('button', { name: 'Approve' }).click();
-    await page.waitForURL(/\/reviews(\?.*)?$/);
+    // The page says what happened and, with nothing else waiting, leads back to the queue.
+    await expect
+      .poll(() => page.getByTestId('decision-outcome').textContent())
+      .toMatch(/Approved T1.*Nothing else is waiting for review/);
     const orderId = Number(state.orderUrl!.split('/').pop());
     await expect
       .poll(async () => (await OrderLine.findOne({ where: { orderId, mark: 'T1' } }))?.reviewState)

@@ -1,6 +1,8 @@
 import { Router, type RequestHandler } from 'express';
 import { Op } from 'sequelize';
 import { requireUser } from '../../middleware/auth';
+import { validate } from '../../middleware/validate';
+import { sendQuoteSchema, type SendQuoteInput } from '../../../shared/api/quoteSend';
 import { authorize } from '../../policies/predicates';
 import { quotePolicy } from '../../policies/quote';
 import { createQuote, sendQuote } from '../../commands/quotes';
@@ -114,11 +116,13 @@ export function quotesRouter() {
   router.post(
     '/:number/send',
     requireUser,
+    validate(sendQuoteSchema),
     order,
     loadQuote,
     authorize(quotePolicy.send),
     handle(async (req, res) => {
-      const sent = await sendQuote(req.user!, res.locals.record, res.locals.quote);
+      const body = res.locals.body as SendQuoteInput;
+      const sent = await sendQuote(req.user!, res.locals.record, res.locals.quote, body.recipients);
       res.json(presentQuote(sent, false, req.user!));
     }),
   );

@@ -1,4 +1,5 @@
 import type { QuoteSnapshot } from '../pricing';
+import { TERMS, depositDueLabel, formatTermsDate } from '../../../shared/api/terms';
 import { formatDate, formatMoney, formatNumber, formatPercent } from './format';
 import { contentBottom, paragraph, paragraphHeight, rule, textAt } from './text';
 import { COLORS, MARGIN, type Doc } from './theme';
@@ -30,7 +31,7 @@ export function header(doc: Doc, s: QuoteSnapshot, meta: PrintMeta) {
   textAt(doc, meta.reference, right.x, y + 12, { ...right, font: 'bold', size: 15 });
   const dates: [string, string][] = [
     ['Date', formatDate(meta.createdAt)],
-    ['Valid until', formatDate(meta.validUntil)],
+    [TERMS.validUntil, formatTermsDate(meta.validUntil)],
   ];
   let ry = y + 33;
   for (const [label, value] of dates) {
@@ -56,8 +57,8 @@ export function parties(doc: Doc, s: QuoteSnapshot, y: number) {
   const col = (w - 32) / 3;
   const terms =
     s.customer.terms === 'deposit'
-      ? `Deposit terms: ${formatPercent(s.price.depositRate)} on acceptance`
-      : 'Account terms';
+      ? `${TERMS.deposit}: ${formatPercent(s.price.depositRate)} ${TERMS.onAcceptance}`
+      : TERMS.account;
   const blocks: [string, string, string[]][] = [
     ['Prepared for', s.customer.name, [s.customer.email]],
     ['Job', s.job.name, [s.job.address]],
@@ -163,8 +164,7 @@ export function totals(doc: Doc, s: QuoteSnapshot, y: number) {
   row(`Tax (${formatPercent(p.taxRate)})`, money(p.tax), y + 30);
   rule(doc, y + 46, COLORS.text, x, x + w);
   row('Total', money(p.total), y + 53, true);
-  const depositLabel =
-    p.depositRate > 0 ? `Deposit due (${formatPercent(p.depositRate)})` : 'Deposit due (account)';
+  const depositLabel = depositDueLabel(p.depositRate, formatPercent);
   doc.rect(x, y + 73, w, 20).fill(COLORS.band);
   textAt(doc, depositLabel, x + PAD, y + 79, { font: 'medium', size: 9, color: COLORS.accent });
   textAt(doc, money(p.depositDue), x, y + 79, {

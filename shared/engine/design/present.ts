@@ -287,7 +287,7 @@ export function presentDesign(design: TrussDesign, units: PresentUnits): Present
     demoPlates: design.demoPlates,
     additional: presentAdditional(design.additional, { force, stress, ratio, deflection, drop }),
     warnings: design.warnings,
-    notes: design.notes,
+    notes: imperial ? design.notes.map(psfFirst) : design.notes,
     ...(design.plyConnections && {
       plyConnections: design.plyConnections.map((c) => ({
         chord: c.chord,
@@ -337,4 +337,12 @@ function presentAdditional(a: AdditionalChecks, c: Converters): PresentedDesign[
       rollerMovement: { ...rollerMovement, movement: c.drop(rollerMovement.movement) },
     }),
   };
+}
+
+/**
+ * An imperial reader's note leads with psf: "0.958 kPa (20.0 psf)" reads "20.0 psf (0.958 kPa)".
+ * The engine writes its notes in SI with the psf beside; only the order changes.
+ */
+export function psfFirst(note: string): string {
+  return note.replace(/(-?\d+(?:\.\d+)?) kPa \((-?\d+(?:\.\d+)?) psf\)/g, '$2 psf ($1 kPa)');
 }

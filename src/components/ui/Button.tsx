@@ -43,6 +43,8 @@ export function Button({
       className={clsx(
         'inline-flex items-center justify-center gap-2 rounded font-medium whitespace-nowrap transition-colors',
         'disabled:cursor-not-allowed disabled:opacity-60',
+        // Controls do not print: a printed page is a document.
+        'print:hidden',
         size === 'sm' ? 'h-8 px-3 text-sm' : 'h-10 px-4 text-base',
         variants[variant],
         focusRing,

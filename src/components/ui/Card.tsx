@@ -18,7 +18,7 @@ export function Card({ title, actions, children, className, flush }: CardProps) 
       {title || actions ? (
         <header className="flex items-center justify-between gap-3 border-b border-sand-200 px-4 py-3">
           {title ? <h2 className="text-lg font-semibold text-sand-900">{title}</h2> : <span />}
-          {actions}
+          {actions ? <div className="print:hidden">{actions}</div> : null}
         </header>
       ) : null}
       <div className={flush ? undefined : 'p-4'}>{children}</div>

@@ -15,7 +15,7 @@ export function PageHeader({ title, description, actions }: PageHeaderProps) {
         <h1 className="text-2xl font-semibold tracking-tight text-sand-900">{title}</h1>
         {description ? <p className="mt-1 text-base text-sand-600">{description}</p> : null}
       </div>
-      {actions ? <div className="flex items-center gap-2">{actions}</div> : null}
+      {actions ? <div className="flex items-center gap-2 print:hidden">{actions}</div> : null}
     </div>
   );
 }

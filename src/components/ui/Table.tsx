@@ -10,7 +10,9 @@ import {
   type SortingState,
   type Updater,
 } from '@tanstack/react-table';
-import type { ReactNode } from 'react';
+import clsx from 'clsx';
+import type { MouseEvent, ReactNode } from 'react';
+import { useNavigate } from 'react-router';
 import { sortingFromParam, sortParamFromSorting } from '../../lib/sorting';
 import { SortHeader } from './SortHeader';
 
@@ -53,7 +55,17 @@ export interface DataTableProps<T extends RowData> {
   sorting?: TableSorting;
   /** Extra classes of each body row (e.g. to mark a locked line). */
   rowClassName?: (row: T) => string | undefined;
+  /**
+   * Where a row leads: the whole row opens it on click (and highlights on hover). Keep a link to
+   * the same place in one cell, so the keyboard reaches it.
+   */
+  rowHref?: (row: T) => string;
 }
+
+/** A click on a row's own link, button or field, or a text selection, is not a row click. */
+const isOwnClick = (e: MouseEvent<HTMLTableRowElement>) =>
+  (e.target as HTMLElement).closest('a,button,input,select,textarea,label,summary') !== null ||
+  (window.getSelection()?.toString() ?? '') !== '';
 
 const NO_SORTING: SortingState = [];
 
@@ -66,7 +78,9 @@ export function DataTable<T extends RowData>({
   rowKey,
   sorting,
   rowClassName,
+  rowHref,
 }: DataTableProps<T>) {
+  const navigate = useNavigate();
   const sortingState = sorting ? sortingFromParam(sorting.sort) : NO_SORTING;
   const table = useTable({
     features: coreTableFeatures,
@@ -129,15 +143,33 @@ export function DataTable<T extends RowData>({
           ))}
         </thead>
         <tbody className="divide-y divide-sand-200">
-          {rows.map((row) => (
-            <tr key={row.id} className={rowClassName?.(row.original) ?? 'hover:bg-sand-50'}>
-              {row.getAllCells().map((cell) => (
-                <td key={cell.id} className="px-4 py-2.5 align-middle text-sand-800">
-                  <table.FlexRender cell={cell} />
-                </td>
-              ))}
-            </tr>
-          ))}
+          {rows.map((row) => {
+            const href = rowHref?.(row.original);
+            return (
+              <tr
+                key={row.id}
+                className={clsx(
+                  rowClassName?.(row.original),
+                  href && 'cursor-pointer hover:bg-sand-50 focus-within:bg-sand-50',
+                )}
+                onClick={
+                  href
+                    ? (e) => {
+                        if (isOwnClick(e)) return;
+                        if (e.metaKey || e.ctrlKey) window.open(href, '_blank');
+                        else void navigate(href);
+                      }
+                    : undefined
+                }
+              >
+                {row.getAllCells().map((cell) => (
+                  <td key={cell.id} className="px-4 py-2.5 align-middle text-sand-800">
+                    <table.FlexRender cell={cell} />
+                  </td>
+                ))}
+              </tr>
+            );
+          })}
         </tbody>
       </table>
       {rows.length === 0 ? (empty ?? <p className="px-4 py-6 text-sand-600">No rows.</p>) : null}

@@ -50,6 +50,8 @@ export function LinkButton({
       className={clsx(
         'inline-flex items-center justify-center gap-2 rounded font-medium whitespace-nowrap transition-colors',
         size === 'sm' ? 'h-8 px-3 text-sm' : 'h-10 px-4 text-base',
+        // A button-like link is a control: paper has no use for it.
+        'print:hidden',
         variant === 'primary'
           ? 'bg-timber-600 text-white hover:bg-timber-700 active:bg-timber-800'
           : 'border border-sand-300 bg-white text-sand-900 hover:bg-sand-100',

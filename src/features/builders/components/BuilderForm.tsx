@@ -1,4 +1,5 @@
 import { zodResolver } from '@hookform/resolvers/zod';
+import { TERMS } from '../../../../shared/api/terms';
 import { useEffect } from 'react';
 import { useForm, type Path } from 'react-hook-form';
 import type { z } from 'zod';
@@ -130,8 +131,8 @@ export function BuilderForm({
         {text('phone', 'Phone', { type: 'tel', autoComplete: 'tel' })}
         <Field label="Terms" htmlFor="builder-terms" error={errors.terms?.message}>
           <Select id="builder-terms" invalid={!!errors.terms} {...register('terms')}>
-            <option value="account">Credit account</option>
-            <option value="deposit">Deposit required</option>
+            <option value="account">{TERMS.account}</option>
+            <option value="deposit">{TERMS.deposit}</option>
           </Select>
         </Field>
         {text('city', 'City')}

@@ -1,4 +1,5 @@
 import { useState } from 'react';
+import { TERMS } from '../../../../shared/api/terms';
 import { useNavigate } from 'react-router';
 import {
   Button,
@@ -59,8 +60,8 @@ export function BuildersPage() {
           value={query.terms ?? ''}
           onChange={(terms) => update({ filters: { terms } })}
         >
-          <option value="account">Credit account</option>
-          <option value="deposit">Deposit required</option>
+          <option value="account">{TERMS.account}</option>
+          <option value="deposit">{TERMS.deposit}</option>
         </FilterSelect>
       </ListToolbar>
       <PagedTable
@@ -69,6 +70,7 @@ export function BuildersPage() {
         caption="Builder companies"
         columns={builderColumns}
         rowKey={(c) => c.id}
+        rowHref={(c) => `/builders/${c.id}`}
         sorting={{
           sort: query.sort,
           onSort: (sort) => update({ sort, page: 1 }),

@@ -1,4 +1,5 @@
 import type { CustomerSummary } from '../../../../shared/api/list';
+import { TERMS } from '../../../../shared/api/terms';
 import { Badge, TextLink, tableColumnHelper } from '../../../components/ui';
 
 const column = tableColumnHelper<CustomerSummary>();
@@ -9,9 +10,9 @@ export const BUILDER_SORT_COLUMNS = ['name', 'city', 'terms'] as const;
 /** Badge of a builder's payment terms. */
 export function TermsBadge({ terms }: { terms: CustomerSummary['terms'] }) {
   return terms === 'account' ? (
-    <Badge tone="success">Credit account</Badge>
+    <Badge tone="success">{TERMS.account}</Badge>
   ) : (
-    <Badge tone="warning">Deposit required</Badge>
+    <Badge tone="warning">{TERMS.deposit}</Badge>
   );
 }
 

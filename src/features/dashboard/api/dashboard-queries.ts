@@ -2,14 +2,7 @@ import { useQuery } from '@tanstack/react-query';
 import { customerSummarySchema, jobSummarySchema, pageOf } from '../../../../shared/api/list';
 import { userSchema } from '../../../../shared/api/users';
 import { pagedListQueryOptions } from '../../../lib/paged-list';
-import {
-  customerKeys,
-  jobKeys,
-  reviewKeys,
-  userKeys,
-  type ListParams,
-} from '../../../lib/query-keys';
-import { reviewQueueItemSchema } from '../../../../shared/api/orders';
+import { customerKeys, jobKeys, userKeys, type ListParams } from '../../../lib/query-keys';
 
 /** Newest jobs first; the landing pages show a short list. */
 export const RECENT_JOBS: ListParams = { page: 1, pageSize: 8, sort: '-createdAt' };
@@ -51,18 +44,3 @@ export const useRecentJobs = () => useQuery(recentJobsQueryOptions());
 export const useBuilders = () => useQuery(buildersQueryOptions());
 /** Users of the plant (admin). */
 export const useUsersOverview = () => useQuery(usersOverviewQueryOptions());
-
-/** The oldest few designs waiting for the reviewer (passing designs first, as the queue sorts). */
-export const WAITING_REVIEWS: ListParams = { page: 1, pageSize: 6 };
-
-/** Query options of the design reviewer's landing page: what waits in the review queue. */
-export const waitingReviewsQueryOptions = () =>
-  pagedListQueryOptions({
-    queryKey: reviewKeys.list(WAITING_REVIEWS),
-    path: '/api/reviews',
-    schema: pageOf(reviewQueueItemSchema),
-    params: WAITING_REVIEWS,
-  });
-
-/** Lines waiting for review (engineer). */
-export const useWaitingReviews = () => useQuery(waitingReviewsQueryOptions());

@@ -6,6 +6,7 @@ import { useBuilders, useRecentJobs, useUsersOverview } from '../api/dashboard-q
 import { CautionsPanel } from './CautionsPanel';
 import { TextLink } from './links';
 import { RecentJobs } from './RecentJobs';
+import { TaskLists } from './TaskLists';
 import { StatTile } from './StatTile';
 
 /** Admin landing page: "Plant overview". */
@@ -25,6 +26,7 @@ export function AdminOverview({ me }: { me: Me }) {
         actions={<TextLink to="/users">Manage users</TextLink>}
       />
       <div className="grid gap-6">
+        <TaskLists />
         <CautionsPanel />
         {users.error ? (
           <ErrorMessage

@@ -14,7 +14,7 @@ const column = tableColumnHelper<CustomerSummary>();
 const columns = column.columns([
   column.accessor('name', {
     header: 'Builder company',
-    cell: (info) => <span className="font-medium text-sand-900">{info.getValue()}</span>,
+    cell: (info) => <TextLink to={`/builders/${info.row.original.id}`}>{info.getValue()}</TextLink>,
   }),
   column.accessor('city', { header: 'City', cell: (info) => info.getValue() ?? '—' }),
   column.accessor('terms', {
@@ -48,6 +48,7 @@ export function BuildersCard() {
             columns={columns}
             data={page.items}
             rowKey={(c) => c.id}
+            rowHref={(c) => `/builders/${c.id}`}
             empty={<EmptyState title="No builder companies yet" />}
           />
         )}

@@ -3,7 +3,7 @@ import { PageHeader } from '../../../components/ui';
 import { CautionsPanel } from './CautionsPanel';
 import { TextLink } from './links';
 import { RecentJobs } from './RecentJobs';
-import { WaitingReviews } from './WaitingReviews';
+import { TaskLists } from './TaskLists';
 
 /** Engineer landing page: "Design review". */
 export function DesignReview({ me }: { me: Me }) {
@@ -14,8 +14,8 @@ export function DesignReview({ me }: { me: Me }) {
         description={`Truss designs of ${me.plant.name} waiting for review.`}
       />
       <div className="grid gap-6">
+        <TaskLists />
         <CautionsPanel />
-        <WaitingReviews />
         <RecentJobs
           actions={<TextLink to="/jobs">All jobs</TextLink>}
           emptyText="No jobs have been entered yet."

@@ -1,6 +1,13 @@
 import type { ReactNode } from 'react';
 import type { JobSummary } from '../../../../shared/api/list';
-import { Card, DataTable, EmptyState, QueryState, tableColumnHelper } from '../../../components/ui';
+import {
+  Card,
+  DataTable,
+  EmptyState,
+  QueryState,
+  TextLink,
+  tableColumnHelper,
+} from '../../../components/ui';
 import { formatDate } from '../../../lib/format';
 import { useRecentJobs } from '../api/dashboard-queries';
 
@@ -8,7 +15,7 @@ const column = tableColumnHelper<JobSummary>();
 const staffColumns = column.columns([
   column.accessor('name', {
     header: 'Job',
-    cell: (info) => <span className="font-medium text-sand-900">{info.getValue()}</span>,
+    cell: (info) => <TextLink to={`/jobs/${info.row.original.id}`}>{info.getValue()}</TextLink>,
   }),
   column.accessor('customerName', { header: 'Builder' }),
   column.accessor('address', { header: 'Site' }),
@@ -50,6 +57,7 @@ export function RecentJobs({
             columns={forBuilder ? builderColumns : staffColumns}
             data={page.items}
             rowKey={(j) => j.id}
+            rowHref={forBuilder ? undefined : (j) => `/jobs/${j.id}`}
             empty={<EmptyState title="No jobs yet">{emptyText}</EmptyState>}
           />
         )}

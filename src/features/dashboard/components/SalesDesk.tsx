@@ -4,6 +4,7 @@ import { BuildersCard } from './BuildersCard';
 import { CautionsPanel } from './CautionsPanel';
 import { TextLink } from './links';
 import { RecentJobs } from './RecentJobs';
+import { TaskLists } from './TaskLists';
 
 /** Sales landing page: "Sales desk". */
 export function SalesDesk({ me }: { me: Me }) {
@@ -14,6 +15,7 @@ export function SalesDesk({ me }: { me: Me }) {
         description={`Jobs and builder companies of ${me.plant.name}.`}
       />
       <div className="grid gap-6">
+        <TaskLists />
         <CautionsPanel />
         <RecentJobs
           actions={<TextLink to="/jobs">All jobs</TextLink>}

@@ -3,6 +3,7 @@ import { Card, PageHeader } from '../../../components/ui';
 import { CautionsPanel } from './CautionsPanel';
 import { TextLink } from './links';
 import { RecentJobs } from './RecentJobs';
+import { TaskLists } from './TaskLists';
 
 /** Foreman landing page: "Shop floor". */
 export function ShopFloor({ me }: { me: Me }) {
@@ -13,6 +14,7 @@ export function ShopFloor({ me }: { me: Me }) {
         description={`Work coming to the tables at ${me.plant.name}.`}
       />
       <div className="grid gap-6">
+        <TaskLists />
         <CautionsPanel />
         <Card title="Cut lists" actions={<TextLink to="/shop">Ready for the shop</TextLink>}>
           <p className="text-base text-sand-700">

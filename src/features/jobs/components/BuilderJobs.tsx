@@ -51,6 +51,7 @@ export function BuilderJobs({ customerId, customerName, canEdit }: BuilderJobsPr
               columns={builderJobColumns}
               data={result.items}
               rowKey={(job) => job.id}
+              rowHref={(job) => `/jobs/${job.id}`}
               empty={
                 <EmptyState title="No jobs yet">
                   {canEdit ? 'Add the builder’s first site with “New job”.' : null}

@@ -36,6 +36,7 @@ export function JobsPage({ role }: { role: Role }) {
         caption="Jobs"
         columns={jobColumns}
         rowKey={(job) => job.id}
+        rowHref={(job) => `/jobs/${job.id}`}
         sorting={{
           sort: query.sort,
           onSort: (sort) => update({ sort, page: 1 }),

@@ -223,7 +223,7 @@ export function OrderPage({
     <QueryState query={order} what="the order">
       {(o) => (
         <>
-          <p className="mb-2 text-sm">
+          <p className="mb-2 text-sm print:hidden">
             <TextLink to="/orders">← Orders</TextLink>
           </p>
           <Header
@@ -239,7 +239,7 @@ export function OrderPage({
             </Alert>
           ) : null}
           {!canEdit ? (
-            <Alert className="mb-4">
+            <Alert className="mb-4 print:hidden">
               You can follow this order here; the plant’s sales desk makes the changes.
             </Alert>
           ) : null}

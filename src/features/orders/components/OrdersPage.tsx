@@ -62,6 +62,7 @@ export function OrdersPage({ role }: { role: Role }) {
         caption="Orders"
         columns={orderColumns}
         rowKey={(order) => order.id}
+        rowHref={(order) => `/orders/${order.id}`}
         sorting={{
           sort: query.sort,
           onSort: (sort) => update({ sort, page: 1 }),

@@ -1,5 +1,6 @@
 import { designDrawingPath } from '../../../lib/design-drawing';
 import { useNavigate } from 'react-router';
+import { TERMS, validUntilText } from '../../../../shared/api/terms';
 import { TrussDrawing } from '../../../components/truss/TrussDrawing';
 import { Alert, Card, PageHeader, QueryState } from '../../../components/ui';
 import { useBuilderQuote } from '../api/get-quote';
@@ -37,7 +38,7 @@ export function BuilderQuotePage({ orderId, number }: { orderId: number; number:
                 <Alert tone="warning">{q.refusal}</Alert>
               ) : (
                 <Alert tone="info">
-                  Valid until {q.validUntil} ({left === 1 ? '1 day' : `${left} days`} left).
+                  {validUntilText(q.validUntil)} ({left === 1 ? '1 day' : `${left} days`} left).
                 </Alert>
               )}
               <Card title="Trusses">
@@ -74,9 +75,11 @@ export function BuilderQuotePage({ orderId, number }: { orderId: number; number:
                   <dd className="text-right font-semibold" data-testid="quote-total">
                     {money(q.total, q.currency)}
                   </dd>
-                  <dt>Deposit due on acceptance</dt>
+                  <dt>
+                    {TERMS.depositDue} {TERMS.onAcceptance}
+                  </dt>
                   <dd className="text-right">
-                    {q.depositDue > 0 ? money(q.depositDue, q.currency) : 'None (account terms)'}
+                    {q.depositDue > 0 ? money(q.depositDue, q.currency) : TERMS.noDeposit}
                   </dd>
                 </dl>
                 <p className="mt-3">

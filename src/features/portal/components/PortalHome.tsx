@@ -1,6 +1,8 @@
 import { Link } from 'react-router';
+import { validUntilText } from '../../../../shared/api/terms';
 import { Badge, Card, EmptyState, PageHeader, QueryState } from '../../../components/ui';
 import { usePortalHome } from '../api/get-home';
+import { PortalJobs } from './PortalJobs';
 
 const money = (v: number, c: string) =>
   new Intl.NumberFormat('en-US', { style: 'currency', currency: c }).format(v);
@@ -35,7 +37,7 @@ export function PortalHome() {
                         {q.job} — {q.reference}
                       </Link>
                       <p className="text-sm text-sand-700">
-                        {money(q.total, q.currency)} · valid until {q.validUntil} (
+                        {money(q.total, q.currency)} · {validUntilText(q.validUntil)} (
                         {q.daysLeft === 1 ? '1 day' : `${q.daysLeft} days`} left)
                       </p>
                     </li>
@@ -85,6 +87,7 @@ export function PortalHome() {
                 </ul>
               )}
             </Card>
+            <PortalJobs />
             <Card title="Recent messages from the plant">
               {h.messages.length === 0 ? (
                 <EmptyState title="No messages yet" />

@@ -1,5 +1,6 @@
 import { Alert, Badge, Card, QueryState, TextLink, focusRing } from '../../../components/ui';
-import { formatDate, formatDateTime } from '../../../lib/format';
+import { TERMS, formatTermsDate, validUntilText } from '../../../../shared/api/terms';
+import { formatDateTime } from '../../../lib/format';
 import { useOrder } from '../api/get-order';
 import { useQuote } from '../api/get-quote';
 import { quotePdfPath } from '../api/quote-pdf';
@@ -43,7 +44,7 @@ export function QuotePage({ orderId, number, canSend }: QuotePageProps) {
               <p className="mt-1 text-base text-sand-600">
                 {order.data ? `${order.data.customer.name} · ${order.data.job.name} · ` : ''}
                 created {formatDateTime(q.createdAt)}
-                {q.createdBy ? ` by ${q.createdBy}` : ''} · valid until {formatDate(q.validUntil)}
+                {q.createdBy ? ` by ${q.createdBy}` : ''} · {validUntilText(q.validUntil)}
               </p>
             </div>
             <div className="flex flex-wrap items-center gap-2">
@@ -81,7 +82,7 @@ export function QuotePage({ orderId, number, canSend }: QuotePageProps) {
             <div className="grid gap-4 lg:grid-cols-2">
               <Card title="Terms">
                 <p className="mb-3 text-base text-sand-900">
-                  Valid until <strong>{formatDate(q.validUntil)}</strong>.
+                  {TERMS.validUntil} <strong>{formatTermsDate(q.validUntil)}</strong>.
                 </p>
                 <p className="text-base whitespace-pre-line text-sand-700">
                   {q.terms || 'No further terms.'}

@@ -1,4 +1,5 @@
 import type { Quote } from '../../../../shared/api/pricing';
+import { TERMS, formatTermsDate } from '../../../../shared/api/terms';
 import {
   Badge,
   DataTable,
@@ -7,7 +8,7 @@ import {
   tableColumnHelper,
   type TableColumn,
 } from '../../../components/ui';
-import { formatDate, formatDateTime } from '../../../lib/format';
+import { formatDateTime } from '../../../lib/format';
 import { formatMoney } from '../money';
 import { quotePath } from '../quote-path';
 
@@ -47,12 +48,12 @@ const REVISION_COLUMNS: TableColumn<Quote>[] = [
     cell: (info) => right(formatMoney(info.getValue(), info.row.original.currency)),
   }),
   column.accessor('depositDue', {
-    header: () => right('Deposit due'),
+    header: () => right(TERMS.depositDue),
     cell: (info) => right(formatMoney(info.getValue(), info.row.original.currency)),
   }),
   column.accessor('validUntil', {
-    header: 'Valid until',
-    cell: (info) => <span className="whitespace-nowrap">{formatDate(info.getValue())}</span>,
+    header: TERMS.validUntil,
+    cell: (info) => <span className="whitespace-nowrap">{formatTermsDate(info.getValue())}</span>,
   }),
   column.accessor('sentAt', {
     header: 'Sent',
@@ -84,6 +85,7 @@ export function QuoteRevisions({ quotes, canCreate }: QuoteRevisionsProps) {
       data={quotes}
       caption="Quote revisions"
       rowKey={(q) => q.id}
+      rowHref={(q) => quotePath(q.orderId, q.number)}
       empty={
         <EmptyState title="No quotes for this order yet">
           {canCreate

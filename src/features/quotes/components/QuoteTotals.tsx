@@ -1,4 +1,5 @@
 import clsx from 'clsx';
+import { depositDueLabel } from '../../../../shared/api/terms';
 import type { Quote } from '../../../../shared/api/pricing';
 import { formatMoney, formatPercent } from '../money';
 
@@ -11,7 +12,7 @@ export function QuoteTotals({ quote }: { quote: Quote }) {
     { label: 'Tax', value: money(quote.tax) },
     { label: 'Total', value: money(quote.total), strong: true },
     {
-      label: `Deposit due (${formatPercent(quote.depositRate)})`,
+      label: depositDueLabel(quote.depositRate, formatPercent),
       value: money(quote.depositDue),
       strong: true,
     },

@@ -1,7 +1,7 @@
 import { useMutation, useQueryClient } from '@tanstack/react-query';
 import { lineSchema, type LineDetail } from '../../../../shared/api/orders';
 import { api } from '../../../lib/api-client';
-import { orderKeys, reviewKeys } from '../../../lib/query-keys';
+import { orderKeys, reviewKeys, taskKeys } from '../../../lib/query-keys';
 
 /** Body of the review command: the decision on the design version the reviewer looked at. */
 export interface ReviewDecision {
@@ -28,6 +28,7 @@ export function useSubmitReview(orderId: number, lineId: number) {
       queryClient.setQueryData(orderKeys.line(orderId, lineId), line);
       await Promise.all([
         queryClient.invalidateQueries({ queryKey: reviewKeys.all }),
+        queryClient.invalidateQueries({ queryKey: taskKeys.all }),
         queryClient.invalidateQueries({ queryKey: orderKeys.detail(orderId), exact: true }),
       ]);
     },

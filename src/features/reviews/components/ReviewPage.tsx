@@ -1,6 +1,6 @@
 import { useQueryClient } from '@tanstack/react-query';
 import { useMemo, useState } from 'react';
-import { Link, useNavigate, useParams, useSearchParams } from 'react-router';
+import { Link, useParams, useSearchParams } from 'react-router';
 import { reviewSchema, type LineDetail, type ReviewQueueItem } from '../../../../shared/api/orders';
 import { isPresentedDesign } from '../../../components/truss/from-design';
 import { DesignResults } from '../../../components/truss/DesignResults';
@@ -22,6 +22,8 @@ import { useReviewLine } from '../api/get-line';
 import { useSubmitReview, type ReviewDecision } from '../api/submit-review';
 import { orderIdFromSearch } from '../review-link';
 import { designDrawingPath } from '../../../lib/design-drawing';
+import { DecisionOutcome, type Outcome } from './DecisionOutcome';
+import { SignOffSummary } from './SignOffSummary';
 
 /** The order of a line: from `?order=`, else from any cached page of the queue. */
 function useOrderIdOf(lineId: number): number | undefined {
@@ -59,8 +61,15 @@ function ReviewState({ line }: { line: LineDetail }) {
   return null;
 }
 
-function Decision({ line, orderId }: { line: LineDetail; orderId: number }) {
-  const navigate = useNavigate();
+function Decision({
+  line,
+  orderId,
+  onDecided,
+}: {
+  line: LineDetail;
+  orderId: number;
+  onDecided: (outcome: Outcome) => void;
+}) {
   const review = useSubmitReview(orderId, line.id);
   const [comment, setComment] = useState('');
   const [message, setMessage] = useState<string | null>(null);
@@ -76,10 +85,16 @@ function Decision({ line, orderId }: { line: LineDetail; orderId: number }) {
       return;
     }
     setMessage(null);
-    review.mutate(parsed.data, { onSuccess: () => void navigate('/reviews') });
+    // A promise, not a mutate callback: the approved line unmounts this card before callbacks run.
+    review
+      .mutateAsync(parsed.data)
+      .then((reviewed) =>
+        onDecided({ decision, mark: reviewed.mark, comment: parsed.data.comment }),
+      )
+      .catch(() => undefined); // the error shows through review.error
   };
   return (
-    <Card title="Decision">
+    <Card title="Decision" className="print:hidden">
       <div className="flex flex-col gap-3">
         {!line.designOk ? (
           <Alert tone="danger">
@@ -129,6 +144,8 @@ function Decision({ line, orderId }: { line: LineDetail; orderId: number }) {
 export function ReviewPage() {
   const lineId = Number(useParams().lineId);
   const orderId = useOrderIdOf(lineId);
+  const [outcome, setOutcome] = useState<(Outcome & { lineId: number }) | null>(null);
+  const decided = outcome?.lineId === lineId ? outcome : null;
   const line = useReviewLine(orderId, lineId);
   const result = line.data?.result;
   const drawing = useMemo(
@@ -193,7 +210,8 @@ export function ReviewPage() {
         actions={back}
       />
       <div className="flex flex-col gap-4">
-        <ReviewState line={l} />
+        {decided ? <DecisionOutcome outcome={decided} lineId={lineId} /> : <ReviewState line={l} />}
+        <SignOffSummary line={l} orderId={orderId} />
         <Card title="Drawing">
           {drawing && isPresentedDesign(result) ? (
             <TrussDrawing
@@ -217,7 +235,9 @@ export function ReviewPage() {
             </a>
           </p>
         </Card>
-        {l.reviewState === 'approved' ? null : <Decision line={l} orderId={orderId} />}
+        {l.reviewState === 'approved' || decided ? null : (
+          <Decision line={l} orderId={orderId} onDecided={(o) => setOutcome({ ...o, lineId })} />
+        )}
         {isPresentedDesign(result) ? <DesignResults design={result} /> : null}
       </div>
     </>

@@ -64,6 +64,7 @@ export function ReviewQueuePage() {
         caption="Designs waiting for review"
         columns={columns}
         rowKey={(item) => item.id}
+        rowHref={(item) => reviewPath(item.id, item.order.id)}
         empty={<EmptyState title="Nothing to review" />}
         onPage={(p) => update({ page: p })}
       />

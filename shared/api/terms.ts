@@ -1,0 +1,45 @@
+/**
+ * The words of payment and quote terms: one set for the desk, the builder's portal, the quote PDF
+ * and the e-mails, so a builder reads the same term wherever they meet it.
+ */
+export const TERMS = {
+  /** A builder company that pays on its credit account (no deposit). */
+  account: 'Credit account',
+  /** A builder company that pays a deposit on acceptance. */
+  deposit: 'Deposit required',
+  validUntil: 'Valid until',
+  depositDue: 'Deposit due',
+  onAcceptance: 'on acceptance',
+  noDeposit: 'No deposit (credit account)',
+  balanceOnDelivery: 'Balance due on delivery',
+} as const;
+
+/** The name of a builder's payment terms. */
+export const termsName = (terms: 'account' | 'deposit'): string =>
+  terms === 'account' ? TERMS.account : TERMS.deposit;
+
+/** The label of a quote's deposit line: "Deposit due (30 %)" or "No deposit (credit account)". */
+export const depositDueLabel = (rate: number, percent: (rate: number) => string): string =>
+  rate > 0 ? `${TERMS.depositDue} (${percent(rate)})` : TERMS.noDeposit;
+
+/** A quote's deposit as a sentence (e-mail, portal). */
+export const depositSentence = (amount: number, money: (v: number) => string): string =>
+  amount > 0
+    ? `${TERMS.depositDue} ${TERMS.onAcceptance}: ${money(amount)}.`
+    : `${TERMS.noDeposit}: your account terms apply.`;
+
+/** A calendar date of the terms ("January 1, 2027"), read as a UTC day, never shifted by zone. */
+export function formatTermsDate(isoDate: string): string {
+  const d = new Date(`${isoDate.slice(0, 10)}T00:00:00Z`);
+  if (Number.isNaN(d.getTime())) return isoDate;
+  return d.toLocaleDateString('en-US', {
+    year: 'numeric',
+    month: 'long',
+    day: 'numeric',
+    timeZone: 'UTC',
+  });
+}
+
+/** "Valid until January 1, 2027". */
+export const validUntilText = (isoDate: string): string =>
+  `${TERMS.validUntil} ${formatTermsDate(isoDate)}`;
