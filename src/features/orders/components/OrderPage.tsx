@@ -243,7 +243,7 @@ export function OrderPage({
               You can follow this order here; the plant’s sales desk makes the changes.
             </Alert>
           ) : null}
-          <div className="grid gap-6">
+          <div className="grid grid-cols-[minmax(0,1fr)] gap-6">
             {production?.(o)}
             <Lines
               order={o}
