@@ -42,7 +42,7 @@ beforeAll(async () => {
     design: {
       units: 'imperial',
       profile: 'kingPost',
-      span: 168,
+      span: 120,
       pitch: 6,
       overhang: 12,
       loads: { tcll: 20, tcdl: 10, bcll: 0, bcdl: 10 },

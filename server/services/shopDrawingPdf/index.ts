@@ -1,5 +1,5 @@
 import type { ShopDrawing } from '../../../shared/api/shopPaper';
-import { paragraph, textAt } from '../quotePdf/text';
+import { paragraph, paragraphHeight, textAt } from '../quotePdf/text';
 import { COLORS, type Doc } from '../quotePdf/theme';
 import { pageFooters, shopPdf } from '../shopPaper/pdf';
 import { cautionsBox, pdfTable } from '../shopPaper/pdfTable';
@@ -45,7 +45,17 @@ function sheet(doc: Doc, s: ShopDrawing) {
     align: 'right',
   });
 
-  const drawH = (doc.page.height - 2 * M) * 0.42;
+  const braces = s.bracing.map((b) => b.replace(/\.$/, ''));
+  const notes = [
+    braces.length ? `Bracing: ${braces.join('; ')}.` : 'No web bracing required by the design.',
+    `Dimensions to panel points, centre lines, feet-inches-sixteenths; piece lengths long point as cut. Engine ${s.engineVersion}.`,
+    s.demoPlates ? 'Demo plate catalog: its design values are invented.' : '',
+    ...(s.plyFastening ?? []).map((t) => `Ply fastening: ${t}`),
+  ].filter(Boolean);
+  const text = notes.join('  ');
+  // Long bracing and ply-fastening notes take room from the drawing, so the sheet stays one page.
+  const extra = Math.max(0, paragraphHeight(doc, text, w, { size: 7.5 }) - 22);
+  const drawH = (doc.page.height - 2 * M) * 0.42 - extra;
   doc
     .rect(M, M + 32, w, drawH)
     .lineWidth(0.5)
@@ -97,15 +107,8 @@ function sheet(doc: Doc, s: ShopDrawing) {
   );
   // Cautions under the plate list, beside the (usually longer) piece list.
   const yCautions = cautionsBox(doc, s.cautions, x2, yPlates, w - left - 14, bottom, newPage, true);
-  const braces = s.bracing.map((b) => b.replace(/\.$/, ''));
-  const notes = [
-    braces.length ? `Bracing: ${braces.join('; ')}.` : 'No web bracing required by the design.',
-    `Dimensions to panel points, centre lines, feet-inches-sixteenths; piece lengths long point as cut. Engine ${s.engineVersion}.`,
-    s.demoPlates ? 'Demo plate catalog: its design values are invented.' : '',
-    ...(s.plyFastening ?? []).map((t) => `Ply fastening: ${t}`),
-  ].filter(Boolean);
   const y = doc.bufferedPageRange().count > 1 ? yCautions : Math.max(yPieces, yCautions);
-  paragraph(doc, notes.join('  '), M, y, w, { size: 7.5 });
+  paragraph(doc, text, M, y, w, { size: 7.5 });
 }
 
 /** Shop drawings as a PDF: one US Letter landscape sheet per truss mark. */

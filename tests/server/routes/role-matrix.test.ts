@@ -368,7 +368,8 @@ describe('role matrix: the builder, every route group', () => {
     row(
       'order production',
       'POST /api/orders/:id/release',
-      (s, w) => s.post(`/api/orders/${w.order.id}/release`, { reason: 'Site is ready' }),
+      (s, w) =>
+        s.post(`/api/orders/${w.order.id}/release`, { reason: 'Site is ready', version: 1 }),
       403,
       404,
     ),
@@ -376,7 +377,11 @@ describe('role matrix: the builder, every route group', () => {
       'order production',
       'POST /api/orders/:id/hold',
       (s, w) =>
-        s.post(`/api/orders/${w.order.id}/hold`, { onHold: true, reason: 'Site not ready' }),
+        s.post(`/api/orders/${w.order.id}/hold`, {
+          onHold: true,
+          reason: 'Site not ready',
+          version: 1,
+        }),
       403,
       404,
     ),
