@@ -2,7 +2,7 @@ import type { Transaction } from 'sequelize';
 import type { PriceBook as PriceBookData } from '../../shared/api/pricing';
 import { PriceBook, User } from '../models';
 import { DEMO_PRICE_BOOK } from '../services/pricing';
-import { audit } from './audit';
+import { savePlantDocument } from './plantDocument';
 
 /** The plant's stored book (with its editor), or null while it has none. */
 export const findPriceBook = (plantId: number, t?: Transaction) =>
@@ -21,26 +21,6 @@ export async function pricesFor(plantId: number, t?: Transaction) {
 /** Store the plant's price book (one per plant), replacing the previous one; audited. */
 export async function savePriceBook(actor: User, data: PriceBookData) {
   return PriceBook.sequelize!.transaction(async (t) => {
-    const existing = await PriceBook.findOne({
-      where: { plantId: actor.plantId },
-      transaction: t,
-      lock: t.LOCK.UPDATE,
-    });
-    const before = existing?.data ?? null;
-    const book = existing
-      ? await existing.update({ data, updatedBy: actor.id }, { transaction: t })
-      : await PriceBook.create(
-          { plantId: actor.plantId, data, updatedBy: actor.id },
-          { transaction: t },
-        );
-    await audit(t, {
-      plantId: actor.plantId,
-      actorId: actor.id,
-      action: 'price_book.saved',
-      subjectType: 'price_book',
-      subjectId: book.id,
-      data: { before, after: data },
-    });
-    return book;
+    return savePlantDocument(PriceBook, 'price_book', actor, data, t);
   });
 }

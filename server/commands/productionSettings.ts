@@ -1,7 +1,7 @@
 import type { Transaction } from 'sequelize';
 import type { ProductionSettings as SettingsData } from '../../shared/api/production';
 import { ProductionSettings, type User } from '../models';
-import { audit } from './audit';
+import { savePlantDocument } from './plantDocument';
 import { pricesFor } from './priceBook';
 
 /**
@@ -41,25 +41,5 @@ export async function settingsFor(plantId: number, t?: Transaction) {
 
 /** Store the plant's production settings (one per plant); audited. Re-planning is the caller's. */
 export async function saveSettings(actor: User, data: SettingsData, t: Transaction) {
-  const existing = await ProductionSettings.findOne({
-    where: { plantId: actor.plantId },
-    transaction: t,
-    lock: t.LOCK.UPDATE,
-  });
-  const before = existing?.data ?? null;
-  const row = existing
-    ? await existing.update({ data, updatedBy: actor.id }, { transaction: t })
-    : await ProductionSettings.create(
-        { plantId: actor.plantId, data, updatedBy: actor.id },
-        { transaction: t },
-      );
-  await audit(t, {
-    plantId: actor.plantId,
-    actorId: actor.id,
-    action: 'production_settings.saved',
-    subjectType: 'production_settings',
-    subjectId: row.id,
-    data: { before, after: data },
-  });
-  return row;
+  return savePlantDocument(ProductionSettings, 'production_settings', actor, data, t);
 }

@@ -1,7 +1,7 @@
 import type { Transaction } from 'sequelize';
 import { DEMO_STOCK_SETTINGS, type StockSettings as StockData } from '../../shared/api/stock';
 import { StockSettings, User } from '../models';
-import { audit } from './audit';
+import { savePlantDocument } from './plantDocument';
 
 /** The plant's stored stock settings (with their editor), or null while it has none. */
 export const findStockSettings = (plantId: number, t?: Transaction) =>
@@ -20,26 +20,6 @@ export async function stockFor(plantId: number, t?: Transaction) {
 /** Store the plant's stock settings (one row per plant), replacing the previous ones; audited. */
 export async function saveStockSettings(actor: User, data: StockData) {
   return StockSettings.sequelize!.transaction(async (t) => {
-    const existing = await StockSettings.findOne({
-      where: { plantId: actor.plantId },
-      transaction: t,
-      lock: t.LOCK.UPDATE,
-    });
-    const before = existing?.data ?? null;
-    const row = existing
-      ? await existing.update({ data, updatedBy: actor.id }, { transaction: t })
-      : await StockSettings.create(
-          { plantId: actor.plantId, data, updatedBy: actor.id },
-          { transaction: t },
-        );
-    await audit(t, {
-      plantId: actor.plantId,
-      actorId: actor.id,
-      action: 'stock_settings.saved',
-      subjectType: 'stock_settings',
-      subjectId: row.id,
-      data: { before, after: data },
-    });
-    return row;
+    return savePlantDocument(StockSettings, 'stock_settings', actor, data, t);
   });
 }
