@@ -7,6 +7,7 @@ import { useMe } from '../features/auth/api/me';
 import { useLogout } from '../features/auth/api/logout';
 import { BrandMark } from '../features/auth/components/BrandMark';
 import { navForRole, type NavItem } from './navigation';
+import { PlantMenu } from './PlantMenu';
 
 function NavLinks({
   items,
@@ -27,7 +28,7 @@ function NavLinks({
             onClick={onNavigate}
             className={({ isActive }) =>
               clsx(
-                'block rounded px-3 py-2 text-sm font-medium transition-colors',
+                'block rounded px-3 py-2 text-sm font-medium whitespace-nowrap transition-colors',
                 isActive
                   ? 'bg-timber-700 text-white'
                   : 'text-timber-50 hover:bg-timber-700/60 hover:text-white',
@@ -54,6 +55,11 @@ export function AppFrame() {
   if (!me) return null; // the route loader guarantees the session; this only narrows the type
 
   const items = navForRole(me.user.role);
+  const main = items.filter((item) => !item.group);
+  const plant = items.filter((item) => item.group === 'plant');
+  // The plant manager's long bar goes inline only where it fits; the name shows where room is left.
+  const wide = items.length > 8;
+  const inline = wide ? 'xl' : 'lg';
   const signOut = () =>
     logout.mutate(undefined, { onSettled: () => void navigate('/sign-in', { replace: true }) });
   const who = me.customer ? `${me.customer.name}` : me.plant.name;
@@ -79,11 +85,24 @@ export function AppFrame() {
             <BrandMark className="h-7 w-7" />
             <span className="text-lg font-semibold tracking-tight">Spanwise</span>
           </NavLink>
-          <nav aria-label="Main" className="hidden lg:block">
-            <NavLinks items={items} />
+          <nav
+            aria-label="Main"
+            className={clsx(
+              'hidden',
+              inline === 'xl' ? 'xl:flex' : 'lg:flex',
+              'items-center gap-1',
+            )}
+          >
+            <NavLinks items={main} />
+            {plant.length > 0 ? <PlantMenu items={plant} /> : null}
           </nav>
           <div className="ml-auto flex items-center gap-3">
-            <div className="hidden text-right leading-tight md:block">
+            <div
+              className={clsx(
+                'hidden text-right leading-tight whitespace-nowrap',
+                items.length > 4 ? 'xl:block' : 'md:block',
+              )}
+            >
               <p className="text-sm font-medium">{me.user.name}</p>
               <p className="text-xs text-timber-100">
                 {ROLE_LABELS[me.user.role]} · {who}
@@ -95,7 +114,8 @@ export function AppFrame() {
             <button
               type="button"
               className={clsx(
-                'rounded p-2 text-white hover:bg-timber-700 lg:hidden',
+                'rounded p-2 text-white hover:bg-timber-700',
+                inline === 'xl' ? 'xl:hidden' : 'lg:hidden',
                 focusRing,
                 'focus-visible:outline-white',
               )}
@@ -119,10 +139,21 @@ export function AppFrame() {
           <nav
             id="mobile-nav"
             aria-label="Main"
-            className="border-t border-timber-700 px-4 py-2 lg:hidden"
+            className={clsx(
+              'border-t border-timber-700 px-4 py-2',
+              inline === 'xl' ? 'xl:hidden' : 'lg:hidden',
+            )}
           >
-            <NavLinks items={items} vertical onNavigate={() => setMenuOpen(false)} />
-            <p className="px-3 pt-2 pb-1 text-xs text-timber-100 md:hidden">
+            <NavLinks items={main} vertical onNavigate={() => setMenuOpen(false)} />
+            {plant.length > 0 ? (
+              <>
+                <p className="px-3 pt-3 pb-1 text-xs font-semibold tracking-wide text-timber-100 uppercase">
+                  Plant
+                </p>
+                <NavLinks items={plant} vertical onNavigate={() => setMenuOpen(false)} />
+              </>
+            ) : null}
+            <p className="px-3 pt-2 pb-1 text-xs text-timber-100">
               {me.user.name} · {ROLE_LABELS[me.user.role]}
             </p>
           </nav>

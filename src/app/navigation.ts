@@ -4,6 +4,8 @@ import type { Role } from '../../shared/api/roles';
 export interface NavItem {
   to: string;
   label: string;
+  /** Plant settings sit in one menu so a plant manager's bar fits a laptop screen. */
+  group?: 'plant';
 }
 
 /** Title of the landing page (`/`) per role; the page's `<h1>`. */
@@ -48,16 +50,18 @@ export function navForRole(role: Role): NavItem[] {
     items.push({ to: '/orders', label: role === 'builder' ? 'Your orders' : 'Orders' });
   }
   if (may('shop', role)) items.push({ to: '/shop', label: 'Cut lists' });
-  if (may('users', role)) items.push({ to: '/users', label: 'Users' });
+  // The desk prices from the price book daily; for the plant manager it is one of the settings.
+  const plant = role === 'admin' ? ({ group: 'plant' } as const) : {};
+  if (may('users', role)) items.push({ to: '/users', label: 'Users', group: 'plant' });
   if (may('builders', role)) items.push({ to: '/builders', label: 'Builders' });
   if (may('jobs', role)) items.push({ to: '/jobs', label: 'Jobs' });
-  if (may('price-book', role)) items.push({ to: '/price-book', label: 'Price book' });
+  if (may('price-book', role)) items.push({ to: '/price-book', label: 'Price book', ...plant });
   if (may('schedule', role)) items.push({ to: '/schedule', label: 'Schedule' });
   if (may('floor', role)) items.push({ to: '/floor', label: 'Floor' });
   if (may('quality', role)) items.push({ to: '/quality', label: 'Quality' });
   if (may('production-settings', role))
-    items.push({ to: '/production-settings', label: 'Production' });
-  if (may('inbox', role)) items.push({ to: '/inbox', label: 'Demo inbox' });
-  if (may('stock', role)) items.push({ to: '/stock', label: 'Lumber stock' });
+    items.push({ to: '/production-settings', label: 'Production', group: 'plant' });
+  if (may('inbox', role)) items.push({ to: '/inbox', label: 'Demo inbox', group: 'plant' });
+  if (may('stock', role)) items.push({ to: '/stock', label: 'Lumber stock', group: 'plant' });
   return items;
 }

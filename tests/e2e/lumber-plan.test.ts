@@ -114,6 +114,7 @@ describe('lumber plans, in a browser', () => {
     const page = await browser.newPage();
     await page.setViewportSize({ width: 1440, height: 900 });
     await signIn(page, admin);
+    await page.getByRole('button', { name: 'Plant' }).click(); // the plant manager's settings menu
     await page.getByRole('link', { name: 'Lumber stock' }).first().click();
     await page.waitForURL(/\/stock$/);
     await expect

@@ -43,6 +43,23 @@ describe('role navigation (product brief for the client shell and the sales desk
     expect(labels('builder')).toEqual(['Your jobs', 'Your orders']);
   });
 
+  it("puts the plant manager's settings in one menu so the bar fits a laptop", () => {
+    const grouped = (role: (typeof ROLES)[number]) =>
+      navForRole(role)
+        .filter((item) => item.group === 'plant')
+        .map((item) => item.label);
+    expect(grouped('admin')).toEqual([
+      'Users',
+      'Price book',
+      'Production',
+      'Demo inbox',
+      'Lumber stock',
+    ]);
+    // The desk works from the price book every day: it stays on the bar.
+    expect(grouped('sales')).toEqual([]);
+    expect(navForRole('admin').filter((item) => !item.group)).toHaveLength(8);
+  });
+
   it('links the review queue and the orders list where the routes live', () => {
     expect(navForRole('engineer').find((i) => i.label === 'Review queue')?.to).toBe('/reviews');
     expect(navForRole('builder').find((i) => i.label === 'Your orders')?.to).toBe('/orders');
