@@ -31,20 +31,22 @@ const ROLE_NAMES: Record<string, string> = {
 
 function columnsFor(unit: 'lbf' | 'kN'): TableColumn<Row>[] {
   return column.columns([
+    // The member's joints, then the piece it is cut from: one column keeps the table narrow.
     column.accessor('id', {
       header: 'Member',
-      cell: (info) => <span className="font-semibold text-sand-900">{info.getValue()}</span>,
-    }),
-    column.accessor('piece', {
-      header: 'Piece',
       cell: (info) => (
-        <span>
-          {info.getValue()}{' '}
-          <span className="text-xs text-sand-600">{ROLE_NAMES[info.row.original.role] ?? ''}</span>
+        <span className="whitespace-nowrap">
+          <span className="font-semibold text-sand-900">{info.getValue()}</span>
+          <span className="block text-xs text-sand-600">
+            {info.row.original.piece} · {ROLE_NAMES[info.row.original.role] ?? ''}
+          </span>
         </span>
       ),
     }),
-    column.accessor('lumber', { header: 'Lumber' }),
+    column.accessor('lumber', {
+      header: 'Lumber',
+      cell: (info) => <span className="whitespace-nowrap">{info.getValue()}</span>,
+    }),
     // Centre-line length between panel points, as the design stores it (feet-inches or mm).
     column.accessor((r) => r.length.text, {
       id: 'length',
@@ -66,26 +68,26 @@ function columnsFor(unit: 'lbf' | 'kN'): TableColumn<Row>[] {
       },
     }),
     column.accessor('csi', { header: 'CSI', cell: (info) => <CsiBadge csi={info.getValue()} /> }),
+    // Bracing sits under the governing check so the table fits the editor's column.
     column.accessor('governingCheck', {
-      header: 'Governs',
-      cell: (info) => (
-        <span>
-          {info.getValue()}
-          <span className="block text-xs text-sand-600">
-            {info.row.original.governingCombination}
+      header: 'Governs · bracing',
+      cell: (info) => {
+        const m = info.row.original;
+        return (
+          <span className="block min-w-44">
+            {info.getValue()}
+            <span className="block text-xs text-sand-600">{m.governingCombination}</span>
+            <span
+              className={clsx(
+                'mt-0.5 block text-xs',
+                m.braced ? 'font-semibold text-sand-900' : 'text-sand-600',
+              )}
+            >
+              {m.bracing}
+            </span>
           </span>
-        </span>
-      ),
-    }),
-    column.accessor('bracing', {
-      header: 'Bracing',
-      cell: (info) => (
-        <span
-          className={clsx('text-xs', info.row.original.braced && 'font-semibold text-sand-900')}
-        >
-          {info.getValue()}
-        </span>
-      ),
+        );
+      },
     }),
   ]);
 }
