@@ -299,7 +299,7 @@ export function designTruss(input: EngineDesignInput, options: DesignOptions = {
     'Forces, moments and shears from a plane frame (direct stiffness method, each member with its E, A and I): chords continuous through the panel points within each piece of lumber and hinged at splices, at the peak and at the heel, webs pinned at both ends, roof and ceiling loads as line loads on the chord members (live and snow on the horizontal projection, dead along the member). Members are checked with the larger of the span and panel-point moments.',
     ...(profile.overhangs.some((o) => o.horizontal > 0)
       ? [
-          "Heel with an overhang: the top chord is one piece of lumber from the overhang's tip through the heel into the first panel, so it is continuous there and the overhang's moment bends the first top-chord panel and turns the heel (which moves the tip); the bottom chord is pinned at the heel, since the heel plate joins the chords for their forces and is not designed for moment (common practice). Counting no restraint from the bottom chord errs on the safe side for the top chord's heel moment and for a tip that the overhang's own load turns down.",
+          "Heel with an overhang: the top chord is one piece of lumber from the overhang's tip through the heel into the first panel, so it is continuous there and the overhang's moment bends the first top-chord panel and turns the heel (which moves the tip); the bottom chord is pinned at the heel, since the heel plate joins the chords for their forces and is not designed for moment (common practice). Counting no restraint from the bottom chord gives the heel its largest rotation: it errs on the safe side for the top chord's heel moment and for a tip whose movement the heel's rotation governs (on a long first panel the panel's sag turns the heel and lifts the tip).",
         ]
       : []),
     `Frame analysed ${passes === 1 ? 'once' : `${passes} times`}, until the lumber it was analysed with is the lumber sizing chose (stiffness sets the force distribution).`,
@@ -323,7 +323,7 @@ export function designTruss(input: EngineDesignInput, options: DesignOptions = {
         ]
       : []),
     `Long-term deflection ${KCR_SEASONED_DRY}·Δ(dead) + Δ(live) against the total-load limit: creep factor Kcr = ${KCR_SEASONED_DRY} for seasoned lumber in dry service (NDS 2018 §3.5.2).`,
-    "Chord shear fv = 1.5V/A ≤ Fv′ = Fv·CD (NDS 2018 §3.4.2) with V the largest shear along each chord member in the frame, taken at the panel point (loads within d of it are not neglected); it counts in the member's CSI.",
+    "Chord shear fv = 1.5V/A ≤ Fv′ = Fv·CD (NDS 2018 §3.4.2) with V the largest shear along each chord member in the frame, taken at the panel point (loads within d of it are not neglected), and on the member that carries an overhang at least the overhang's root shear at the bearing (its whole load square to the chord); it counts in the member's CSI.",
     'Plates: tooth holding with |F|/CD of each combination (tooth values take CD); the steel across heel and splice lines with the full |F| (steel capacities take no load-duration factor).',
     ...(catalog.demo ? [catalog.label] : []),
     ...girderNotes(input.plies),
