@@ -3,6 +3,7 @@ import type { TrussProfile } from '../profiles/types';
 import { N_PER_LBF } from '../units';
 import type { MemberDemands } from './demands';
 import type { ServiceDeflection } from './serviceDeflection';
+import type { DeflectionSizing } from './serviceSizing';
 import type { DeflectionCheck, DesignCombination, DesignDeflection, DesignReaction } from './types';
 
 /** Creep factor Kcr for seasoned lumber in dry service, NDS 2018 §3.5.2. */
@@ -112,4 +113,6 @@ export interface AdditionalChecks {
   longTermDeflection: DeflectionCheck;
   /** Mid-panel and overhang-tip deflection, and a scissor's roller movement. */
   deflection: ServiceDeflection;
+  /** Chords raised above what strength needs so that a deflection check passes. */
+  deflectionSizing?: DeflectionSizing[];
 }

@@ -1,4 +1,4 @@
-import { solveFrame, type PreparedFrame } from '../frame';
+import { solveFrame, type FrameLoads, type FrameResult, type PreparedFrame } from '../frame';
 import type { CaseLoads } from '../loads';
 import { designValues, parseLumberId, sectionProperties } from '../lumber';
 import type { TrussProfile } from '../profiles/types';
@@ -18,14 +18,24 @@ export function axialStiffness(lumberId: string, plies: number): number {
 const LIVE_CASES: DesignCaseId[] = ['Lr', 'S', 'L', 'Lbc'];
 const LABEL: Partial<Record<DesignCaseId, string>> = { Lr: 'Lr', S: 'S', L: 'L', Lbc: 'L(bc)' };
 
-/** Downward vertical displacement of each bottom-chord joint, mm (down +). */
+/** One solved load set: its frame loads and the frame's answer. */
+export interface SolvedSet {
+  loads: FrameLoads;
+  result: FrameResult;
+}
+
+/** Downward vertical displacement of each bottom-chord joint, mm (down +), and the solution. */
 function bottomChordDrop(
   frame: PreparedFrame,
   profile: TrussProfile,
   terms: readonly (readonly [CaseLoads | undefined, number])[],
-): number[] {
-  const result = solveFrame(frame, caseFrameLoads(profile, terms));
-  return profile.bottomChordJoints.map((j) => -result.displacements[frame.jointIndex.get(j)!].uy);
+): { drops: number[]; solved: SolvedSet } {
+  const loads = caseFrameLoads(profile, terms);
+  const result = solveFrame(frame, loads);
+  const drops = profile.bottomChordJoints.map(
+    (j) => -result.displacements[frame.jointIndex.get(j)!].uy,
+  );
+  return { drops, solved: { loads, result } };
 }
 
 function check(
@@ -53,23 +63,39 @@ export function designDeflection(
   cases: Partial<Record<DesignCaseId, CaseLoads>>,
   limits: { live: number; total: number },
 ): DesignDeflection {
+  return solveDeflection(frame, profile, cases, limits).deflection;
+}
+
+/**
+ * `designDeflection` with the solved live and total load sets, so the service checks reuse them
+ * instead of solving the same sets again.
+ */
+export function solveDeflection(
+  frame: PreparedFrame,
+  profile: TrussProfile,
+  cases: Partial<Record<DesignCaseId, CaseLoads>>,
+  limits: { live: number; total: number },
+): { deflection: DesignDeflection; live?: SolvedSet; total: SolvedSet } {
   let liveCase: DesignCaseId | undefined;
   let liveDrops: number[] | undefined;
+  let live: SolvedSet | undefined;
   for (const c of LIVE_CASES) {
     if (!cases[c] || cases[c].jointLoads.length + (cases[c].pointLoads?.length ?? 0) === 0)
       continue;
-    const drops = bottomChordDrop(frame, profile, [[cases[c], 1]]);
-    if (!liveDrops || Math.max(...drops) > Math.max(...liveDrops)) {
+    const one = bottomChordDrop(frame, profile, [[cases[c], 1]]);
+    if (!liveDrops || Math.max(...one.drops) > Math.max(...liveDrops)) {
       liveCase = c;
-      liveDrops = drops;
+      liveDrops = one.drops;
+      live = one.solved;
     }
   }
-  const totalDrops = bottomChordDrop(frame, profile, [
+  const total = bottomChordDrop(frame, profile, [
     [cases.D, 1],
     [liveCase && cases[liveCase], 1],
   ]);
+  const totalDrops = total.drops;
   const liveName = liveCase && LABEL[liveCase]!;
-  return {
+  const deflection: DesignDeflection = {
     ...(liveName && { liveCase: liveName }),
     ...(liveDrops && { live: check(liveName!, liveDrops, profile, limits.live) }),
     total: check(liveName ? `D + ${liveName}` : 'D', totalDrops, profile, limits.total),
@@ -79,4 +105,5 @@ export function designDeflection(
       live: liveDrops ? liveDrops[i] : 0,
     })),
   };
+  return { deflection, ...(live && { live }), total: total.solved };
 }

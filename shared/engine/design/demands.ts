@@ -19,7 +19,10 @@ export interface MemberDemands {
   spanMoment: Float64Array;
   /** Largest |M| at the member's two ends (panel points; 0 at a hinge). */
   supportMoment: Float64Array;
-  /** Largest |V| along the member. */
+  /**
+   * Largest |V| along the member; on a top-chord member that carries an overhang, at least the
+   * overhang's root shear at the heel (see `overhangRootLevers`).
+   */
   shear: Float64Array;
   /** Reactions per support per combination: [combination][support] rx and ry, N. */
   rx: Float64Array;
@@ -33,6 +36,22 @@ export const profileModel = (profile: TrussProfile): TrussModel => ({
   members: profile.members.map((m) => ({ id: m.id, from: m.from, to: m.to })),
   supports: profile.supports,
 });
+
+/**
+ * Per member index, the slope length s of the overhang it carries (0 for none). The overhang is
+ * the same piece of lumber but not a frame member: a cantilever under a uniform load square to
+ * it, w⊥, whose heel moment M = w⊥s²/2 enters the frame, so its root shear is w⊥s = 2M/s. The
+ * frame's own shear just inside the heel is usually larger, but not when the overhang carries
+ * more than the first panel (a soffit's wind pressure), so the member's shear takes the larger.
+ */
+export function overhangRootLevers(profile: TrussProfile): Float64Array {
+  const out = new Float64Array(profile.members.length);
+  for (const o of profile.overhangs) {
+    const k = profile.members.findIndex((m) => m.id === o.member);
+    if (k >= 0 && o.horizontal > 0 && o.slopeLength > 0) out[k] = o.slopeLength;
+  }
+  return out;
+}
 
 /**
  * Solves every combination on one factorised design frame (`designFrame`): chords continuous
@@ -54,6 +73,7 @@ export function memberDemands(
   const shear = new Float64Array(n * m);
   const rx = new Float64Array(n * s);
   const ry = new Float64Array(n * s);
+  const lever = overhangRootLevers(profile);
   combos.forEach((c, i) => {
     const result = solveFrame(
       frame,
@@ -66,7 +86,9 @@ export function memberDemands(
       spanMoment[at] = r.spanMoment;
       supportMoment[at] = Math.max(Math.abs(r.startMoment), Math.abs(r.endMoment));
       moment[at] = r.maxMoment;
-      shear[at] = r.maxShear;
+      // NDS 2018 §3.4.2 at the overhang's root (the bearing): V = 2|M|/s.
+      const root = lever[k] > 0 ? (2 * Math.abs(c.overhangMoment[k])) / lever[k] : 0;
+      shear[at] = Math.max(r.maxShear, root);
     }
     result.reactions.forEach((r, j) => {
       rx[i * s + j] = r.rx;

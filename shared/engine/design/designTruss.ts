@@ -9,7 +9,6 @@ import { ENGINE_VERSION } from '../version';
 import {
   chordShearChecks,
   KCR_SEASONED_DRY,
-  longTermDeflection,
   upliftChecks,
   upliftWarning,
   type AdditionalChecks,
@@ -17,13 +16,12 @@ import {
 import { bracingText, chordBracingNote } from './bracing';
 import { DESIGN_CAUTIONS } from './cautions';
 import { designLoads } from './combinedLoads';
-import { designDeflection } from './deflection';
 import type { MemberDemands } from './demands';
-import { analyseAndSize, type Sized } from './frameSizing';
+import type { Sized } from './frameSizing';
 import { girderNotes } from './girder';
 import { designPlates } from './jointPlates';
 import { plyFastening } from './plyFastening';
-import { serviceDeflection } from './serviceDeflection';
+import { sizeForService } from './serviceSizing';
 import type { GroupChoice, SizingGroup } from './sizing';
 import type {
   DesignBearing,
@@ -203,9 +201,10 @@ export function designTruss(input: EngineDesignInput, options: DesignOptions = {
   if (unknownBraces.length > 0) {
     warnings.push(`Web brace ignored, no such web in this truss: ${unknownBraces.join(', ')}.`);
   }
-  const { frame, demands, ctx, sized, passes, settled } = analyseAndSize(
+  const { demands, ctx, sized, passes, settled, state, raised } = sizeForService(
     profile,
     loads.combinations,
+    loads.cases,
     input,
     options,
   );
@@ -231,7 +230,7 @@ export function designTruss(input: EngineDesignInput, options: DesignOptions = {
         'bottom chord; use a wider bearing or a bearing block.',
     );
   }
-  const deflection = designDeflection(frame, profile, loads.cases, input.deflection);
+  const deflection = state.deflection;
   for (const d of [deflection.live, deflection.total]) {
     if (d && !d.pass) {
       warnings.push(
@@ -255,8 +254,9 @@ export function designTruss(input: EngineDesignInput, options: DesignOptions = {
   const additional: AdditionalChecks = {
     shear: chordShearChecks(profile, demands, combos, sized.lumberOf, input.plies),
     uplift: upliftChecks(reactions, combos),
-    longTermDeflection: longTermDeflection(deflection, profile.params.span, input.deflection.total),
-    deflection: serviceDeflection(frame, profile, loads.cases, deflection, input.deflection),
+    longTermDeflection: state.longTerm,
+    deflection: state.service,
+    ...(raised.length > 0 && { deflectionSizing: raised }),
   };
   const service = additional.deflection;
   const serviceChecks = [
@@ -296,8 +296,18 @@ export function designTruss(input: EngineDesignInput, options: DesignOptions = {
     options.amplifyPanelPointMoment
       ? 'Panel-point moments are checked with the NDS 2018 §3.9.2 amplifier 1/(1 − fc/FcE1) as well (the stricter plant setting).'
       : 'Panel-point moments are checked without the NDS 2018 §3.9.2 amplifier (common practice: the chord is held in plane at a panel point); span moments are amplified. A stricter plant setting amplifies both.',
-    'Forces, moments and shears from a plane frame (direct stiffness method, each member with its E, A and I): chords continuous through the panel points within each piece of lumber and hinged at splices, at the peak and at the heel (continuous into an overhang), webs pinned at both ends, roof and ceiling loads as line loads on the chord members (live and snow on the horizontal projection, dead along the member). Members are checked with the larger of the span and panel-point moments.',
+    'Forces, moments and shears from a plane frame (direct stiffness method, each member with its E, A and I): chords continuous through the panel points within each piece of lumber and hinged at splices, at the peak and at the heel, webs pinned at both ends, roof and ceiling loads as line loads on the chord members (live and snow on the horizontal projection, dead along the member). Members are checked with the larger of the span and panel-point moments.',
+    ...(profile.overhangs.some((o) => o.horizontal > 0)
+      ? [
+          "Heel with an overhang: the top chord is one piece of lumber from the overhang's tip through the heel into the first panel, so it is continuous there and the overhang's moment bends the first top-chord panel and turns the heel (which moves the tip); the bottom chord is pinned at the heel, since the heel plate joins the chords for their forces and is not designed for moment (common practice). Counting no restraint from the bottom chord gives the heel its largest rotation: it errs on the safe side for the top chord's heel moment and for a tip whose movement the heel's rotation governs (on a long first panel the panel's sag turns the heel and lifts the tip).",
+        ]
+      : []),
     `Frame analysed ${passes === 1 ? 'once' : `${passes} times`}, until the lumber it was analysed with is the lumber sizing chose (stiffness sets the force distribution).`,
+    'Sizing counts every deflection check (panel points, long-term, mid-panel, overhang tip): when the lumber that passes strength fails one, the chord whose next stiffer allowed lumber cuts the excess most is raised and the truss sized again; webs are not raised for deflection.',
+    ...[...new Map(raised.map((r) => [r.group, r])).values()].map(
+      (r) =>
+        `${r.group}: at least ${lumberLabelSafe(r.lumber)} for deflection (governed by ${r.check}; a cheaper lumber passes strength only).`,
+    ),
     ...(input.plies >= 2
       ? []
       : [
@@ -313,7 +323,7 @@ export function designTruss(input: EngineDesignInput, options: DesignOptions = {
         ]
       : []),
     `Long-term deflection ${KCR_SEASONED_DRY}·Δ(dead) + Δ(live) against the total-load limit: creep factor Kcr = ${KCR_SEASONED_DRY} for seasoned lumber in dry service (NDS 2018 §3.5.2).`,
-    "Chord shear fv = 1.5V/A ≤ Fv′ = Fv·CD (NDS 2018 §3.4.2) with V the largest shear along each chord member in the frame, taken at the panel point (loads within d of it are not neglected); it counts in the member's CSI.",
+    "Chord shear fv = 1.5V/A ≤ Fv′ = Fv·CD (NDS 2018 §3.4.2) with V the largest shear along each chord member in the frame, taken at the panel point (loads within d of it are not neglected), and on the member that carries an overhang at least the overhang's root shear at the bearing (its whole load square to the chord); it counts in the member's CSI.",
     'Plates: tooth holding with |F|/CD of each combination (tooth values take CD); the steel across heel and splice lines with the full |F| (steel capacities take no load-duration factor).',
     ...(catalog.demo ? [catalog.label] : []),
     ...girderNotes(input.plies),

@@ -35,10 +35,17 @@ export interface Sized {
   verdictOf: MemberVerdict[];
 }
 
+/**
+ * Per sizing-group label, the index in its role's candidate list below which sizing may not go
+ * (set when a cheaper lumber passed strength but failed a service deflection).
+ */
+export type SizingFloors = ReadonlyMap<string, number>;
+
 export function sizeAll(
   ctx: SizingContext,
   input: EngineDesignInput,
   options: DesignOptions,
+  floors: SizingFloors = new Map(),
 ): Sized {
   const m = ctx.profile.members.length;
   const lumberOf = new Array<string>(m);
@@ -54,9 +61,10 @@ export function sizeAll(
     }
     const web = group.role === 'web';
     const forced = web && group.members.some((k) => ctx.bracedWebs.has(ctx.profile.members[k].id));
-    const key = `${group.role}${forced}`;
+    const floor = floors.get(group.label) ?? 0;
+    const key = `${group.role}${forced}${floor}`;
     let tries = optionsOf.get(key);
-    if (!tries) optionsOf.set(key, (tries = sizingOptions(candidates, web, forced)));
+    if (!tries) optionsOf.set(key, (tries = sizingOptions(candidates.slice(floor), web, forced)));
     const choice = chooseForGroup(ctx, group.members, tries);
     for (const k of group.members) {
       lumberOf[k] = choice.lumber;
@@ -132,10 +140,17 @@ export function analyseAndSize(
   combinations: readonly CombinedLoads[],
   input: EngineDesignInput,
   options: DesignOptions,
+  floors: SizingFloors = new Map(),
 ): FrameSizing {
   const repetitive = girderRepetitive(input.spacing, input.plies);
   const cds = combinations.map((c) => c.cd);
   const cheapest = new Map<string, string>();
+  // Chord groups start at their floor (only chords get one; see `serviceSizing`).
+  for (const g of floors.size > 0 ? sizingGroups(profile) : []) {
+    if (g.role === 'web') continue;
+    const candidates = lumberCandidates(g.role, input.lumber, options.defaultLumber);
+    cheapest.set(g.role, candidates[floors.get(g.label) ?? 0]);
+  }
   let lumberOf = profile.members.map((mb) => {
     let id = cheapest.get(mb.role);
     if (id === undefined) {
@@ -163,7 +178,7 @@ export function analyseAndSize(
   let state = analyse(lumberOf);
   const history: Sized[] = [];
   for (let passes = 1; ; passes++) {
-    const sized = sizeAll(state.ctx, input, options);
+    const sized = sizeAll(state.ctx, input, options, floors);
     if (sized.lumberOf.every((id, k) => id === lumberOf[k])) {
       return { ...state, sized, passes, settled: true };
     }

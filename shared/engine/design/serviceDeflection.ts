@@ -2,6 +2,7 @@ import { solveFrame, type FrameLoads, type FrameResult, type PreparedFrame } fro
 import type { CaseLoads } from '../loads';
 import type { TrussProfile } from '../profiles/types';
 import type { DesignCaseId } from './combinedLoads';
+import type { SolvedSet } from './deflection';
 import { caseFrameLoads } from './frameModel';
 import type { DeflectionCheck, DesignDeflection } from './types';
 
@@ -140,6 +141,7 @@ export function serviceDeflection(
   cases: Partial<Record<DesignCaseId, CaseLoads>>,
   deflection: DesignDeflection,
   limits: { live: number; total: number },
+  solved: { live?: SolvedSet; total?: SolvedSet } = {},
 ): ServiceDeflection {
   const liveId = deflection.liveCase ? CASE_OF_LABEL[deflection.liveCase] : undefined;
   const sets: { name: 'live' | 'total'; load: string; terms: [CaseLoads | undefined, number][] }[] =
@@ -165,8 +167,10 @@ export function serviceDeflection(
   const span = profile.params.span;
   const out: ServiceDeflection = { midPanel: {} as ServiceDeflection['midPanel'] };
   for (const set of sets) {
-    const loads = caseFrameLoads(profile, set.terms);
-    const result = solveFrame(frame, loads);
+    // The same load sets as `designDeflection`'s: reuse its solutions when given.
+    const known = solved[set.name];
+    const loads = known?.loads ?? caseFrameLoads(profile, set.terms);
+    const result = known?.result ?? solveFrame(frame, loads);
     const limit = limits[set.name];
     const mid = midPanelDrop(frame, profile, loads, result);
     out.midPanel[set.name] = ratioCheck(

@@ -1,0 +1,10 @@
+import { designInputSchema, toEngineInput } from './shared/api/design';
+import { designTruss } from './shared/engine/design';
+const loads = { tcll: 20, tcdl: 10, bcll: 0, bcdl: 10, bcllNonConcurrent: 10 };
+const flatTen: any = { units: 'imperial', profile: 'flat', span: 360, depth: 30, panels: 10, spacing: 24, loads: { ...loads, snow: { pg: 30 } } };
+const input = toEngineInput(designInputSchema.parse(flatTen));
+const N = Number(process.argv[2] ?? 2000);
+for (let i = 0; i < 200; i++) designTruss(input);
+const t0 = performance.now();
+for (let i = 0; i < N; i++) designTruss(input);
+console.log(((performance.now() - t0) / N).toFixed(3), 'ms mean');
