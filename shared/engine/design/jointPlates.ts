@@ -35,10 +35,13 @@ export function jointKinds(profile: TrussProfile): Map<string, PlateJointKind> {
 /**
  * Plates (both faces) at every joint. Each member's tooth demand is its envelope max over the
  * combinations of |F|/CD with the plate's CD = 1: tooth holding scales with CD, so this is the
- * same check as one per combination, done in one call per joint. The steel (tension and shear
- * across the joint line) takes the envelope max of the full |F|: steel capacities are not
- * adjusted for load duration (common practice; ANSI/TPI 1-2014 Ch. 5 tests the steel without a
- * duration factor, from memory). A joint with no fitting plate
+ * same check as one per combination, done in one call per joint. The steel (tension, shear and
+ * both combined across every section of `steelSections`: heel and splice lines, the chord's face
+ * at a panel point, the joint line at a peak) takes each combination's full signed forces:
+ * steel capacities are not adjusted for load duration (common practice; ANSI/TPI 1-2014 Ch. 5
+ * tests the steel without a duration factor, from memory). Tooth values follow each member's
+ * angle to the plate (`lateralValue`) and the top chord at a heel takes `heelReduction`.
+ * A joint with no fitting plate
  * is reported (`ok: false`, with the reason), never thrown.
  */
 export function designPlates(
@@ -71,6 +74,11 @@ export function designPlates(
   profile.members.forEach((mb, k) => {
     const a = at.get(mb.from)!;
     const b = at.get(mb.to)!;
+    // Signed full force per combination: forces crossing one steel section add as vectors.
+    const steelForces = Array.from(
+      { length: cds.length },
+      (_, i) => demands.axial[i * m + k] / plies,
+    );
     const member = (dx: number, dy: number): PlateJointMember => ({
       id: mb.id,
       role: mb.role,
@@ -78,6 +86,7 @@ export function designPlates(
       depth: mm(depth(lumberOf[k])),
       force: newton(envelope[k]),
       steelForce: newton(steelEnvelope[k]),
+      steelForces,
     });
     meeting.get(a.id)!.push(member(b.x - a.x, b.y - a.y));
     meeting.get(b.id)!.push(member(a.x - b.x, a.y - b.y));

@@ -5,11 +5,19 @@ import type { PlateCatalog, PlateSpec } from './types';
 export const DEMO_PLATE_LABEL =
   'Demo plates: design values are invented for trying the product, not from any evaluation report. Not for construction.';
 
-// INVENTED demo values (not from any supplier or evaluation report): tooth holding
-// parallel/perpendicular to grain lbf/in², steel tension and shear lbf/in, per gauge.
+// INVENTED demo values (not from any supplier or evaluation report): tooth holding for the
+// four orientations AA, EA, AE, EE in lbf/in², steel tension and shear lbf/in, per gauge.
 const DEMO_VALUES: Record<number, Omit<PlateSpec, 'id' | 'gauge' | 'width' | 'length'>> = {
-  20: { lateralValue: { parallel: 110, perpendicular: 80 }, tensionValue: 950, shearValue: 650 },
-  18: { lateralValue: { parallel: 120, perpendicular: 88 }, tensionValue: 1250, shearValue: 850 },
+  20: {
+    lateralValue: { aa: 110, ea: 92, ae: 80, ee: 74 },
+    tensionValue: 950,
+    shearValue: 650,
+  },
+  18: {
+    lateralValue: { aa: 120, ea: 100, ae: 88, ee: 80 },
+    tensionValue: 1250,
+    shearValue: 850,
+  },
 };
 
 // Common plate sizes width × length in inches (common practice); larger ones also in 18 gauge.
@@ -61,6 +69,9 @@ const isObject = (v: unknown): v is Record<string, unknown> =>
 const positive = (v: unknown, max: number): v is number =>
   typeof v === 'number' && Number.isFinite(v) && v > 0 && v <= max;
 
+// The four tested orientations of a plate's lateral resistance (ANSI/TPI 1-2014).
+const ORIENTATIONS = ['aa', 'ea', 'ae', 'ee'] as const;
+
 const plateIssues = (p: unknown, at: string, seen: Set<string>): string[] => {
   if (!isObject(p)) return [`${at}: not a plate`];
   const issues: string[] = [];
@@ -75,12 +86,10 @@ const plateIssues = (p: unknown, at: string, seen: Set<string>): string[] => {
   if (!positive(p.width, 48)) issues.push(`${where}: width must be over 0 and at most 48 in`);
   if (!positive(p.length, 48)) issues.push(`${where}: length must be over 0 and at most 48 in`);
   const lv = isObject(p.lateralValue) ? p.lateralValue : {};
-  if (!positive(lv.parallel, 10_000)) {
-    issues.push(`${where}: lateral value parallel to grain must be a positive lbf/in²`);
-  } else if (!positive(lv.perpendicular, lv.parallel)) {
-    issues.push(
-      `${where}: lateral value perpendicular to grain must be positive and no more than parallel`,
-    );
+  for (const o of ORIENTATIONS) {
+    if (!positive(lv[o], 10_000)) {
+      issues.push(`${where}: lateral value ${o.toUpperCase()} must be a positive lbf/in²`);
+    }
   }
   if (!positive(p.tensionValue, 100_000))
     issues.push(`${where}: tension value must be a positive lbf/in`);

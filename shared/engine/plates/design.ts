@@ -1,7 +1,9 @@
 import { EngineError } from '../errors';
 import { MM_PER_INCH, N_PER_LBF, TOLERANCE } from '../units';
 import { memberContactRegions, regionAreaInPlate, type LocalMember, type Region } from './contact';
-import { centreLineLength, type Point } from './geometry';
+import type { Point } from './geometry';
+import { foldAngle, heelReduction, lateralValue } from './lateral';
+import { steelChecks, steelSections } from './steel';
 import type {
   Direction,
   JointPlateDesign,
@@ -20,6 +22,7 @@ const END_EXCLUSION_MM = 0.5 * MM_PER_INCH;
 const EDGE_EXCLUSION_MM = 0.25 * MM_PER_INCH;
 const MM2_PER_IN2 = MM_PER_INCH * MM_PER_INCH;
 const PLATES_PER_JOINT = 2;
+const PSI_TO_N_PER_MM2 = N_PER_LBF / MM2_PER_IN2;
 
 const unit = (d: Direction, what: string): Point => {
   const len = Math.hypot(d.x, d.y);
@@ -50,81 +53,11 @@ const plateAxis = (joint: PlateJoint, options: PlateDesignOptions): Point => {
   return x < -TOLERANCE || (Math.abs(x) <= TOLERANCE && y < 0) ? [-x, -y] : [x, y];
 };
 
-/**
- * Lateral value at an angle θ between load and grain by Hankinson's formula,
- * P·Q / (P sin²θ + Q cos²θ) (the NDS uses it for bearing at an angle to grain; applied here by
- * analogy, common practice).
- */
-export const lateralValueAtAngle = (plate: PlateSpec, theta: number): number => {
-  const p = plate.lateralValue.parallel;
-  const q = plate.lateralValue.perpendicular;
-  const s = Math.sin(theta);
-  const c = Math.cos(theta);
-  return (p * q) / (p * s * s + q * c * c);
-};
-
 const check = (demand: number, capacity: number) => ({
   demand,
   capacity,
   ratio: demand === 0 ? 0 : capacity > 0 ? demand / capacity : Infinity,
 });
-
-/** The force in the plate steel: the full |F| (steel takes no CD), else the tooth force. */
-const steelForceOf = (m: PlateJointMember) => Math.abs(m.steelForce ?? m.force);
-
-/**
- * Steel across the joint line. Splice: the chord force crosses the line square to the chord, in
- * tension over the plate's steel width there. Heel: the top-chord force crosses the line along
- * the bottom chord; its component along that line is steel shear, the rest steel tension.
- * Steel values are not adjusted by CD (common practice: load duration is a wood effect).
- */
-const steelChecks = (
-  kind: PlateJoint['kind'],
-  local: LocalMember[],
-  members: PlateJointMember[],
-  plate: PlateSpec,
-  halfLength: number,
-  halfWidth: number,
-): SteelCheck[] => {
-  const lbfToN = N_PER_LBF / MM_PER_INCH; // (lbf/in) · mm → N
-  if (kind === 'splice') {
-    const chords = local
-      .map((m, i) => ({ m, id: members[i].id, f: steelForceOf(members[i]) }))
-      .filter((c) => c.m.role !== 'web');
-    if (chords.length === 0) return [];
-    const top = chords.reduce((a, b) => (b.f > a.f ? b : a));
-    const across: Point = [-top.m.direction[1], top.m.direction[0]];
-    const section = centreLineLength(across, halfLength, halfWidth);
-    const capacity = PLATES_PER_JOINT * plate.tensionValue * section * lbfToN;
-    return [{ kind: 'tension', member: top.id, section, ...check(top.f, capacity) }];
-  }
-  if (kind === 'heel') {
-    const bc = local.find((m) => m.role === 'bottomChord');
-    const tcIndex = local.findIndex((m) => m.role === 'topChord');
-    if (!bc || tcIndex < 0) return [];
-    const line = bc.direction;
-    const section = centreLineLength(line, halfLength, halfWidth);
-    const f = steelForceOf(members[tcIndex]);
-    const d = local[tcIndex].direction;
-    const along = Math.abs(d[0] * line[0] + d[1] * line[1]);
-    const square = Math.sqrt(Math.max(0, 1 - along * along));
-    return [
-      {
-        kind: 'shear',
-        member: members[tcIndex].id,
-        section,
-        ...check(f * along, PLATES_PER_JOINT * plate.shearValue * section * lbfToN),
-      },
-      {
-        kind: 'tension',
-        member: members[tcIndex].id,
-        section,
-        ...check(f * square, PLATES_PER_JOINT * plate.tensionValue * section * lbfToN),
-      },
-    ];
-  }
-  return [];
-};
 
 // Slides are tried on a fixed ¼ in grid (common practice: plates are placed to the nearest
 // ¼ in). The grid does not depend on the plate, and a larger plate may slide at least as far,
@@ -214,21 +147,19 @@ interface Trial {
   /** Member indices in the order to check them; the member that fails moves to the front. */
   order: number[];
   plate: PlateSpec;
-  cd: number;
+  /** Tooth capacity per mm² of contact, both faces, N/mm², per member. */
+  perArea: number[];
   halfLength: number;
   halfWidth: number;
+  /** Per member: its angles, lateral value (MPa) and heel factor, for the report. */
+  angles: Omit<MemberPlateCheck, 'member' | 'area' | 'demand' | 'capacity' | 'ratio'>[];
   /** The member failing by the least at an exact slide, for the message. */
   best: { i: number; ratio: number };
 }
 
 // Module-level functions, not closures: this runs for every plate of every joint per keystroke.
 
-const capacityOf = (t: Trial, i: number, area: number): number =>
-  PLATES_PER_JOINT *
-  area *
-  (lateralValueAtAngle(t.plate, t.joint.members[i].loadToGrain ?? 0) / MM2_PER_IN2) *
-  t.cd *
-  N_PER_LBF;
+const capacityOf = (t: Trial, i: number, area: number): number => area * t.perArea[i];
 
 /** Moves member i to the front of the check order and reports it as the plate's failure. */
 const failing = (t: Trial, i: number, ratio: number): Placement => {
@@ -252,7 +183,7 @@ const checksAt = (t: Trial, offset: number, spread: number): MemberPlateCheck[] 
       if (k > 0) t.order.unshift(...t.order.splice(k, 1));
       return undefined;
     }
-    checks.push({ member: t.joint.members[i].id, area, ...c });
+    checks.push({ member: t.joint.members[i].id, area, ...c, ...t.angles[i] });
   }
   return checks;
 };
@@ -298,10 +229,84 @@ const placePlate = (t: Trial, local: LocalMember[], frame: PlateFrame): Placemen
   return nearestSlide(t, -1, 1, nearer) ?? up ?? failing(t, t.best.i, t.best.ratio);
 };
 
+/** How a failing steel section is named in a message. */
+const LINE_TEXT: Record<SteelCheck['line'], string> = {
+  heel: 'across the heel line',
+  splice: 'across the splice',
+  chordFace: "across the chord's face",
+  joint: 'across the joint line',
+};
+
+/** A member's tooth angles at a joint, independent of the plate size. */
+interface ToothAngles {
+  /** Plate-to-load angles to try (the load at ±θ to the member when θ ≠ 0). */
+  plateToLoad: number[];
+  loadToGrain: number;
+  heelFactor: number;
+}
+
+/**
+ * The angles of a member's load at a joint: along its axis (grain) for an axial force, else at
+ * `loadToGrain` to it, to either side (the lower value is used). The top chord at a heel takes
+ * the heel reduction for its slope.
+ */
+const toothAngles = (joint: PlateJoint, m: PlateJointMember, local: Point): ToothAngles => {
+  const loadToGrain = foldAngle(m.loadToGrain ?? 0);
+  const axisAngle = Math.atan2(local[1], local[0]);
+  const plateToLoad =
+    loadToGrain === 0
+      ? [foldAngle(axisAngle)]
+      : [foldAngle(axisAngle + loadToGrain), foldAngle(axisAngle - loadToGrain)];
+  return { plateToLoad, loadToGrain, heelFactor: heelFactorOf(joint, m) };
+};
+
+/**
+ * HR for the top chord at a heel, from its slope above the bottom chord: the top chord's slope
+ * where the bottom chord is level (the standard's case); for a scissor's sloped bottom chord the
+ * angle between the chords (our reading, not the standard's words). 1 for every other member.
+ */
+const heelFactorOf = (joint: PlateJoint, m: PlateJointMember): number => {
+  if (joint.kind !== 'heel' || m.role !== 'topChord') return 1;
+  const bc = joint.members.find((o) => o.role === 'bottomChord');
+  const slope = (d: { x: number; y: number }) => Math.atan2(d.y, d.x);
+  const relative = bc ? slope(m.direction) - slope(bc.direction) : slope(m.direction);
+  return heelReduction(relative);
+};
+
+/** A member's lateral value on one plate, MPa per face, at the lowest of its angles. */
+const toothValue = (plate: PlateSpec, t: ToothAngles): Trial['angles'][number] => {
+  let best = { plateToLoad: t.plateToLoad[0], value: Infinity };
+  for (const a of t.plateToLoad) {
+    const value = lateralValue(plate, a, t.loadToGrain);
+    if (value < best.value) best = { plateToLoad: a, value };
+  }
+  return {
+    plateToLoad: best.plateToLoad,
+    loadToGrain: t.loadToGrain,
+    lateralValue: best.value * PSI_TO_N_PER_MM2,
+    heelFactor: t.heelFactor,
+  };
+};
+
+/** The check with the largest ratio (teeth win a tie: they are listed first). */
+const governing = (
+  checks: MemberPlateCheck[],
+  steel: SteelCheck[],
+): JointPlateDesign['governs'] => {
+  let g: JointPlateDesign['governs'] = { check: 'teeth', member: '', ratio: -1 };
+  for (const c of checks)
+    if (c.ratio > g.ratio) g = { check: 'teeth', member: c.member, ratio: c.ratio };
+  for (const s of steel)
+    if (s.ratio > g.ratio) g = { check: s.kind, member: s.member, ratio: s.ratio };
+  return g;
+};
+
 /**
  * Chooses the plate for one joint: the smallest catalog plate (by area, then gauge) that, on
- * both faces, holds every member's force by tooth holding, 2 · area · lateral value · CD ≥ |F|,
- * and at a heel or splice carries the force across the joint line in the steel. The plate is
+ * both faces, holds every member's force by tooth holding, 2 · area · lateral value · CD ≥ |F|
+ * (the value by the plate-to-load and load-to-grain angles, `lateralValue`; the top chord at a
+ * heel reduced by `heelReduction`), and whose steel carries the full forces across every section
+ * of `steelSections` in tension, shear and both combined. The plate is
  * aligned with the bottom chord (or the spliced chord; square to the bisector where two chords
  * meet at an angle), centred on the joint or, at a panel point, slid across its axis. Throws
  * EngineError `no_plate_fits` naming the joint and the member (or steel check) that fails on the
@@ -333,25 +338,29 @@ export const designJointPlate = (
     .map((_, i) => i)
     .sort((a, b) => Math.abs(joint.members[b].force) - Math.abs(joint.members[a].force));
   let failure = { member: '', ratio: 0 };
+  const sections = steelSections(joint.kind, local, joint.members);
+  const teeth = joint.members.map((m, i) => toothAngles(joint, m, local[i].direction));
 
   for (const plate of plates) {
     const halfLength = (plate.length * MM_PER_INCH) / 2;
     const halfWidth = (plate.width * MM_PER_INCH) / 2;
-    const steel = steelChecks(joint.kind, local, joint.members, plate, halfLength, halfWidth);
+    const steel = steelChecks(sections, plate, halfLength, halfWidth);
     const badSteel = steel.find((s) => s.ratio > 1);
     if (badSteel) {
       failure = {
-        member: `${badSteel.member} (steel ${badSteel.kind} across the joint line)`,
+        member: `${badSteel.member} (steel ${badSteel.kind} ${LINE_TEXT[badSteel.line]})`,
         ratio: badSteel.ratio,
       };
       continue;
     }
+    const angles = teeth.map((t) => toothValue(plate, t));
     const trial: Trial = {
       joint,
       regions,
       order,
       plate,
-      cd,
+      perArea: angles.map((a) => PLATES_PER_JOINT * a.lateralValue * a.heelFactor * cd),
+      angles,
       halfLength,
       halfWidth,
       best: { i: order[0], ratio: Infinity },
@@ -380,6 +389,7 @@ export const designJointPlate = (
       members: checks,
       steel,
       ratio: Math.max(0, ...checks.map((c) => c.ratio), ...steel.map((s) => s.ratio)),
+      governs: governing(checks, steel),
       demo: catalog.demo,
     };
   }

@@ -1,6 +1,8 @@
 /** Connector plates: catalogs (demo and plant) and the per-joint plate choice. */
 export { DEMO_PLATE_CATALOG, DEMO_PLATE_LABEL, validatePlateCatalog } from './catalog';
-export { designJointPlate, lateralValueAtAngle } from './design';
+export { designJointPlate } from './design';
+export { foldAngle, heelReduction, lateralValue } from './lateral';
+export { steelChecks, steelSections, type SteelSection } from './steel';
 export type {
   Direction,
   JointPlateDesign,
@@ -12,4 +14,5 @@ export type {
   PlateJointMember,
   PlateSpec,
   SteelCheck,
+  SteelLine,
 } from './types';

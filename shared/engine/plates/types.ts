@@ -14,12 +14,20 @@ export interface PlateSpec {
   width: number;
   /** Along the plate, in; lies along that chord. */
   length: number;
-  /** Tooth-holding value, lbf per in² of plate–wood contact per plate face. */
+  /**
+   * Tooth-holding (lateral resistance) values, lbf per in² of plate–wood contact per plate face,
+   * for the four tested orientations of ANSI/TPI 1-2014 (the plate's length axis taken as its
+   * slot direction): the engine interpolates between them (`lateralValue`).
+   */
   lateralValue: {
-    /** Load parallel to the grain. */
-    parallel: number;
-    /** Load perpendicular to the grain (the reduced value). */
-    perpendicular: number;
+    /** AA: plate length axis parallel to the load, load parallel to the grain. */
+    aa: number;
+    /** EA: plate length axis perpendicular to the load, load parallel to the grain. */
+    ea: number;
+    /** AE: plate length axis parallel to the load, load perpendicular to the grain. */
+    ae: number;
+    /** EE: plate length axis perpendicular to the load, load perpendicular to the grain. */
+    ee: number;
   };
   /** Steel tension, lbf per inch of steel width per plate. */
   tensionValue: number;
@@ -59,6 +67,11 @@ export interface PlateJointMember {
    */
   steelForce?: Newton;
   /**
+   * Signed full force per load case, N (tension +), for the plate steel: with them, forces that
+   * cross one steel section add as vectors case by case; without, their magnitudes add (a bound).
+   */
+  steelForces?: readonly number[];
+  /**
    * Angle between this member's load on the plate and its grain, radians; 0 (the default) for
    * the axial force of a member, which runs along its grain.
    */
@@ -76,6 +89,9 @@ export interface PlateJoint {
   kind?: PlateJointKind;
   members: PlateJointMember[];
 }
+
+/** Where a steel section runs: see `steelSections`. */
+export type SteelLine = 'heel' | 'splice' | 'chordFace' | 'joint';
 
 /** Options of `designJointPlate`. */
 export interface PlateDesignOptions {
@@ -96,17 +112,31 @@ export interface MemberPlateCheck {
   area: number;
   /** |F|, N. */
   demand: number;
-  /** 2 · area · lateral value · CD, N. */
+  /** 2 · area · lateral value · CD (· heel reduction), N. */
   capacity: number;
   ratio: number;
+  /** Angle between the load and the plate's length axis, radians (0…π/2). */
+  plateToLoad: number;
+  /** Angle between the load and the grain, radians (0…π/2). */
+  loadToGrain: number;
+  /** Lateral value at those angles, MPa (N/mm²) per face, before CD and the heel reduction. */
+  lateralValue: number;
+  /** Heel-joint reduction factor HR on the top chord at a heel; 1 elsewhere. */
+  heelFactor: number;
 }
 
-/** Steel across the joint line at a heel or splice, both plates counted. */
+/**
+ * Plate steel across one section (both plates counted), full forces. `combined`: demand is the
+ * resultant crossing force, capacity the resultant the section holds at its angle, ratio
+ * √((T/Tc)² + (V/Vc)²).
+ */
 export interface SteelCheck {
-  kind: 'tension' | 'shear';
-  /** The chord whose force crosses the joint line. */
+  kind: 'tension' | 'shear' | 'combined';
+  /** Which section: the heel or splice line, a chord's face, or a line through the joint. */
+  line: SteelLine;
+  /** The members whose forces cross the section, e.g. "W2, W3". */
   member: string;
-  /** Steel width (tension) or length (shear) crossing the joint line, per plate, mm. */
+  /** Steel length along the section, per plate, mm. */
   section: number;
   demand: number;
   capacity: number;
@@ -130,6 +160,8 @@ export interface JointPlateDesign {
   steel: SteelCheck[];
   /** Largest ratio of all checks (≤ 1). */
   ratio: number;
+  /** The check with that ratio: teeth on a member, or the steel of a section. */
+  governs: { check: 'teeth' | SteelCheck['kind']; member: string; ratio: number };
   /** Copied from the catalog so every screen can say the values are invented. */
   demo: boolean;
 }

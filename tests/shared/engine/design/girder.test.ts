@@ -89,8 +89,23 @@ describe('girders: ply-to-ply fastening', () => {
     const loads = designLoads(input, profile, '7-16');
     const demands = memberDemands(profile, loads.combinations, designFrame(profile, lumber, 2));
     const cds = loads.combinations.map((c) => c.cd);
-    const one = designPlates(profile, demands, cds, lumber, DEMO_PLATE_CATALOG, 1);
-    const two = designPlates(profile, demands, cds, lumber, DEMO_PLATE_CATALOG, 2);
+    // Test-only values, triple the demo's, so one ply of this girder still finds plates.
+    const strong = {
+      ...DEMO_PLATE_CATALOG,
+      plates: DEMO_PLATE_CATALOG.plates.map((p) => ({
+        ...p,
+        lateralValue: {
+          aa: 3 * p.lateralValue.aa,
+          ea: 3 * p.lateralValue.ea,
+          ae: 3 * p.lateralValue.ae,
+          ee: 3 * p.lateralValue.ee,
+        },
+        tensionValue: 3 * p.tensionValue,
+        shearValue: 3 * p.shearValue,
+      })),
+    };
+    const one = designPlates(profile, demands, cds, lumber, strong, 1);
+    const two = designPlates(profile, demands, cds, lumber, strong, 2);
     const demandAt = (p: typeof one, j: number) => p[j].design?.members.map((m) => m.demand) ?? [];
     let compared = 0;
     for (let j = 0; j < one.length; j++) {

@@ -22,7 +22,7 @@ const plate = (width: number, length: number): PlateSpec => ({
   gauge: 20,
   width,
   length,
-  lateralValue: { parallel: 100, perpendicular: 100 },
+  lateralValue: { aa: 100, ea: 100, ae: 100, ee: 100 },
   tensionValue: 1000,
   shearValue: 500,
 });

@@ -1,6 +1,6 @@
 import { describe, expect, it } from 'vitest';
 import fc from 'fast-check';
-import { designJointPlate, lateralValueAtAngle } from '../../../../shared/engine/plates/design';
+import { designJointPlate } from '../../../../shared/engine/plates/design';
 import { DEMO_PLATE_CATALOG } from '../../../../shared/engine/plates/catalog';
 import type {
   PlateCatalog,
@@ -23,7 +23,7 @@ const plate = (width: number, length: number, over: Partial<PlateSpec> = {}): Pl
   gauge: 20,
   width,
   length,
-  lateralValue: { parallel: 100, perpendicular: 50 },
+  lateralValue: { aa: 100, ea: 100, ae: 50, ee: 50 },
   tensionValue: 1000,
   shearValue: 500,
   ...over,
@@ -68,11 +68,14 @@ describe('contact areas, hand-computed', () => {
     // Two faces · 10.5 in² · 100 lbf/in² = 2100 lbf.
     expect(r.members[0].capacity).toBeWithin(lbfToN(lbf(2100)), { rel: 1e-9 });
     expect(r.members[0].ratio).toBeWithin(1000 / 2100, { rel: 1e-9 });
-    // Steel across the joint line: 2 plates · 1000 lbf/in · 4 in = 8000 lbf.
-    expect(r.steel).toHaveLength(1);
-    expect(r.steel[0].kind).toBe('tension');
+    // Steel across the joint line: 2 plates · 1000 lbf/in · 4 in = 8000 lbf; no shear, so the
+    // combined check is the tension check.
+    expect(r.steel.map((s) => s.kind)).toEqual(['tension', 'shear', 'combined']);
+    expect(r.steel[0].line).toBe('splice');
     expect(r.steel[0].section).toBeWithin(4 * IN, { rel: 1e-9 });
     expect(r.steel[0].capacity).toBeWithin(lbfToN(lbf(8000)), { rel: 1e-9 });
+    expect(r.steel[1].demand).toBeWithin(0);
+    expect(r.steel[2].ratio).toBeWithin(r.steel[0].ratio, { rel: 1e-9 });
   });
 
   it('right-angle T: vertical 2x4 web on a continuous 2x4 chord, 7x6 plate', () => {
@@ -92,7 +95,13 @@ describe('contact areas, hand-computed', () => {
     expect(areaOf(r, 'BC1')).toBeWithin(7.5, { rel: 1e-9 });
     expect(areaOf(r, 'BC2')).toBeWithin(7.5, { rel: 1e-9 });
     expect(areaOf(r, 'W')).toBeWithin(3.75, { rel: 1e-9 });
-    expect(r.steel).toEqual([]);
+    // Steel across the chord's top face: the web's 300 lbf, square to it, over the plate's 6 in
+    // length: 2 · 1000 · 6 = 12 000 lbf in tension, no shear.
+    const [t, v] = r.steel;
+    expect(t).toMatchObject({ kind: 'tension', line: 'chordFace', member: 'W' });
+    expect(t.demand).toBeWithin(lbfToN(lbf(300)), { rel: 1e-9 });
+    expect(t.capacity).toBeWithin(lbfToN(lbf(12000)), { rel: 1e-9 });
+    expect(v.demand).toBeWithin(0);
   });
 
   it('right-angle corner: chord end and web end, 5x6 plate', () => {
@@ -143,7 +152,7 @@ describe('heel steel', () => {
     };
     const r = designJointPlate(
       joint,
-      catalogOf(plate(6, 10, { lateralValue: { parallel: 150, perpendicular: 100 } })),
+      catalogOf(plate(6, 10, { lateralValue: { aa: 150, ea: 150, ae: 100, ee: 100 } })),
     );
     const shear = r.steel.find((s) => s.kind === 'shear')!;
     const tension = r.steel.find((s) => s.kind === 'tension')!;
@@ -246,7 +255,7 @@ describe('plate choice', () => {
     };
     // Tooth holding passes (2 · 10.5 · 100 = 2100 lbf) but the steel gives 2 · 100 · 4 = 800 lbf.
     expect(() => designJointPlate(joint, catalogOf(plate(4, 8, { tensionValue: 100 })))).toThrow(
-      /joint S: BC2 \(steel tension across the joint line\)/,
+      /joint S: BC2 \(steel tension across the splice\)/,
     );
   });
 
@@ -264,14 +273,4 @@ describe('plate choice', () => {
   });
 
   // Its speed is measured by `npm run bench` (the full designs include every joint's plate).
-});
-
-describe('lateralValueAtAngle', () => {
-  it('runs from the parallel value to the perpendicular value', () => {
-    const p = plate(3, 4);
-    expect(lateralValueAtAngle(p, 0)).toBeWithin(100);
-    expect(lateralValueAtAngle(p, Math.PI / 2)).toBeWithin(50);
-    // Hankinson at 45°: 2PQ/(P+Q) = 10000/150.
-    expect(lateralValueAtAngle(p, Math.PI / 4)).toBeWithin(10000 / 150);
-  });
 });

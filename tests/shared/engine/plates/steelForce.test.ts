@@ -10,7 +10,7 @@ const plate: PlateSpec = {
   gauge: 20,
   width: 6,
   length: 10,
-  lateralValue: { parallel: 150, perpendicular: 100 },
+  lateralValue: { aa: 150, ea: 150, ae: 100, ee: 100 },
   tensionValue: 1000,
   shearValue: 500,
 };
