@@ -83,6 +83,29 @@ const pointLoadSchema = z.object({
   label: z.string().trim().max(40, 'A point load label has at most 40 characters').optional(),
 });
 
+/** How a web that needs lateral restraint is braced: either way, a continuous lateral brace, a T-brace. */
+export const WEB_BRACE_KINDS = ['either', 'lateral', 'tBrace'] as const;
+export type WebBraceKind = (typeof WEB_BRACE_KINDS)[number];
+
+/**
+ * Bracing of the chords and webs (the editor's "Bracing" section): a ceiling on the bottom chord,
+ * else lateral bracing at a spacing (in or mm; default 10 ft); sheathing on the top chord, else
+ * purlins at a spacing (required then); and how a braced web is restrained.
+ */
+export const bracingSchema = z.object({
+  ceiling: z.boolean({ error: 'Ceiling must be yes or no' }).optional(),
+  bottomChordBracing: num('Bottom-chord bracing spacing').optional(),
+  /** False when purlins, not sheathing, carry the roof; then `purlinSpacing` is required. */
+  sheathing: z.boolean({ error: 'Sheathing must be yes or no' }).optional(),
+  purlinSpacing: num('Purlin spacing').optional(),
+  webBrace: z
+    .enum(WEB_BRACE_KINDS, {
+      error: 'Web brace must be either, a continuous lateral brace or a T-brace',
+    })
+    .optional(),
+});
+export type BracingInput = z.infer<typeof bracingSchema>;
+
 const baseSchema = z.object({
   units: z.enum(['imperial', 'metric'], { error: 'Units must be imperial or metric' }),
   profile: z.enum(PROFILE_KINDS, {
@@ -159,14 +182,7 @@ const baseSchema = z.object({
     .optional(),
   maxStockLength: num('Longest stock length').optional(),
   pointLoads: z.array(pointLoadSchema).max(20, 'At most 20 point loads').optional(),
-  /** Chord bracing: no ceiling (then bracing spacing, in or mm), purlins instead of sheathing. */
-  bracing: z
-    .object({
-      ceiling: z.boolean({ error: 'Ceiling must be yes or no' }).optional(),
-      bottomChordBracing: num('Bottom-chord bracing spacing').optional(),
-      purlinSpacing: num('Purlin spacing').optional(),
-    })
-    .optional(),
+  bracing: bracingSchema.optional(),
 });
 
 type Base = z.infer<typeof baseSchema>;
@@ -263,6 +279,13 @@ const checkRanges = (v: Base, ctx: z.RefinementCtx): void => {
     'Bottom-chord bracing spacing',
   );
   within(['bracing', 'purlinSpacing'], v.bracing?.purlinSpacing, LIMITS.bracing, 'Purlin spacing');
+  if (v.bracing?.sheathing === false && v.bracing.purlinSpacing === undefined) {
+    ctx.addIssue({
+      code: 'custom',
+      path: ['bracing', 'purlinSpacing'],
+      message: 'Enter the purlin spacing (the top chord has no sheathing)',
+    });
+  }
   if (v.profile === 'scissor') {
     if (v.bottomPitch === undefined) {
       ctx.addIssue({
@@ -473,9 +496,13 @@ export const toEngineInput = (input: DesignInput): EngineDesignInput => {
         ...(input.bracing.bottomChordBracing !== undefined && {
           bottomChordBracing: len(input.bracing.bottomChordBracing),
         }),
-        ...(input.bracing.purlinSpacing !== undefined && {
-          purlinSpacing: len(input.bracing.purlinSpacing),
-        }),
+        // Sheathing braces the top chord whatever purlin spacing is left over from before.
+        ...(input.bracing.purlinSpacing !== undefined &&
+          input.bracing.sheathing !== true && {
+            purlinSpacing: len(input.bracing.purlinSpacing),
+          }),
+        ...(input.bracing.webBrace !== undefined &&
+          input.bracing.webBrace !== 'either' && { webBrace: input.bracing.webBrace }),
       },
     }),
   };

@@ -64,9 +64,12 @@ export function bracingText(
   } catch {
     // An unknown id keeps the smallest brace; sizing only picks known lumber.
   }
-  return (
+  const lateral =
     `Continuous lateral brace (2x4) at mid-length, ${formatFeetInches(member.length / 2)} from joint ${member.from}, ` +
-    'nailed to this web in every truss of the run and tied back with diagonal bracing at each end; ' +
-    `or a ${size} T-brace of the web's grade nailed to its narrow face over at least 90 % of its length.`
-  );
+    'nailed to this web in every truss of the run and tied back with diagonal bracing at each end';
+  const tBrace = `a ${size} T-brace of the web's grade nailed to its narrow face over at least 90 % of its length.`;
+  const kind = input.bracing?.webBrace;
+  if (kind === 'lateral') return `${lateral}.`;
+  if (kind === 'tBrace') return tBrace.charAt(0).toUpperCase() + tBrace.slice(1);
+  return `${lateral}; or ${tBrace}`;
 }

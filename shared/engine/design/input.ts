@@ -48,5 +48,7 @@ export interface EngineDesignInput {
     bottomChordBracing?: Mm;
     /** Purlin spacing where no sheathing braces the top chord, mm. */
     purlinSpacing?: Mm;
+    /** How a web that needs restraint is braced; absent: either, both named. */
+    webBrace?: 'lateral' | 'tBrace';
   };
 }

@@ -53,6 +53,29 @@ function windText(d: DesignInput): string {
   return 'None';
 }
 
+/** The chords' and webs' bracing as entered (a ceiling and sheathing unless the line says not). */
+function bracingText(d: DesignInput): string {
+  const b = d.bracing ?? {};
+  const top =
+    b.sheathing !== true && b.purlinSpacing !== undefined
+      ? `Top chord: purlins at ${lengthText(d, b.purlinSpacing)} o.c.`
+      : 'Top chord sheathed';
+  const bottom =
+    b.ceiling === false
+      ? `no ceiling, bottom chord braced at ${lengthText(
+          d,
+          b.bottomChordBracing ?? (d.units === 'imperial' ? 120 : 3048),
+        )} o.c.`
+      : 'ceiling on the bottom chord';
+  const webs =
+    b.webBrace === 'lateral'
+      ? 'braced webs: continuous lateral brace'
+      : b.webBrace === 'tBrace'
+        ? 'braced webs: T-brace'
+        : 'braced webs: lateral brace or T-brace';
+  return `${top} · ${bottom} · ${webs}`;
+}
+
 /** Lumber the design uses per chord and the webs (from the stored result), else as requested. */
 function lumberItems(line: LineDetail, d: DesignInput): DetailItem[] {
   const result = line.result;
@@ -150,6 +173,7 @@ export function SignOffSummary({ line, orderId }: { line: LineDetail; orderId: n
     { label: 'BCDL', value: loadText(d, loads.bcdl) },
     { label: 'Snow', value: snowText(d) },
     { label: 'Wind', value: windText(d) },
+    { label: 'Bracing', value: bracingText(d) },
     ...lumberItems(line, d),
   ];
   return (

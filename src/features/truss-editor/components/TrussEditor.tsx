@@ -22,6 +22,7 @@ import { formToRequest, serverFieldErrors, type FormUnits } from '../form/conver
 import type { TrussFormErrors, TrussFormField, TrussFormValues } from '../form/values';
 import type { FieldContext } from './FormFields';
 import { CompareProfiles } from './CompareProfiles';
+import { BracingFields } from './BracingFields';
 import { PointLoadFields } from './PointLoadFields';
 import { ProfilePicker } from './ProfilePicker';
 import { GeometryFields, LineFields, LoadFields, LumberFields } from './TrussFields';
@@ -217,6 +218,12 @@ export function TrussEditor({
               <LoadFields ctx={ctx} units={units} />
               <PointLoadFields ctx={ctx} control={control} units={units} />
               <LumberFields ctx={ctx} units={units} />
+              <BracingFields
+                ctx={ctx}
+                units={units}
+                ceiling={values.ceiling !== false}
+                sheathing={values.sheathing !== false}
+              />
               {saveError.length > 0 ? (
                 <Alert tone="danger" title="Not saved">
                   {saveError.map((m) => (

@@ -1,7 +1,9 @@
 import {
   designInputSchema,
+  WEB_BRACE_KINDS,
   type DesignInput,
   type DesignInputDraft,
+  type WebBraceKind,
 } from '../../../../shared/api/design';
 import { createLineSchema } from '../../../../shared/api/orders';
 import {
@@ -45,6 +47,8 @@ const LENGTH_FIELDS = new Set<TrussFormField>([
   'spacing',
   'depth',
   'bearingWidth',
+  'bottomChordBracing',
+  'purlinSpacing',
 ]);
 
 /** Rounds away binary noise (342.49999… in) so the request carries what the user typed. */
@@ -144,6 +148,7 @@ export function formToRequest(values: TrussFormValues, units: FormUnits): FormRe
       .map((s) => s.trim().toUpperCase())
       .filter(Boolean),
     ...pointLoadsOf(values.pointLoads ?? [], units, errors),
+    ...bracingOf(values, length),
   };
   const line = createLineSchema.omit({ design: true }).safeParse({
     mark: values.mark,
@@ -182,6 +187,30 @@ export function formToRequest(values: TrussFormValues, units: FormUnits): FormRe
       design: stripUndefined(draft),
     },
     errors,
+  };
+}
+
+/**
+ * The Bracing section as the request's `bracing`: nothing when a ceiling and sheathing brace the
+ * chords and either web brace will do (the design's defaults), so older lines stay as they were.
+ */
+function bracingOf(
+  values: TrussFormValues,
+  length: (field: TrussFormField, optional?: boolean) => number | undefined,
+): Pick<DesignInputDraft, 'bracing'> {
+  const ceiling = values.ceiling ?? true;
+  const sheathing = values.sheathing ?? true;
+  const webBrace = values.webBrace ?? 'either';
+  if (ceiling && sheathing && webBrace === 'either') return {};
+  return {
+    bracing: {
+      ...(!ceiling && {
+        ceiling: false,
+        bottomChordBracing: length('bottomChordBracing', true),
+      }),
+      ...(!sheathing && { sheathing: false, purlinSpacing: length('purlinSpacing', true) }),
+      ...(webBrace !== 'either' && { webBrace }),
+    },
   };
 }
 
@@ -239,6 +268,11 @@ const PATHS: Record<string, TrussFormField> = {
   'deflection.total': 'deflectionTotal',
   webBraces: 'webBraces',
   pointLoads: 'pointLoads',
+  'bracing.ceiling': 'ceiling',
+  'bracing.bottomChordBracing': 'bottomChordBracing',
+  'bracing.sheathing': 'sheathing',
+  'bracing.purlinSpacing': 'purlinSpacing',
+  'bracing.webBrace': 'webBrace',
 };
 
 /**
@@ -269,6 +303,8 @@ export function serverFieldErrors(fields: Record<string, string>): {
   }
   return { errors, unplaced };
 }
+
+const isWebBrace = (v: unknown): v is WebBraceKind => WEB_BRACE_KINDS.some((k) => k === v);
 
 const isKind = (v: unknown): v is TrussFormValues['profile'] =>
   PROFILE_KINDS.some((k) => k.kind === v);
@@ -306,6 +342,9 @@ export function designToFormValues(
   const lumberText = (v: unknown) =>
     typeof v === 'string' ? v : Array.isArray(v) && v.length === 1 ? String(v[0]) : '';
   const deflection = obj(design.deflection);
+  const bracing = obj(design.bracing);
+  // Stored before the sheathing flag existed, a purlin spacing alone meant "no sheathing".
+  const sheathing = bracing.sheathing ?? num(bracing.purlinSpacing) === undefined;
   return {
     ...base,
     mark: line.mark,
@@ -340,6 +379,11 @@ export function designToFormValues(
     deflectionLive: plain(deflection.live, base.deflectionLive),
     deflectionTotal: plain(deflection.total, base.deflectionTotal),
     pointLoads: pointLoadRows(design.pointLoads, units),
+    ceiling: bracing.ceiling !== false,
+    bottomChordBracing: long(bracing.bottomChordBracing, ''),
+    sheathing: sheathing !== false,
+    purlinSpacing: long(bracing.purlinSpacing, ''),
+    webBrace: isWebBrace(bracing.webBrace) ? bracing.webBrace : 'either',
   };
 }
 

@@ -1,4 +1,4 @@
-import type { PointLoadKindInput } from '../../../../shared/api/design';
+import type { PointLoadKindInput, WebBraceKind } from '../../../../shared/api/design';
 import type { ProfileKind } from '../../../../shared/engine/profiles/types';
 
 /** One row of the point-load table, as typed: position (feet-inches or mm), loads (lb or kN). */
@@ -48,6 +48,13 @@ export interface TrussFormValues {
   bearingWidth: string;
   deflectionLive: string;
   deflectionTotal: string;
+  /** A ceiling braces the bottom chord; else lateral bracing at `bottomChordBracing` (blank: 10 ft). */
+  ceiling: boolean;
+  bottomChordBracing: string;
+  /** Sheathing braces the top chord; else purlins at `purlinSpacing` (required then). */
+  sheathing: boolean;
+  purlinSpacing: string;
+  webBrace: WebBraceKind;
   /** Concentrated loads on the chords; their messages are under `pointLoads`. */
   pointLoads: PointLoadRow[];
 }
@@ -112,6 +119,11 @@ export function newTrussFormValues(
     bearingWidth: imperial ? '3 1/2"' : '89',
     deflectionLive: '240',
     deflectionTotal: '180',
+    ceiling: true,
+    bottomChordBracing: '',
+    sheathing: true,
+    purlinSpacing: '',
+    webBrace: 'either',
     pointLoads: [],
   };
 }

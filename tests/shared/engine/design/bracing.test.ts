@@ -74,3 +74,25 @@ describe('named bracing', () => {
     expect(web.bracing).toMatch(/or a 2x4 T-brace/);
   });
 });
+
+describe('the web brace the line asks for', () => {
+  const braced = (webBrace?: 'lateral' | 'tBrace') =>
+    designTruss(
+      engineInput({
+        ...kingPost16({ tcll: 20, tcdl: 10, bcll: 0, bcdl: 10 }),
+        webBraces: ['BD'],
+        ...(webBrace && { bracing: { webBrace } }),
+      }),
+    ).members.find((m) => m.id === 'BD')!.bracing;
+
+  it('a continuous lateral brace only, with its diagonal bracing', () => {
+    expect(braced('lateral')).toMatch(/^Continuous lateral brace \(2x4\) at mid-length/);
+    expect(braced('lateral')).toMatch(/diagonal bracing at each end\.$/);
+    expect(braced('lateral')).not.toMatch(/T-brace/);
+  });
+
+  it('a T-brace only, of the web size', () => {
+    expect(braced('tBrace')).toMatch(/^A 2x4 T-brace of the web's grade/);
+    expect(braced('tBrace')).not.toMatch(/lateral brace/);
+  });
+});
