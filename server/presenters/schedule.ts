@@ -33,6 +33,31 @@ async function readyOrders(plantId: number) {
   }));
 }
 
+/** Orders on hold that the board lists for release (held before or after their release). */
+async function heldOrders(plantId: number) {
+  const orders = await Order.findAll({
+    where: {
+      plantId,
+      onHold: true,
+      status: ['accepted', 'deposit_paid', ...SCHEDULED_STATUSES],
+    },
+    include: [{ model: Customer, as: 'customer', attributes: ['name'] }],
+    order: [
+      ['promisedOn', 'ASC NULLS LAST'],
+      ['id', 'ASC'],
+    ],
+  });
+  return orders.map((o) => ({
+    id: o.id,
+    number: o.number,
+    customer: o.customer?.name ?? '',
+    status: o.status,
+    promisedOn: o.promisedOn,
+    holdReason: o.holdReason,
+    version: o.version,
+  }));
+}
+
 /** The board: working days from…to, each table's load against capacity, one block per order per table-day. */
 export async function presentSchedule(
   plantId: number,
@@ -109,5 +134,6 @@ export async function presentSchedule(
       version: o.version,
     })),
     ready: await readyOrders(plantId),
+    held: await heldOrders(plantId),
   };
 }

@@ -131,6 +131,18 @@ export const readyOrderSchema = z.object({
 });
 export type ReadyOrder = z.infer<typeof readyOrderSchema>;
 
+/** An order the plant manager holds: off the schedule until released, with the reason. */
+export const heldOrderSchema = z.object({
+  id: z.number().int(),
+  number: z.string(),
+  customer: z.string(),
+  status: z.string(),
+  promisedOn: z.string().nullable(),
+  holdReason: z.string().nullable(),
+  version: z.number().int(),
+});
+export type HeldOrder = z.infer<typeof heldOrderSchema>;
+
 export const scheduleSchema = z.object({
   from: z.string(),
   days: z.array(z.string()),
@@ -141,6 +153,7 @@ export const scheduleSchema = z.object({
   blocks: z.array(scheduleBlockSchema),
   orders: z.array(scheduleOrderSchema),
   ready: z.array(readyOrderSchema).default([]),
+  held: z.array(heldOrderSchema).default([]),
 });
 export type Schedule = z.infer<typeof scheduleSchema>;
 

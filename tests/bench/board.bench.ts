@@ -88,6 +88,7 @@ function boardOf(): Schedule {
       version: 1,
     })),
     ready: [],
+    held: [],
   };
 }
 

@@ -5,4 +5,6 @@ export const scheduleKeys = {
   all,
   board: (from: string | undefined, days: number) =>
     [...all, 'board', from ?? 'today', days] as const,
+  load: (from: string | undefined, days: number) =>
+    [...all, 'load', from ?? 'today', days] as const,
 };

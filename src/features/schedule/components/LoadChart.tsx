@@ -10,8 +10,10 @@ import {
 } from 'recharts';
 import type { Schedule } from '../../../../shared/api/production';
 
+type Load = Pick<Schedule, 'load'>;
+
 /** Weekly planned hours against capacity, all tables together (lazy-loaded with recharts). */
-export default function LoadChart({ board }: { board: Schedule }) {
+export default function LoadChart({ board }: { board: Load }) {
   const weeks = new Map<string, { week: string; planned: number; capacity: number }>();
   for (const l of board.load) {
     const d = new Date(`${l.date}T00:00:00Z`);
@@ -36,8 +38,20 @@ export default function LoadChart({ board }: { board: Schedule }) {
           <YAxis unit=" h" tick={{ fontSize: 12 }} />
           <Tooltip />
           <Legend />
-          <Bar dataKey="planned" name="Planned hours" stackId="a" fill="#744b2b" />
-          <Bar dataKey="free" name="Free hours" stackId="a" fill="#dfc4a8" />
+          <Bar
+            dataKey="planned"
+            name="Planned hours"
+            stackId="a"
+            fill="#744b2b"
+            isAnimationActive={false}
+          />
+          <Bar
+            dataKey="free"
+            name="Free hours"
+            stackId="a"
+            fill="#dfc4a8"
+            isAnimationActive={false}
+          />
         </BarChart>
       </ResponsiveContainer>
     </div>

@@ -1,16 +1,14 @@
 import {
-  DndContext,
-  KeyboardSensor,
-  PointerSensor,
-  useDraggable,
-  useDroppable,
-  useSensor,
-  useSensors,
-  type DragEndEvent,
-} from '@dnd-kit/core';
-import clsx from 'clsx';
-import { lazy, Suspense, useState } from 'react';
-import type { Schedule, ScheduleBlock } from '../../../../shared/api/production';
+  lazy,
+  startTransition,
+  Suspense,
+  useCallback,
+  useDeferredValue,
+  useEffect,
+  useMemo,
+  useState,
+} from 'react';
+import type { ScheduleBlock } from '../../../../shared/api/production';
 import {
   Alert,
   Button,
@@ -20,13 +18,19 @@ import {
   QueryState,
   Spinner,
 } from '../../../components/ui';
+import { useScheduleLoad } from '../api/get-load';
 import { useSchedule } from '../api/get-schedule';
 import { useMoveOrder, type MoveResult } from '../api/move-order';
-import { hours, moveWarnings } from './board-warnings';
+import { BoardGrid } from './BoardGrid';
+import { indexBoard } from './board-index';
+import { moveWarnings } from './board-warnings';
+import { HeldOrders } from './HeldOrders';
+import { OrderPanel } from './OrderPanel';
 import { ReadyToDeliver } from './ReadyToDeliver';
 
 const LoadChart = lazy(() => import('./LoadChart'));
 const DAYS = 10;
+const CHART_DAYS = 70;
 
 interface Pending {
   block: ScheduleBlock;
@@ -34,106 +38,48 @@ interface Pending {
   warnings: string[];
 }
 
-function Block({
-  block,
-  late,
-  canMove,
-}: {
-  block: ScheduleBlock;
-  late: boolean;
-  canMove: boolean;
-}) {
-  const id = `${block.orderId}|${block.tableId}|${block.date}`;
-  const { attributes, listeners, setNodeRef, transform, isDragging } = useDraggable({
-    id,
-    data: block,
-    disabled: !canMove,
-  });
-  return (
-    <div
-      ref={setNodeRef}
-      {...listeners}
-      {...attributes}
-      data-testid={`block-${block.orderId}-${block.date}`}
-      style={transform ? { transform: `translate(${transform.x}px, ${transform.y}px)` } : undefined}
-      className={clsx(
-        'mb-1 rounded border px-2 py-1 text-xs shadow-sm',
-        late
-          ? 'border-danger-200 bg-danger-50 text-danger-800'
-          : 'border-timber-200 bg-timber-50 text-sand-900',
-        canMove && 'cursor-grab touch-none',
-        isDragging && 'relative z-10 opacity-80',
-      )}
-      aria-label={`Order ${block.number}, ${block.trusses} trusses, ${hours(block.minutes)}${late ? ', late' : ''}`}
-    >
-      <div className="font-semibold">
-        {block.number}
-        {block.pinned ? ' ·  moved' : ''}
-      </div>
-      <div className="truncate">{block.customer}</div>
-      <div>
-        {block.marks.join(', ')} · {block.trusses} · {hours(block.minutes)}
-      </div>
-    </div>
-  );
+/** Runs `f` when the browser is idle (or soon, where it cannot say), in a transition. */
+function whenIdle(f: () => void): () => void {
+  const run = () => startTransition(f);
+  if ('requestIdleCallback' in window) {
+    const id = window.requestIdleCallback(run, { timeout: 1500 });
+    return () => window.cancelIdleCallback(id);
+  }
+  const id = setTimeout(run, 50);
+  return () => clearTimeout(id);
 }
 
-function Cell({
-  board,
-  tableId,
-  date,
-  canMove,
-}: {
-  board: Schedule;
-  tableId: number;
-  date: string;
+/** What the signed-in role may do on the board (the server checks the same). */
+export interface BoardPermissions {
+  /** Foreman and plant manager drag orders and sign off deliveries. */
   canMove: boolean;
-}) {
-  const { setNodeRef, isOver } = useDroppable({
-    id: `${tableId}|${date}`,
-    data: { tableId, date },
-  });
-  const load = board.load.find((l) => l.tableId === tableId && l.date === date);
-  const share = load && load.capacity > 0 ? load.used / load.capacity : 0;
-  const blocks = board.blocks.filter((b) => b.tableId === tableId && b.date === date);
-  return (
-    <td
-      ref={setNodeRef}
-      data-testid={`cell-${tableId}-${date}`}
-      className={clsx('h-28 min-w-32 border border-sand-200 p-1 align-top', isOver && 'bg-info-50')}
-    >
-      <div className="mb-1 flex items-center gap-1 text-[11px] text-sand-600">
-        <div className="h-1.5 flex-1 rounded bg-sand-100">
-          <div
-            className={clsx('h-1.5 rounded', share > 0.999 ? 'bg-warning-700' : 'bg-success-700')}
-            style={{ width: `${Math.min(100, share * 100)}%` }}
-          />
-        </div>
-        {load ? `${hours(load.used)} / ${hours(load.capacity)}` : null}
-      </div>
-      {blocks.map((b) => (
-        <Block
-          key={`${b.orderId}-${b.date}`}
-          block={b}
-          late={board.orders.find((o) => o.id === b.orderId)?.late ?? false}
-          canMove={canMove}
-        />
-      ))}
-    </td>
-  );
+  /** The plant manager holds and releases orders. */
+  canHoldRelease: boolean;
 }
 
-/** The schedule board: tables × working days, load against capacity, an order per block. */
-export function SchedulePage({ canMove }: { canMove: boolean }) {
+/**
+ * The schedule board: tables × working days, load against capacity, an order per block. The grid
+ * is drawn first (a week at a time); the load chart and its library only once the grid is done.
+ */
+export function SchedulePage({ canMove, canHoldRelease }: BoardPermissions) {
   const query = useSchedule(undefined, DAYS);
-  const chart = useSchedule(undefined, 70);
+  const chart = useScheduleLoad(undefined, CHART_DAYS);
+  // The board is drawn in a background render React can interrupt, not in one long task.
+  const board = useDeferredValue(query.data);
+  const index = useMemo(() => (board ? indexBoard(board) : null), [board]);
   const move = useMoveOrder();
   const [pending, setPending] = useState<Pending | null>(null);
   const [result, setResult] = useState<(MoveResult & { number: string }) | null>(null);
-  const sensors = useSensors(
-    useSensor(PointerSensor, { activationConstraint: { distance: 6 } }),
-    useSensor(KeyboardSensor),
+  const [selected, setSelected] = useState<ScheduleBlock | null>(null);
+  const [notice, setNotice] = useState<string | null>(null);
+  const [gridDone, setGridDone] = useState(false);
+  const [chartShown, setChartShown] = useState(false);
+  useEffect(
+    () => (gridDone && !chartShown ? whenIdle(() => setChartShown(true)) : undefined),
+    [gridDone, chartShown],
   );
+  const onComplete = useCallback(() => setGridDone(true), []);
+  const onSelect = useCallback((b: ScheduleBlock) => setSelected(b), []);
 
   const doMove = (p: Pending) => {
     setPending(null);
@@ -142,12 +88,8 @@ export function SchedulePage({ canMove }: { canMove: boolean }) {
       { onSuccess: (r) => setResult({ ...r, number: p.block.number }) },
     );
   };
-
-  const onDragEnd = (board: Schedule) => (e: DragEndEvent) => {
-    const block = e.active.data.current as ScheduleBlock | undefined;
-    const target = e.over?.data.current as { tableId: number; date: string } | undefined;
-    if (!block || !target) return;
-    if (block.tableId === target.tableId && block.date === target.date) return;
+  const onDrop = (block: ScheduleBlock, target: Pending['target']) => {
+    if (!board) return;
     const p = { block, target, warnings: moveWarnings(board, block, target) };
     if (p.warnings.length) setPending(p);
     else doMove(p);
@@ -159,8 +101,8 @@ export function SchedulePage({ canMove }: { canMove: boolean }) {
         title="Schedule"
         description={
           canMove
-            ? 'Drag an order to another day or table; it then starts there and the rest re-plans around it.'
-            : 'Tables and days with their load; the foreman moves orders.'
+            ? 'Drag an order to another day or table; it then starts there and the rest re-plans around it. Tap an order for its details.'
+            : 'Tables and days with their load; the foreman moves orders. Tap an order for its details.'
         }
       />
       {pending ? (
@@ -188,57 +130,54 @@ export function SchedulePage({ canMove }: { canMove: boolean }) {
             : `Order ${result.number} moved; it finishes ${result.plannedFinishOn}.`}
         </Alert>
       ) : null}
-      {query.data ? <ReadyToDeliver orders={query.data.ready} canSignOff={canMove} /> : null}
+      {notice ? (
+        <Alert tone="success" className="mb-4">
+          {notice}
+        </Alert>
+      ) : null}
+      {board ? <ReadyToDeliver orders={board.ready} canSignOff={canMove} /> : null}
+      {board ? (
+        <HeldOrders orders={board.held} canRelease={canHoldRelease} onDone={setNotice} />
+      ) : null}
+      {selected ? (
+        <OrderPanel
+          block={selected}
+          order={board?.orders.find((o) => o.id === selected.orderId)}
+          canHoldRelease={canHoldRelease}
+          onClose={() => setSelected(null)}
+          onDone={setNotice}
+        />
+      ) : null}
       <QueryState query={query} what="the schedule">
-        {(board) => (
-          <Card className="overflow-x-auto p-0">
-            <DndContext sensors={sensors} onDragEnd={onDragEnd(board)}>
-              <table className="w-full border-collapse text-sm">
-                <thead>
-                  <tr>
-                    <th className="w-28 border border-sand-200 bg-sand-50 p-2 text-left">Table</th>
-                    {board.days.map((d) => (
-                      <th
-                        key={d}
-                        className="border border-sand-200 bg-sand-50 p-2 text-left font-medium"
-                      >
-                        {new Date(`${d}T00:00:00Z`).toLocaleDateString('en-GB', {
-                          weekday: 'short',
-                          day: 'numeric',
-                          month: 'short',
-                          timeZone: 'UTC',
-                        })}
-                      </th>
-                    ))}
-                  </tr>
-                </thead>
-                <tbody>
-                  {board.tables.map((t) => (
-                    <tr key={t.id}>
-                      <th className="border border-sand-200 bg-sand-50 p-2 text-left align-top">
-                        {t.name}
-                        <div className="text-xs font-normal text-sand-600">
-                          {t.crew} crew × {t.shifts} shift{t.shifts > 1 ? 's' : ''}
-                        </div>
-                      </th>
-                      {board.days.map((d) => (
-                        <Cell key={d} board={board} tableId={t.id} date={d} canMove={canMove} />
-                      ))}
-                    </tr>
-                  ))}
-                </tbody>
-              </table>
-            </DndContext>
-          </Card>
-        )}
+        {() =>
+          board && index ? (
+            <Card className="overflow-x-auto p-0">
+              <BoardGrid
+                board={board}
+                index={index}
+                canMove={canMove}
+                selectedOrder={selected?.orderId ?? null}
+                onSelect={onSelect}
+                onDrop={onDrop}
+                onComplete={onComplete}
+              />
+            </Card>
+          ) : (
+            <Spinner className="p-4" label="Drawing the schedule…" />
+          )
+        }
       </QueryState>
       <h2 className="mt-8 mb-2 text-lg font-semibold">Load in the coming weeks</h2>
       <QueryState query={chart} what="the load chart">
-        {(board) => (
+        {(load) => (
           <Card>
-            <Suspense fallback={<Spinner label="Loading chart" />}>
-              <LoadChart board={board} />
-            </Suspense>
+            {chartShown ? (
+              <Suspense fallback={<Spinner label="Loading chart" />}>
+                <LoadChart board={load} />
+              </Suspense>
+            ) : (
+              <Spinner label="Loading chart" />
+            )}
           </Card>
         )}
       </QueryState>

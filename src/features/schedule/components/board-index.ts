@@ -1,0 +1,43 @@
+import type { Schedule, ScheduleBlock } from '../../../../shared/api/production';
+
+type Load = Schedule['load'][number];
+
+/** The board's lookups, built once per answer instead of a search per cell and per block. */
+export interface BoardIndex {
+  /** Blocks of one table-day, keyed `tableId|date`. */
+  blocks: Map<string, ScheduleBlock[]>;
+  /** Load of one table-day, keyed `tableId|date`. */
+  load: Map<string, Load>;
+  /** Orders planned to finish after their promised date. */
+  late: Set<number>;
+  /** Column headings ("Wed 2 Dec") by date. */
+  dayLabels: Map<string, string>;
+}
+
+// One formatter for every heading: building one per call is what makes toLocaleDateString slow.
+const DAY = new Intl.DateTimeFormat('en-GB', {
+  weekday: 'short',
+  day: 'numeric',
+  month: 'short',
+  timeZone: 'UTC',
+});
+
+/** The key of one table-day. */
+export const cellKey = (tableId: number, date: string) => `${tableId}|${date}`;
+
+/** Groups the board's blocks and load by table-day, the late orders and the day headings. */
+export function indexBoard(board: Schedule): BoardIndex {
+  const blocks = new Map<string, ScheduleBlock[]>();
+  for (const b of board.blocks) {
+    const k = cellKey(b.tableId, b.date);
+    const list = blocks.get(k);
+    if (list) list.push(b);
+    else blocks.set(k, [b]);
+  }
+  return {
+    blocks,
+    load: new Map(board.load.map((l) => [cellKey(l.tableId, l.date), l])),
+    late: new Set(board.orders.filter((o) => o.late).map((o) => o.id)),
+    dayLabels: new Map(board.days.map((d) => [d, DAY.format(new Date(`${d}T00:00:00Z`))])),
+  };
+}
