@@ -80,7 +80,17 @@ export function loadRows(input: DesignInput): [string, string][] {
   }
   if (l.windUplift !== undefined) windParts.push(`net uplift ${a(l.windUplift)}`);
   rows.push(['Wind', windParts.length ? windParts.join('; ') : 'None']);
-  rows.push(['Concentrated loads', 'None (uniform area loads only)']);
+  const kinds = { roofLive: 'Lr', snow: 'S', floor: 'L' } as const;
+  const force = input.units === 'imperial' ? 'lb' : 'kN';
+  const points = (input.pointLoads ?? []).map(
+    (p) =>
+      `${p.label ? `${p.label}: ` : ''}D ${num(p.dead)} + ${kinds[p.kind]} ${num(p.live)} ${force} ` +
+      `on the ${p.chord} chord at ${inputLength(input, p.x)} from the left heel`,
+  );
+  rows.push([
+    'Concentrated loads',
+    points.length ? points.join('; ') : 'None (uniform area loads only)',
+  ]);
   return rows;
 }
 

@@ -182,17 +182,26 @@ export function designDrawingSheet(ctx: DesignDrawingContext): DesignDrawingShee
     ['Total-load vertical', dText(defl.total)],
     [
       'Horizontal',
-      `Bearing ${d.reactions[d.reactions.length - 1]?.joint ?? ''} slides (roller); horizontal movement is not calculated by this engine version`,
+      d.additional?.rollerMovement
+        ? `${d.additional.rollerMovement.movement} ${d.units.length === 'mm' ? 'mm' : 'in.'} at roller ${d.additional.rollerMovement.joint} (${d.additional.rollerMovement.load})`
+        : `Bearing ${d.reactions[d.reactions.length - 1]?.joint ?? ''} slides (roller); horizontal movement is not calculated for this design`,
     ],
   ];
 
   const connections: Rows = [
-    ['Truss-to-girder', 'None: carries no other truss; bearings anchored for the reactions'],
+    [
+      'Truss-to-girder',
+      input?.pointLoads?.length
+        ? 'Girder: carries the concentrated loads listed above; each carried truss hangs on a connector the building designer specifies for its reaction'
+        : 'None: carries no other truss; bearings anchored for the reactions',
+    ],
     [
       'Ply-to-ply',
-      line.plies > 1
-        ? `${line.plies} plies, each plated on both faces, fastened together per the reviewer's ply-to-ply schedule`
-        : 'Single ply: none',
+      d.plyConnections?.length
+        ? `${line.plies} plies: ${d.plyConnections.map((c) => c.text).join('; ')}`
+        : line.plies > 1
+          ? `${line.plies} plies, each plated on both faces, fastened together per the reviewer's ply-to-ply schedule`
+          : 'Single ply: none',
     ],
   ];
 
