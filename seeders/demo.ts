@@ -2,6 +2,7 @@
  * The demo scenario — every name, address and e-mail here is invented. Idempotent: running it again
  * finds what exists and adds only what is missing. Never used by tests.
  */
+import { seedShopPlans } from './shopPlans';
 import bcrypt from 'bcryptjs';
 import { Customer, Job, Plant, User } from '../server/models';
 import { DEMO_PASSWORD, DEMO_SIGN_INS } from '../shared/api/demo';
@@ -165,5 +166,6 @@ export async function seedDemo() {
   }
   await seedOrders(plant);
   await seedPriceBook(plant);
+  await seedShopPlans(plant);
   return plant;
 }

@@ -8,4 +8,6 @@ import { all, hasRole, samePlant } from './predicates';
 export const shopPolicy = {
   list: hasRole('foreman', 'sales', 'admin'),
   cutList: all<Order>(hasRole('foreman', 'sales', 'admin'), samePlant),
+  /** Whoever reads the cut list may ask for a new plan. */
+  replan: all<Order>(hasRole('foreman', 'sales', 'admin'), samePlant),
 };

@@ -2,11 +2,16 @@
  * An order's lumber plan: per lumber, the cut list's pieces (from `lumberDemand`) cut from the
  * plant's stock (its settings, else the invented demo stock) by the cutting-stock engine,
  * presented in inches and feet for the shop. Each lumber is planned separately; the shop-plan job
- * (`shopPlanJob.ts`) runs it and stores the result.
+ * (`shopPlan/job.ts`) runs it and stores the result.
  */
 import type { LumberPlanBody, LumberPlanSection } from '../../shared/api/lumberPlan';
 import { stockFor as stockEntryFor, type StockSettings } from '../../shared/api/stock';
-import { planCutting, type CuttingProgress } from '../../shared/engine/cutting';
+import {
+  planCuttingSteps,
+  type CuttingInput,
+  type CuttingOptions,
+  type CuttingProgress,
+} from '../../shared/engine/cutting';
 import { DESIGN_CAUTIONS } from '../../shared/engine/design';
 import { isEngineError } from '../../shared/engine/errors';
 import { nominalBoardFeetPerFoot } from '../../shared/engine/lumber/cost';
@@ -43,20 +48,31 @@ function groupBoards(boards: Board[]) {
   return [...groups.values()];
 }
 
-/** Where a plan is: which lumber (n of N), the solver's stage and its column-generation rounds. */
-export interface PlanProgress {
-  lumber: string;
-  section: number;
-  sections: number;
-  stage: CuttingProgress['stage'] | 'starting';
-  iterations: number;
+/**
+ * Where a plan is: which lumber (n of N), and inside its solve the solver's stage, rounds, steps
+ * and gap to the lower bound (`starting` before the solve).
+ */
+export type PlanProgress = { lumber: string; section: number; sections: number } & (
+  CuttingProgress | (Omit<CuttingProgress, 'stage'> & { stage: 'starting' })
+);
+
+type StepListener = (p: CuttingProgress) => Promise<void> | void;
+
+/** Drives the solver's steps, awaiting the listener between them (it may store progress). */
+async function solve(input: CuttingInput, options: CuttingOptions, onStep?: StepListener) {
+  const steps = planCuttingSteps(input, options);
+  for (;;) {
+    const next = steps.next();
+    if (next.done) return next.value;
+    await onStep?.(next.value);
+  }
 }
 
 async function planSection(
   lumber: string,
   rows: PieceDemandRow[],
   settings: StockSettings,
-  onProgress?: (p: CuttingProgress) => void,
+  onStep?: StepListener,
 ): Promise<LumberPlanSection> {
   const pieceCount = rows.reduce((n, r) => n + r.quantity, 0);
   const entry = stockEntryFor(settings, lumber);
@@ -70,7 +86,7 @@ async function planSection(
   }
   const stocks = [...entry.stocks].sort((a, b) => a.lengthFt - b.lengthFt);
   try {
-    const plan = planCutting(
+    const plan = await solve(
       {
         stocks: stocks.map((s) => ({
           length: s.lengthFt * MM_PER_FOOT,
@@ -81,7 +97,8 @@ async function planSection(
         trim: settings.trimIn * MM_PER_INCH,
         pieces: rows.map((r) => ({ length: r.lengthMm, quantity: r.quantity, id: r.mark })),
       },
-      { lp: await loadLpSolver(), timeLimitMs: 500, onProgress },
+      { lp: await loadLpSolver(), timeLimitMs: 500 },
+      onStep,
     );
     const feet = (boards: { stock: number }[]) =>
       boards.reduce((s, b) => s + boardFeet(lumber, b.stock / MM_PER_FOOT), 0);
@@ -128,10 +145,20 @@ async function planSection(
   }
 }
 
+/** Progress of a lumber whose solve has not begun. */
+const NOT_STARTED = {
+  iterations: 0,
+  steps: 0,
+  piecesLeft: null,
+  lowerBound: 0,
+  bestCost: null,
+  gapPercent: null,
+};
+
 /**
  * The lumber plan of an order whose lines are all approved, from its cut list. `onProgress` hears
- * of each lumber before it is planned and after (with the solver's stage and rounds); the plan
- * waits for it, so a caller may record progress between lumbers.
+ * of each lumber before it is planned and of every step of its solve (rounds, dive steps, gap to
+ * the bound); the plan waits for it, so a caller may store progress inside a solve.
  */
 export async function lumberPlanFor(
   order: Pick<Order, 'id' | 'number'>,
@@ -143,10 +170,11 @@ export async function lumberPlanFor(
   const demand = [...lumberDemand(cutList)];
   for (const [i, [lumber, rows]] of demand.entries()) {
     const at = { lumber, section: i + 1, sections: demand.length };
-    let last: CuttingProgress = { stage: 'column-generation', iterations: 0 };
-    await onProgress?.({ ...at, stage: 'starting', iterations: 0 });
-    sections.push(await planSection(lumber, rows, stock.settings, (p) => (last = p)));
-    await onProgress?.({ ...at, ...last });
+    const pieces = rows.reduce((n, r) => n + r.quantity, 0);
+    await onProgress?.({ ...at, ...NOT_STARTED, pieces, stage: 'starting' });
+    sections.push(
+      await planSection(lumber, rows, stock.settings, (p) => onProgress?.({ ...at, ...p })),
+    );
   }
   const planned = sections.flatMap((s) => (s.plan ? [s.plan] : []));
   const sum = (f: (p: NonNullable<LumberPlanSection['plan']>) => number) =>

@@ -1,70 +1,39 @@
 import { execFileSync } from 'node:child_process';
-import type { Server } from 'node:http';
-import type { BrowserContext, Page } from 'playwright-core';
-import { afterAll, beforeAll, describe, expect, it } from 'vitest';
-import type { Order, User } from '../../server/models';
-import { launchBrowser, listen, SCREENSHOTS, signInAs } from '../support/browser';
-import { testApp, testMailer } from '../support/db';
-import {
-  createCustomer,
-  createJob,
-  createLine,
-  createOrder,
-  createPlant,
-  createUser,
-} from '../support/factories';
+import { describe, expect, it } from 'vitest';
+import { SCREENSHOTS } from '../support/browser';
+import { browserOrder, TABLET } from '../support/browserOrder';
 
-let browser: BrowserContext;
-let closeBrowser: () => Promise<void>;
-let server: Server;
-let base: string;
-let foreman: User;
-let admin: User;
-let order: Order;
-let app: ReturnType<typeof testApp>;
-
-const signIn = (page: Page, user: User) => signInAs(browser, page, base, user.email);
-
-beforeAll(async () => {
-  const plant = await createPlant({ name: 'Lumber Plan Test Plant' });
-  foreman = await createUser({ role: 'foreman', plant });
-  admin = await createUser({ role: 'admin', plant });
-  const customer = await createCustomer({ plant, name: 'Alder Creek Homes' });
-  const job = await createJob({ customer, name: 'Alder Creek, lot 7' });
-  order = await createOrder({ job });
-  await createLine({ order, mark: 'T1', reviewState: 'approved' });
-  await createLine({
-    order,
-    mark: 'T2',
-    reviewState: 'approved',
-    design: {
-      units: 'imperial',
-      profile: 'howe',
-      span: 336,
-      pitch: 6,
-      heelHeight: 4,
-      overhang: 18,
-      loads: { tcll: 20, tcdl: 10, bcll: 0, bcdl: 10 },
+// With the job queue the app runs the shop-plan worker, which makes the plans.
+const fx = browserOrder({
+  plant: 'Lumber Plan Test Plant',
+  customer: 'Alder Creek Homes',
+  job: 'Alder Creek, lot 7',
+  roles: ['foreman', 'admin'],
+  lines: [
+    { mark: 'T1' },
+    {
+      mark: 'T2',
+      design: {
+        units: 'imperial',
+        profile: 'howe',
+        span: 336,
+        pitch: 6,
+        heelHeight: 4,
+        overhang: 18,
+        loads: { tcll: 20, tcdl: 10, bcll: 0, bcdl: 10 },
+      },
     },
-  });
-  // With a mailer the app runs its job queue, where the shop-plan worker makes the plans.
-  app = testApp({ demo: true }, 'dist/client', await testMailer());
-  ({ server, url: base } = await listen(app));
-  ({ browser, close: closeBrowser } = await launchBrowser());
-});
-
-afterAll(async () => {
-  await closeBrowser?.();
-  server?.close();
-  await (app?.locals.close as (() => Promise<void>) | undefined)?.();
+  ],
+  demo: true,
+  queue: true,
 });
 
 describe('lumber plans, in a browser', () => {
   it('the foreman opens an approved order’s lumber plan, has it made and prints it', async () => {
-    const page = await browser.newPage();
-    await page.setViewportSize({ width: 1024, height: 768 }); // the shop floor's tablet
-    await signIn(page, foreman);
-    await page.goto(`${base}/orders/${order.id}`);
+    const page = await fx.browser.newPage();
+    await page.setViewportSize(TABLET);
+    await fx.signIn(page, 'foreman');
+    await page.goto(`${fx.base}/orders/${fx.order.id}`);
     await page.getByRole('link', { name: 'Lumber plan' }).click();
     await page.waitForURL(/\/shop\/orders\/\d+\/lumber-plan$/);
     await expect
@@ -105,15 +74,17 @@ describe('lumber plans, in a browser', () => {
       `${SCREENSHOTS}/lumber-plan-print.pdf`,
       `${SCREENSHOTS}/lumber-plan-print`,
     ]);
-    const server = await page.request.get(`${base}/api/shop/orders/${order.id}/lumber-plan.pdf`);
+    const server = await page.request.get(
+      `${fx.base}/api/shop/orders/${fx.order.id}/lumber-plan.pdf`,
+    );
     expect(server.headers()['content-type']).toBe('application/pdf');
     await page.close();
   });
 
   it('the plant manager keeps the stock lengths, prices and counts on hand', async () => {
-    const page = await browser.newPage();
+    const page = await fx.browser.newPage();
     await page.setViewportSize({ width: 1440, height: 900 });
-    await signIn(page, admin);
+    await fx.signIn(page, 'admin');
     await page.getByRole('button', { name: 'Plant' }).click(); // the plant manager's settings menu
     await page.getByRole('link', { name: 'Lumber stock' }).first().click();
     await page.waitForURL(/\/stock$/);
@@ -128,10 +99,10 @@ describe('lumber plans, in a browser', () => {
   });
 
   it('after the stock changed, the plan says it is out of date until the foreman re-plans', async () => {
-    const page = await browser.newPage();
-    await page.setViewportSize({ width: 1024, height: 768 });
-    await signIn(page, foreman);
-    await page.goto(`${base}/shop/orders/${order.id}/lumber-plan`);
+    const page = await fx.browser.newPage();
+    await page.setViewportSize(TABLET);
+    await fx.signIn(page, 'foreman');
+    await page.goto(`${fx.base}/shop/orders/${fx.order.id}/lumber-plan`);
     await expect
       .poll(() => page.getByText(/the stock settings changed/).count(), { timeout: 30000 })
       .toBe(1);

@@ -1,67 +1,40 @@
-import { afterAll, beforeAll, describe, expect, it } from 'vitest';
-import type { BrowserContext, Page } from 'playwright-core';
-import type { Server } from 'node:http';
+import { describe, expect, it } from 'vitest';
 import { execFileSync } from 'node:child_process';
 import { existsSync, writeFileSync } from 'node:fs';
-import { testApp, testMailer } from '../support/db';
-import {
-  createCustomer,
-  createJob,
-  createLine,
-  createOrder,
-  createPlant,
-  createUser,
-} from '../support/factories';
-import { launchBrowser, listen, SCREENSHOTS, signInAs } from '../support/browser';
-import { Quote, type Job, type Order, type User } from '../../server/models';
+import { SCREENSHOTS } from '../support/browser';
+import { browserOrder } from '../support/browserOrder';
+import { Quote } from '../../server/models';
 
-let browser: BrowserContext;
-let closeBrowser: () => Promise<void>;
-let server: Server;
-let base: string;
-let sales: User;
-let admin: User;
-let order: Order;
-let job: Job;
-
-const signIn = (page: Page, user: User) => signInAs(browser, page, base, user.email);
-
-beforeAll(async () => {
-  const plant = await createPlant({ name: 'Quotes Test Plant' });
-  sales = await createUser({ role: 'sales', plant });
-  admin = await createUser({ role: 'admin', plant });
-  const customer = await createCustomer({ plant, name: 'Harrow Field Homes', terms: 'deposit' });
-  job = await createJob({ customer, name: 'Harrow Field, lot 2' });
-  order = await createOrder({ job });
-  // Two lines whose designs the server computed and an engineer approved.
-  await createLine({ order, mark: 'T1', reviewState: 'approved' });
-  await createLine({
-    order,
-    mark: 'T2',
-    reviewState: 'approved',
-    design: {
-      units: 'imperial',
-      profile: 'kingPost',
-      span: 120,
-      pitch: 6,
-      overhang: 12,
-      loads: { tcll: 20, tcdl: 10, bcll: 0, bcdl: 10 },
+// Two lines whose designs the server computed and an engineer approved.
+const fx = browserOrder({
+  plant: 'Quotes Test Plant',
+  customer: 'Harrow Field Homes',
+  terms: 'deposit',
+  job: 'Harrow Field, lot 2',
+  roles: ['sales', 'admin'],
+  lines: [
+    { mark: 'T1' },
+    {
+      mark: 'T2',
+      design: {
+        units: 'imperial',
+        profile: 'kingPost',
+        span: 120,
+        pitch: 6,
+        overhang: 12,
+        loads: { tcll: 20, tcdl: 10, bcll: 0, bcdl: 10 },
+      },
     },
-  });
-  const app = testApp({ demo: true }, 'dist/client', await testMailer());
-  ({ server, url: base } = await listen(app));
-  ({ browser, close: closeBrowser } = await launchBrowser());
-});
-
-afterAll(async () => {
-  await closeBrowser?.();
-  server?.close();
+  ],
+  demo: true,
+  queue: true,
 });
 
 describe('quotes, e-mail and plans, in a browser', () => {
   it('sales creates and sends the quote; the plant manager finds it in the demo inbox', async () => {
-    const page = await browser.newPage();
-    await signIn(page, sales);
+    const { base, order } = fx;
+    const page = await fx.browser.newPage();
+    await fx.signIn(page, 'sales');
     await page.goto(`${base}/orders/${order.id}`);
     await page.getByRole('link', { name: 'Quotes' }).click();
     await expect.poll(() => page.locator('h1').first().textContent()).toMatch(/^Quotes for order /);
@@ -87,7 +60,7 @@ describe('quotes, e-mail and plans, in a browser', () => {
       ]);
     }
 
-    await signIn(page, admin);
+    await fx.signIn(page, 'admin');
     await page.goto(`${base}/inbox`);
     await expect.poll(() => page.locator('h1').first().textContent()).toBe('Demo inbox');
     const subject = `Truss quote ${quote!.reference}`;
@@ -97,8 +70,9 @@ describe('quotes, e-mail and plans, in a browser', () => {
   });
 
   it('sales uploads a builder’s plan to the job and sees the progress bar', async () => {
-    const page = await browser.newPage();
-    await signIn(page, sales);
+    const { base, job } = fx;
+    const page = await fx.browser.newPage();
+    await fx.signIn(page, 'sales');
     await page.goto(`${base}/jobs/${job.id}`);
     await page.getByRole('link', { name: 'Plans' }).click();
     await expect.poll(() => page.locator('h1').first().textContent()).toMatch(/^Plans for /);
@@ -108,7 +82,7 @@ describe('quotes, e-mail and plans, in a browser', () => {
       Buffer.alloc(3 * 1024 * 1024, 0x20),
       Buffer.from('\n%%EOF\n'),
     ]);
-    const cdp = await browser.newCDPSession(page);
+    const cdp = await fx.browser.newCDPSession(page);
     await cdp.send('Network.enable');
     await cdp.send('Network.emulateNetworkConditions', {
       offline: false,

@@ -1,31 +1,8 @@
-import { afterAll, beforeAll, describe, expect, it } from 'vitest';
-import type { BrowserContext, Page } from 'playwright-core';
-import type { Server } from 'node:http';
+import { describe, expect, it } from 'vitest';
 import { execFileSync } from 'node:child_process';
 import { writeFileSync } from 'node:fs';
-import { testApp } from '../support/db';
-import {
-  createCustomer,
-  createJob,
-  createLine,
-  createOrder,
-  createPlant,
-  createUser,
-} from '../support/factories';
-import { launchBrowser, listen, SCREENSHOTS, signInAs } from '../support/browser';
-import type { Order, OrderLine, User } from '../../server/models';
-
-let browser: BrowserContext;
-let closeBrowser: () => Promise<void>;
-let server: Server;
-let base: string;
-let foreman: User;
-let order: Order;
-let t1: OrderLine;
-
-const TABLET = { width: 1024, height: 768 };
-
-const signIn = (page: Page, user: User) => signInAs(browser, page, base, user.email);
+import { SCREENSHOTS } from '../support/browser';
+import { browserOrder, TABLET } from '../support/browserOrder';
 
 /** Keep a PDF under test-results/e2e and render its first page to PNG (pdftoppm) to look at. */
 function keepPdf(name: string, pdf: Buffer) {
@@ -44,28 +21,21 @@ function keepPdf(name: string, pdf: Buffer) {
   ]);
 }
 
-beforeAll(async () => {
-  const plant = await createPlant({ name: 'Shop Paper Test Plant' });
-  foreman = await createUser({ role: 'foreman', plant });
-  const customer = await createCustomer({ plant, name: 'Alder Creek Homes' });
-  order = await createOrder({ job: await createJob({ customer, name: 'Alder Creek, lot 9' }) });
-  t1 = await createLine({ order, mark: 'T1', reviewState: 'approved' });
-  await createLine({ order, mark: 'G1', quantity: 2, plies: 2, reviewState: 'approved' });
-  const app = testApp({ demo: true }, 'dist/client');
-  ({ server, url: base } = await listen(app));
-  ({ browser, close: closeBrowser } = await launchBrowser());
-});
-
-afterAll(async () => {
-  await closeBrowser?.();
-  server?.close();
+const fx = browserOrder({
+  plant: 'Shop Paper Test Plant',
+  customer: 'Alder Creek Homes',
+  job: 'Alder Creek, lot 9',
+  roles: ['foreman'],
+  lines: [{ mark: 'T1' }, { mark: 'G1', quantity: 2, plies: 2 }],
+  demo: true,
 });
 
 describe('shop paper, in a browser on a tablet', () => {
   it('the foreman prints the tags and a shop drawing', async () => {
-    const page = await browser.newPage();
+    const { base, order } = fx;
+    const page = await fx.browser.newPage();
     await page.setViewportSize(TABLET);
-    await signIn(page, foreman);
+    await fx.signIn(page, 'foreman');
     await page.goto(`${base}/orders/${order.id}`);
     await page.getByRole('link', { name: 'Shop paper' }).click();
     await expect
@@ -108,9 +78,11 @@ describe('shop paper, in a browser on a tablet', () => {
   });
 
   it('a tag’s QR address opens that truss’s shop drawing', async () => {
-    const page = await browser.newPage();
+    const { base, order } = fx;
+    const t1 = fx.lines[0]!;
+    const page = await fx.browser.newPage();
     await page.setViewportSize(TABLET);
-    await signIn(page, foreman);
+    await fx.signIn(page, 'foreman');
     await page.goto(`${base}/orders/${order.id}/shop-paper/lines/${t1.id}?truss=3`);
     await page.getByText(/truss 3 of 4/).waitFor();
     await page.getByTestId('shop-drawing').waitFor();

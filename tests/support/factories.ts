@@ -2,8 +2,10 @@ import bcrypt from 'bcryptjs';
 import { randomUUID } from 'node:crypto';
 import type { Role } from '../../shared/api/roles';
 import { nextFreeMark } from '../../shared/api/marks';
-import { Customer, Job, Order, OrderLine, Plant, User } from '../../server/models';
+import { Customer, Job, Order, OrderLine, Plant, ShopPlan, User } from '../../server/models';
+import { queueShopPlan } from '../../server/commands/shopPlans';
 import { computeDesign } from '../../server/services/design';
+import { runShopPlan } from '../../server/services/shopPlan/job';
 import { testSequelize } from './db';
 
 export const TEST_PASSWORD = 'correct horse battery';
@@ -128,4 +130,14 @@ export async function createLine(
 async function nextTestMark(orderId: number) {
   const lines = await OrderLine.findAll({ where: { orderId }, attributes: ['mark'] });
   return nextFreeMark(lines.map((l) => l.mark));
+}
+
+/**
+ * The order's stored shop plan (cut list and lumber plan), made by the real shop-plan job as the
+ * job queue's worker would run it. The order's lines must all be approved.
+ */
+export async function createShopPlan(order: Order) {
+  await testSequelize().transaction((t) => queueShopPlan(t, order, null));
+  await runShopPlan(order.id);
+  return ShopPlan.findOne({ where: { orderId: order.id }, rejectOnEmpty: true });
 }

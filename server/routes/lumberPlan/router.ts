@@ -1,15 +1,14 @@
 import { Router, type Response } from 'express';
-import { stockFor } from '../../commands/stockSettings';
 import { replanOrder } from '../../commands/shopPlans';
 import { conflict } from '../../errors';
 import { requireUser } from '../../middleware/auth';
-import { OrderLine, Plant, ShopPlan, type Order } from '../../models';
+import { OrderLine, Plant, type Order } from '../../models';
 import { authorize } from '../../policies/predicates';
 import { lumberPlanPolicy } from '../../policies/lumberPlan';
 import { presentShopPlan } from '../../presenters/shopPlan';
 import { lumberPlanCsv } from '../../services/lumberPlanCsv';
 import { renderLumberPlanPdf } from '../../services/lumberPlanPdf';
-import { designsHash, stockHash } from '../../services/shopPlan/inputs';
+import { noStoredPlan, storedPlanOf } from '../../services/shopPlan/current';
 import { handle, load } from '../load';
 import { findOrder } from '../orders/queries';
 
@@ -26,24 +25,14 @@ async function statusOf(res: Response) {
   if (lines.length === 0 || lines.some((l) => l.reviewState !== 'approved')) {
     throw conflict('The lumber plan is ready once every line’s design is approved.');
   }
-  const row = await ShopPlan.findOne({ where: { orderId: order.id } });
-  const now = {
-    designsHash: designsHash(lines),
-    stockHash: stockHash(await stockFor(order.plantId)),
-  };
+  const { row, now } = await storedPlanOf(order, lines);
   return { status: presentShopPlan(order, row, now), row };
 }
 
 /** The stored plan for CSV and PDF (409 until the first one is made). */
 async function storedPlan(res: Response) {
   const { status } = await statusOf(res);
-  if (!status.plan) {
-    throw conflict(
-      status.run.state === 'failed'
-        ? `The lumber plan could not be made: ${status.run.error ?? 'unknown error'}`
-        : 'The lumber plan is still being made; try again in a moment.',
-    );
-  }
+  if (!status.plan) throw noStoredPlan('lumber plan', status.run);
   return { plan: status.plan, madeAt: status.madeAt, outOfDate: status.outOfDate };
 }
 
@@ -94,7 +83,7 @@ export function lumberPlanRouter() {
       const pdf = await renderLumberPlanPdf(plan, {
         plantName: await plantName(res),
         madeAt,
-        outOfDate: outOfDate.length > 0,
+        outOfDate,
       });
       res
         .type('application/pdf')

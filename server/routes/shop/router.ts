@@ -1,4 +1,5 @@
-import { Router, type RequestHandler } from 'express';
+import { Router, type RequestHandler, type Response } from 'express';
+import { replanOrder } from '../../commands/shopPlans';
 import type { CutListFormat, CutListQuery } from '../../../shared/api/shop';
 import { conflict } from '../../errors';
 import { requireUser } from '../../middleware/auth';
@@ -6,8 +7,10 @@ import { validate } from '../../middleware/validate';
 import type { Order, OrderLine } from '../../models';
 import { authorize } from '../../policies/predicates';
 import { shopPolicy } from '../../policies/shop';
-import { computeCutList, cutListCsv } from '../../services/cutList';
+import { presentCutListStatus } from '../../presenters/shopPlan';
+import { cutListCsv } from '../../services/cutList';
 import { renderCutListPdf } from '../../services/cutListPdf';
+import { noStoredPlan, storedPlanOf } from '../../services/shopPlan/current';
 import { findOrder } from '../orders/queries';
 import { handle, load } from '../load';
 import { linesForShop, presentShopOrder, readyOrders } from './queries';
@@ -33,10 +36,20 @@ const requireApproved: RequestHandler = handle(async (_req, res, next) => {
   next();
 });
 
+/** The order's stored cut list (never computed here: the shop-plan job makes it) and its run. */
+async function cutListStatus(res: Response) {
+  const o = res.locals.record as Order;
+  const { row, now } = await storedPlanOf(o, res.locals.lines as OrderLine[]);
+  return presentCutListStatus(presentShopOrder(o), row, now);
+}
+
 const formatOf = (path: string, query: CutListQuery): CutListFormat =>
   path.endsWith('.csv') ? 'csv' : path.endsWith('.pdf') ? 'pdf' : query.format;
 
-/** Shop paper: the orders ready for the saw and each order's cut list (JSON, CSV, PDF). */
+/**
+ * Shop paper: the orders ready for the saw and each order's stored cut list (JSON with its run,
+ * CSV, PDF), and `POST …/cut-list/replan` to make a new one.
+ */
 export function shopRouter() {
   const router = Router();
 
@@ -58,22 +71,36 @@ export function shopRouter() {
     authorize(shopPolicy.cutList),
     requireApproved,
     handle(async (req, res) => {
-      const o = res.locals.record as Order;
-      const view = computeCutList(presentShopOrder(o), res.locals.lines as OrderLine[]);
+      const status = await cutListStatus(res);
       const format = formatOf(req.path, res.locals.query as CutListQuery);
-      const name = `cut-list-${o.number.replace(/[^A-Za-z0-9_-]/g, '-')}`;
       res.set('Cache-Control', 'private, no-store');
+      if (format === 'json') return void res.json(status);
+      const view = status.cutList;
+      if (!view) throw noStoredPlan('cut list', status.run);
+      const name = `cut-list-${view.order.number.replace(/[^A-Za-z0-9_-]/g, '-')}`;
       if (format === 'csv') {
         res
           .type('text/csv; charset=utf-8')
           .set('Content-Disposition', `attachment; filename="${name}.csv"`)
           .send(cutListCsv(view));
-      } else if (format === 'pdf') {
+      } else {
         res
           .type('application/pdf')
           .set('Content-Disposition', `inline; filename="${name}.pdf"`)
-          .send(await renderCutListPdf(view));
-      } else res.json(view);
+          .send(await renderCutListPdf(view, { outOfDate: status.outOfDate }));
+      }
+    }),
+  );
+
+  router.post(
+    '/orders/:id/cut-list/replan',
+    requireUser,
+    order,
+    authorize(shopPolicy.replan),
+    requireApproved,
+    handle(async (req, res) => {
+      await replanOrder(req.user!, res.locals.record as Order);
+      res.status(202).json(await cutListStatus(res));
     }),
   );
 

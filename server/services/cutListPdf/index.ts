@@ -1,4 +1,5 @@
 import type { CutListGroupView, CutListView } from '../../../shared/api/shop';
+import { outOfDateText, type OutOfDateReason } from '../../../shared/api/shopPlan';
 import { openDocument, pageFooters } from '../quotePdf/document';
 import { contentBottom, paragraph, paragraphHeight, rule, textAt } from '../quotePdf/text';
 import { COLORS, MARGIN, type Doc } from '../quotePdf/theme';
@@ -17,7 +18,7 @@ const GAP = 8;
 
 const contentWidth = (doc: Doc) => doc.page.width - 2 * MARGIN.side;
 
-function header(doc: Doc, v: CutListView) {
+function header(doc: Doc, v: CutListView, outOfDate: readonly OutOfDateReason[]) {
   const x = MARGIN.side;
   const w = contentWidth(doc);
   const y = MARGIN.top;
@@ -35,17 +36,26 @@ function header(doc: Doc, v: CutListView) {
     font: 'bold',
     size: 12,
   });
-  textAt(doc, `Computed ${v.computedAt.slice(0, 10)}  ·  engine ${v.engineVersion}`, rx, y + 30, {
+  const made = v.computedAt.slice(0, 16).replace('T', ' ');
+  textAt(doc, `Made ${made} UTC  ·  engine ${v.engineVersion}`, rx, y + 30, {
     ...right,
     color: COLORS.muted,
   });
   rule(doc, y + 48, COLORS.text);
+  const top =
+    outOfDate.length === 0
+      ? y + 56
+      : paragraph(doc, `OUT OF DATE: ${outOfDateText(outOfDate)}`, x, y + 56, w, {
+          font: 'bold',
+          size: 9,
+          color: COLORS.danger,
+        }) + 4;
   return (
     paragraph(
       doc,
       `Sorted ${v.sortedBy.charAt(0).toLowerCase()}${v.sortedBy.slice(1)}`,
       x,
-      y + 56,
+      top,
       w,
       { size: 8 },
     ) + 10
@@ -88,17 +98,20 @@ function tableHead(doc: Doc, g: CutListGroupView, y: number) {
 }
 
 /**
- * The cut list as the saw operator prints it: landscape Letter (imperial) or A4 (metric), one
+ * The stored cut list as the saw operator prints it (marked when out of date): landscape Letter (imperial) or A4 (metric), one
  * table per lumber size and grade, longest first, the cautions at the end; Inter embedded.
  */
-export function renderCutListPdf(v: CutListView): Promise<Buffer> {
+export function renderCutListPdf(
+  v: CutListView,
+  meta: { outOfDate: readonly OutOfDateReason[] } = { outOfDate: [] },
+): Promise<Buffer> {
   const { doc, done } = openDocument({
     size: v.units === 'imperial' ? 'LETTER' : 'A4',
     layout: 'landscape',
     info: { Title: `Cut list ${v.order.number}`, Subject: v.order.job.name },
   });
 
-  let y = header(doc, v);
+  let y = header(doc, v, meta.outOfDate);
   const cols = columnXs(doc);
   for (const g of v.groups) {
     if (y + 70 > contentBottom(doc)) {

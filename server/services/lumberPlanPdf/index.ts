@@ -1,4 +1,5 @@
 import type { LumberPlanBody, LumberPlanSection } from '../../../shared/api/lumberPlan';
+import { outOfDateText, type OutOfDateReason } from '../../../shared/api/shopPlan';
 import { formatFeetInches } from '../../../shared/engine/format';
 import { mm, MM_PER_INCH } from '../../../shared/engine/units';
 import { openDocument, pageFooters } from '../quotePdf/document';
@@ -92,7 +93,7 @@ function section(doc: Doc, s: LumberPlanSection, y: number, newPage: () => numbe
 /** The lumber plan on paper: per lumber, boards to pull and what to cut, drawn to scale. */
 export function renderLumberPlanPdf(
   plan: LumberPlanBody,
-  meta: { plantName: string; madeAt: string | null; outOfDate: boolean },
+  meta: { plantName: string; madeAt: string | null; outOfDate: readonly OutOfDateReason[] },
 ): Promise<Buffer> {
   const { doc, done } = openDocument({
     size: 'LETTER',
@@ -112,7 +113,7 @@ export function renderLumberPlanPdf(
     `${meta.plantName}  ·  kerf ${plan.kerfIn} in, end trim ${plan.trimIn} in per board  ·  ` +
       `${plan.totals.boardCount} boards, ${money(plan.totals.totalCost)} (lower bound ${money(plan.totals.lowerBound)})` +
       (meta.madeAt ? `  ·  Made ${meta.madeAt.slice(0, 16).replace('T', ' ')} UTC` : '') +
-      (meta.outOfDate ? ' (OUT OF DATE: designs or stock changed since)' : '') +
+      (meta.outOfDate.length > 0 ? `  ·  OUT OF DATE: ${outOfDateText(meta.outOfDate)}` : '') +
       (plan.demoStock ? '  ·  Demo stock lengths and prices (invented).' : ''),
     MARGIN.side,
     MARGIN.top + 24,

@@ -16,6 +16,7 @@ export const COLORS = {
   dim: '#6b7480',
   noteBg: '#fbf6e9',
   noteRule: '#e4cf95',
+  danger: '#a3261c',
 } as const;
 
 /** Page margins (pt); the footer lives inside the bottom margin. */

@@ -1,8 +1,9 @@
 /**
  * The shop-plan job: cut list and lumber plan of one order, computed from its approved designs
  * and the plant's stock and stored with the engine version and the hashes of what they were made
- * from. Progress (cutting, then each lumber with the solver's column-generation rounds) is
- * written to the plan row between steps, so the lumber-plan page can show it while it runs.
+ * from. Progress (cutting, then each lumber and, inside its solve, the column-generation rounds,
+ * the integer phase's steps and the gap to the lower bound) is written to the plan row, throttled,
+ * so the shop pages can show it while it runs.
  */
 import { setImmediate as yieldToServer } from 'node:timers/promises';
 import { Op } from 'sequelize';
@@ -16,7 +17,7 @@ import { Order, OrderLine, ShopPlan } from '../../models';
 import { orderAttributes, orderIncludes } from '../../routes/orders/queries';
 import { presentShopOrder } from '../../routes/shop/queries';
 import { computeCutList, orderCutList } from '../cutList';
-import { lumberPlanFor } from '../lumberPlan';
+import { lumberPlanFor, type PlanProgress } from '../lumberPlan';
 import { designsHash, stockHash } from './inputs';
 
 const start: ShopPlanProgress = {
@@ -27,7 +28,14 @@ const start: ShopPlanProgress = {
   solverStage: null,
   iterations: 0,
   totalIterations: 0,
+  steps: 0,
+  pieces: 0,
+  piecesLeft: null,
+  gapPercent: null,
 };
+
+/** How often progress inside a solve is stored (the page asks every second). */
+const PROGRESS_EVERY_MS = 250;
 
 /** Take the order's waiting (or interrupted) run; null when there is none to run. */
 async function claim(orderId: number) {
@@ -44,13 +52,27 @@ async function claim(orderId: number) {
 /** A failure the order's data causes (not approved, lumber too deep): said, not retried. */
 const expected = (e: unknown) => e instanceof AppError || isEngineError(e);
 
-/** Run the order's queued shop plan (the job queue's worker calls this; tests may too). */
-export async function runShopPlan(orderId: number) {
+/**
+ * Run the order's queued shop plan (the job queue's worker calls this; tests may too, with
+ * `progressEveryMs` 0 to store every step of the solve).
+ */
+export async function runShopPlan(
+  orderId: number,
+  { progressEveryMs = PROGRESS_EVERY_MS }: { progressEveryMs?: number } = {},
+) {
   const row = await claim(orderId);
   if (!row) return;
   const progress = async (p: Partial<ShopPlanProgress>) => {
     await row.update({ runProgress: { ...(row.runProgress ?? start), ...p } });
-    await yieldToServer(); // the solver is synchronous: let the server answer between lumbers
+    await yieldToServer(); // the solver is synchronous: let the server answer between its steps
+  };
+  let stored = 0;
+  /** Each lumber's start and end are stored; the steps between at most every `progressEveryMs`. */
+  const due = (p: PlanProgress) => {
+    const t = performance.now();
+    if (p.stage !== 'starting' && p.stage !== 'done' && t - stored < progressEveryMs) return false;
+    stored = t;
+    return true;
   };
   try {
     const order = await Order.findByPk(orderId, {
@@ -74,6 +96,7 @@ export async function runShopPlan(orderId: number) {
     let total = 0;
     const lumberPlan = await lumberPlanFor(order, list, stock, (p) => {
       if (p.stage === 'done') total += p.iterations;
+      if (!due(p)) return;
       return progress({
         stage: 'planning',
         lumber: p.lumber,
@@ -82,6 +105,10 @@ export async function runShopPlan(orderId: number) {
         solverStage: p.stage,
         iterations: p.iterations,
         totalIterations: total,
+        steps: p.steps,
+        pieces: p.pieces,
+        piecesLeft: p.piecesLeft,
+        gapPercent: p.gapPercent === null ? null : Number(p.gapPercent.toFixed(2)),
       });
     });
     await progress({ stage: 'storing' });

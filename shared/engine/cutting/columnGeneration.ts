@@ -2,6 +2,7 @@ import type { Instance } from './instance';
 import { boundedKnapsack } from './knapsack';
 import { gridKnapsacks } from './knapsackGrid';
 import { patternKey, type Pattern } from './patterns';
+import { drain } from './steps';
 import type { LpSession, LpSolver } from './types';
 
 /** The LP optimum of a (residual) master problem. */
@@ -26,8 +27,15 @@ export interface MasterOptions {
   maxRounds?: number;
   /** Stop once the Lagrangian bound is within this fraction of the master's value. */
   relativeGap?: number;
-  /** Called at the start of each round (0, 1, 2, …): a progress report, nothing more. */
-  onRound?: (round: number) => void;
+}
+
+/** One finished round of column generation: the master's value and the lower bound so far. */
+export interface MasterRound {
+  /** 0, 1, 2, … */
+  round: number;
+  objective: number;
+  /** Farley's bound so far (0 before the first finite one, or while the master is infeasible). */
+  bound: number;
 }
 
 /**
@@ -115,11 +123,15 @@ export class Master {
    * value: the long tail of rounds that barely move the LP is not worth its time.
    */
   solve(options: MasterOptions = {}): MasterSolution {
-    const { maxRounds = 1000, relativeGap = 0, onRound } = options;
+    return drain(this.rounds(options));
+  }
+
+  /** `solve` one round at a time: yields after each round that priced its patterns. */
+  *rounds(options: MasterOptions = {}): Generator<MasterRound, MasterSolution> {
+    const { maxRounds = 1000, relativeGap = 0 } = options;
     let exact = true;
     let bound = -Infinity;
     for (let round = 0; ; round++) {
-      onRound?.(round);
       const result = this.session.solve();
       if (result.status !== 'optimal') throw new Error(`The master LP ended ${result.status}.`);
       const artificialUse = result.x.slice(0, this.n).reduce((a, b) => a + b, 0);
@@ -162,6 +174,7 @@ export class Master {
         }
       });
       if (!infeasible && Number.isFinite(theta)) bound = Math.max(bound, objective / theta);
+      yield { round, objective, bound: Math.max(bound, 0) };
       if (this.add(priced) === 0) return done(true);
       if (!infeasible && relativeGap > 0 && bound >= objective * (1 - relativeGap))
         return done(false);

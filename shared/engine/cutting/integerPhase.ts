@@ -1,7 +1,14 @@
 import type { Master } from './columnGeneration';
 import type { Instance } from './instance';
 import { capPattern, firstFitDecreasing, patternKey, planCost, type Pattern } from './patterns';
+import { mapSteps } from './steps';
 import type { LpSolver } from './types';
+
+/** Where the dive is: its step (1, 2, …) and the pieces it has still to place. */
+export interface DiveStep {
+  step: number;
+  piecesLeft: number;
+}
 
 /**
  * Diving with residual re-solve: solve the LP of what is still to cut (column generation over
@@ -9,15 +16,16 @@ import type { LpSolver } from './types';
  * or — when every value is below one — the pattern with the largest value at one board; take
  * the fixed boards' pieces off the demand and their boards off the stock on hand; repeat until
  * nothing is left. Past the deadline the rest is finished by first-fit decreasing. Null when
- * the stock on hand runs out on this path.
+ * the stock on hand runs out on this path. Yields the pieces still to place after every
+ * column-generation round and every step, so a caller can report progress inside the dive.
  */
-export function diveResidual(
+export function* diveResidual(
   inst: Instance,
   master: Master,
   deadline: number,
   now: () => number,
   roundsPerStep = 25,
-): Pattern[] | null {
+): Generator<DiveStep, Pattern[] | null> {
   const demand = inst.demand.slice();
   const available = inst.available.slice();
   const fixed: Pattern[] = [];
@@ -34,10 +42,14 @@ export function diveResidual(
     const rest = firstFitDecreasing(inst, demand, available);
     return rest ? [...fixed, ...rest] : null;
   };
-  while (demand.some((d) => d > 0)) {
+  const left = () => demand.reduce((sum, d) => sum + Math.max(0, d), 0);
+  for (let step = 1; demand.some((d) => d > 0); step++) {
     if (now() > deadline) return finish();
     master.setResidual(demand, available);
-    const lp = master.solve({ maxRounds: roundsPerStep, relativeGap: 1e-3 });
+    const lp = yield* mapSteps(
+      master.rounds({ maxRounds: roundsPerStep, relativeGap: 1e-3 }),
+      (): DiveStep => ({ step, piecesLeft: left() }),
+    );
     if (lp.infeasible || lp.used.length === 0) return finish();
     let progressed = false;
     for (const u of lp.used) {
@@ -51,6 +63,7 @@ export function diveResidual(
       const largest = lp.used.reduce((a, b) => (b.value > a.value ? b : a));
       take(largest.pattern, 1);
     }
+    yield { step, piecesLeft: left() };
   }
   return fixed;
 }

@@ -3,7 +3,15 @@ import { Master } from './columnGeneration';
 import { buildInstance, pieceLength, type Instance } from './instance';
 import { diveResidual, solvePoolMip } from './integerPhase';
 import { firstFitDecreasing, planCost, tidyPlan, type Pattern } from './patterns';
-import type { CuttingInput, CuttingOptions, CuttingPlan, PlanFigures, PlannedBoard } from './types';
+import { drain, mapSteps } from './steps';
+import type {
+  CuttingInput,
+  CuttingOptions,
+  CuttingPlan,
+  CuttingProgress,
+  PlanFigures,
+  PlannedBoard,
+} from './types';
 
 /**
  * The largest g such that every cost is a whole multiple of g (to 1/1000 of a unit), or 0 when
@@ -87,10 +95,26 @@ function presentBoards(inst: Instance, boards: readonly Pattern[]): PlannedBoard
  * 3. First-fit decreasing is the fallback (and the only method without an LP solver), and its
  *    figures are always reported so the saving is visible.
  *
+ * `options.onProgress` hears of every step (see `planCuttingSteps`).
+ *
  * @throws EngineError `piece_too_long` when a piece fits no stock; `not_enough_stock` when the
  *   boards on hand cannot hold the order; `invalid` for malformed input.
  */
 export function planCutting(input: CuttingInput, options: CuttingOptions = {}): CuttingPlan {
+  return drain(planCuttingSteps(input, options), options.onProgress);
+}
+
+/**
+ * `planCutting` one step at a time: yields after every column-generation round (root LP and
+ * dive), every dive step and around the whole-board search, with the lower bound so far, the
+ * best whole plan so far and the gap between them; returns the plan. A caller that awaits
+ * between steps (to store progress, or let a server answer) gets the same plan, except that the
+ * integer phase's time budget is wall-clock time.
+ */
+export function* planCuttingSteps(
+  input: CuttingInput,
+  options: CuttingOptions = {},
+): Generator<CuttingProgress, CuttingPlan> {
   const inst = buildInstance(input);
   const now = options.now ?? (() => performance.now());
   const ffdRaw = firstFitDecreasing(inst);
@@ -107,31 +131,58 @@ export function planCutting(input: CuttingInput, options: CuttingOptions = {}): 
   let lpValue: number | null = null;
   let method: CuttingPlan['method'] = 'first-fit-decreasing';
   let rounds = 0;
-  const report = options.onProgress;
+  let steps = 0;
+  let bestCost = ffd?.totalCost ?? null;
+  const pieces = inst.demand.reduce((a, b) => a + b, 0);
+  const at = (
+    stage: CuttingProgress['stage'],
+    lowerBound: number,
+    piecesLeft: number | null = null,
+  ): CuttingProgress => ({
+    stage,
+    iterations: rounds,
+    steps,
+    pieces,
+    piecesLeft,
+    lowerBound,
+    bestCost,
+    gapPercent:
+      bestCost === null || lowerBound <= 0
+        ? null
+        : Math.max(0, ((bestCost - lowerBound) / lowerBound) * 100),
+  });
   if (options.lp && inst.demand.length > 0) {
     const master = new Master(inst, options.lp);
     try {
       master.add(ffdRaw ?? []);
-      const root = master.solve({
-        relativeGap: options.lpGap ?? 1e-5,
-        onRound:
-          report && ((r) => report({ stage: 'column-generation', iterations: (rounds = r + 1) })),
-      });
-      report?.({ stage: 'integer-phase', iterations: rounds });
+      const root = yield* mapSteps(
+        master.rounds({ relativeGap: options.lpGap ?? 1e-5 }),
+        (r): CuttingProgress => {
+          rounds = r.round + 1;
+          return at('column-generation', Math.max(material, r.bound));
+        },
+      );
       if (root.infeasible) throw shortfall();
       lpValue = root.bound;
       if (root.exact) bound = Math.max(material, roundUpBound(root.bound, costGrid(inst.cost)));
+      yield at('integer-phase', bound, pieces);
       const tol = 1e-9 * Math.max(1, bound);
       const deadline = now() + (options.timeLimitMs ?? 1500);
-      const dived = diveResidual(inst, master, deadline, now);
+      const dived = yield* mapSteps(diveResidual(inst, master, deadline, now), (d) => {
+        steps = d.step;
+        return at('integer-phase', bound, d.piecesLeft);
+      });
       let best = [dived, ffdRaw]
         .filter((p): p is Pattern[] => p !== null)
         .map((p) => tidyPlan(inst, p))
         .sort((a, b) => planCost(inst, a) - planCost(inst, b))[0];
       const cost = (p: Pattern[] | undefined) => (p ? planCost(inst, p) : Infinity);
+      bestCost = best ? cost(best) : null;
       // Without any plan yet (the stock on hand is tight) the MIP gets at least a second.
       const remaining = Math.max((deadline - now()) / 1000, best ? 0 : 1);
       if (cost(best) > bound + tol && remaining > 0.05) {
+        steps += 1;
+        yield at('integer-phase', bound, 0); // the whole-board search is one call: said before it
         const mip = solvePoolMip(inst, options.lp, master.patterns, best ?? [], remaining);
         if (mip) {
           const tidied = tidyPlan(inst, mip);
@@ -149,7 +200,8 @@ export function planCutting(input: CuttingInput, options: CuttingOptions = {}): 
     boards = ffdRaw;
   }
   const result = figures(inst, boards);
-  report?.({ stage: 'done', iterations: rounds });
+  bestCost = result.totalCost;
+  yield at('done', bound, 0);
   const gap = bound > 0 ? ((result.totalCost - bound) / bound) * 100 : 0;
   return {
     boards: presentBoards(inst, boards),

@@ -94,14 +94,26 @@ export interface CuttingOptions {
   lpGap?: number;
   /** Clock in ms (default `performance.now`); injectable for tests. */
   now?: () => number;
-  /** Told of each stage and each column-generation round of the root LP (for progress bars). */
+  /** Told of every step: each column-generation round, dive step, the integer phase, done. */
   onProgress?: (progress: CuttingProgress) => void;
 }
 
-/** Where `planCutting` is: its stage and the root LP's column-generation rounds so far. */
+/** Where `planCutting` is inside one solve, with the gap between its best plan and its bound. */
 export interface CuttingProgress {
   stage: 'column-generation' | 'integer-phase' | 'done';
+  /** Rounds of the root LP's column generation so far. */
   iterations: number;
+  /** Integer-phase steps so far (dive steps, then one for the whole-board search). */
+  steps: number;
+  /** Pieces of the order, and those the integer phase has still to place (null before it). */
+  pieces: number;
+  piecesLeft: number | null;
+  /** The best lower bound on the cost so far (Farley's bound while the LP is being solved). */
+  lowerBound: number;
+  /** Cost of the best whole plan so far (first-fit decreasing's at first), null when none. */
+  bestCost: number | null;
+  /** How far `bestCost` is above `lowerBound`, in % (null when either is unknown). */
+  gapPercent: number | null;
 }
 
 /** One board of the plan: which stock, which pieces (longest first), what is left over. */

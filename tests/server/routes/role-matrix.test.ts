@@ -7,6 +7,7 @@ import {
   createLine,
   createOrder,
   createPlant,
+  createShopPlan,
   createUser,
 } from '../../support/factories';
 import { signedIn } from '../../support/session';
@@ -31,6 +32,7 @@ beforeAll(async () => {
   for (const role of ROLES) users[role] = await createUser({ role, plant, customer });
   approved = await createOrder({ job });
   await createLine({ order: approved, reviewState: 'approved' });
+  await createShopPlan(approved);
 });
 
 // Shop paper: an order of `customer` whose designs are all approved.
@@ -82,6 +84,10 @@ const routes: Record<string, Call> = {
   'GET /api/shop/orders/:id/cut-list.csv': {
     name: 'shop.cutListCsv',
     run: (s) => s.get(`/api/shop/orders/${approved.id}/cut-list.csv`),
+  },
+  'POST /api/shop/orders/:id/cut-list/replan': {
+    name: 'shop.replan',
+    run: (s) => s.post(`/api/shop/orders/${approved.id}/cut-list/replan`),
   },
   'GET /api/orders/:id/shop-paper/plates': {
     name: 'shopPaper.plates',
@@ -135,6 +141,13 @@ const expected: Record<string, Record<Role, number>> = {
     sales: 200,
     engineer: 403,
     foreman: 200,
+    builder: 403,
+  },
+  'POST /api/shop/orders/:id/cut-list/replan': {
+    admin: 202,
+    sales: 202,
+    engineer: 403,
+    foreman: 202,
     builder: 403,
   },
   'GET /api/orders/:id/shop-paper/plates': {

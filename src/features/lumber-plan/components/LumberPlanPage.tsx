@@ -1,5 +1,5 @@
 import type { LumberPlanBody, LumberPlanSection } from '../../../../shared/api/lumberPlan';
-import { Alert, Button, Card, PageHeader, QueryState } from '../../../components/ui';
+import { Alert, Button, Card, PageHeader, QueryState, TextLink } from '../../../components/ui';
 import { lumberPlanFiles, useLumberPlan } from '../api/get-lumber-plan';
 import { BoardBar } from './BoardBar';
 import { PlanRun } from './PlanRun';
@@ -132,6 +132,9 @@ export function LumberPlanPage({ orderId }: { orderId: number }) {
   const status = useLumberPlan(orderId);
   return (
     <div data-print-sheet>
+      <p className="mb-2 text-sm print:hidden" data-print-hide>
+        <TextLink to={`/shop/orders/${orderId}`}>← Cut list</TextLink>
+      </p>
       <QueryState query={status} what="the lumber plan">
         {(s) => (
           <div className="flex flex-col gap-4">

@@ -1,6 +1,9 @@
 import type { CutListGroupView, CutListView } from '../../../../shared/api/shop';
+import type { CutListStatus } from '../../../../shared/api/shopPlan';
+import { StoredPlanBar } from '../../../components/shop-plan/StoredPlanBar';
 import { Alert, Button, PageHeader, QueryState, TextLink } from '../../../components/ui';
 import { cutListUrl, useCutList } from '../api/get-cut-list';
+import { useReplanCutList } from '../api/replan';
 
 const linkClass =
   'inline-flex h-11 items-center justify-center rounded border border-sand-300 bg-white px-4 font-medium text-sand-900 hover:bg-sand-100';
@@ -66,17 +69,38 @@ function CutList({ view }: { view: CutListView }) {
         {view.cautions.join(' ')}
       </Alert>
       <p className="mt-3 text-xs text-sand-500">
-        Computed {new Date(view.computedAt).toLocaleString()} by engine {view.engineVersion} from
+        Made {new Date(view.computedAt).toLocaleString()} by engine {view.engineVersion} from
         designs of engine {view.designEngineVersions.join(', ')}.
       </p>
     </>
   );
 }
 
-/** One order's cut list for the saw: tablet sized, prints without the app's navigation. */
+/** The stored plan's state and Make the plan / Re-plan, then the stored cut list (if any). */
+function StoredCutList({ status }: { status: CutListStatus }) {
+  const replan = useReplanCutList(status.order.id);
+  return (
+    <div className="flex flex-col gap-4">
+      <StoredPlanBar
+        state={status}
+        hasPlan={status.cutList !== null}
+        onReplan={() => replan.mutate()}
+        replanPending={replan.isPending}
+        replanError={replan.error}
+      />
+      {status.cutList ? <CutList view={status.cutList} /> : null}
+    </div>
+  );
+}
+
+/**
+ * One order's stored cut list for the saw (made by the shop-plan job, never computed on request):
+ * tablet sized, prints without the app's navigation.
+ */
 export function CutListPage({ orderId }: { orderId: number }) {
   const query = useCutList(orderId);
   const order = query.data?.order;
+  const stored = query.data?.cutList != null;
   return (
     <>
       <p className="mb-2 text-sm print:hidden">
@@ -86,24 +110,29 @@ export function CutListPage({ orderId }: { orderId: number }) {
         title={order ? `Cut list · Order ${order.number}` : 'Cut list'}
         description={order ? `${order.job.name} · ${order.customer.name}` : undefined}
         actions={
-          <div className="flex gap-2 print:hidden">
-            <a className={linkClass} href={cutListUrl(orderId, 'csv')} download>
-              CSV
-            </a>
-            <a
-              className={linkClass}
-              href={cutListUrl(orderId, 'pdf')}
-              target="_blank"
-              rel="noreferrer"
-            >
-              PDF
-            </a>
-            <Button onClick={() => window.print()}>Print</Button>
+          <div className="flex items-center gap-2 print:hidden">
+            <TextLink to={`/shop/orders/${orderId}/lumber-plan`}>Lumber plan</TextLink>
+            {stored ? (
+              <>
+                <a className={linkClass} href={cutListUrl(orderId, 'csv')} download>
+                  CSV
+                </a>
+                <a
+                  className={linkClass}
+                  href={cutListUrl(orderId, 'pdf')}
+                  target="_blank"
+                  rel="noreferrer"
+                >
+                  PDF
+                </a>
+                <Button onClick={() => window.print()}>Print</Button>
+              </>
+            ) : null}
           </div>
         }
       />
       <QueryState query={query} what="the cut list">
-        {(view) => <CutList view={view} />}
+        {(status) => <StoredCutList status={status} />}
       </QueryState>
     </>
   );
