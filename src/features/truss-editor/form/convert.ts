@@ -3,6 +3,7 @@ import {
   type DesignInput,
   type DesignInputDraft,
 } from '../../../../shared/api/design';
+import { omit } from 'zod/mini';
 import { createLineSchema } from '../../../../shared/api/orders';
 import {
   formatFeetInches,
@@ -145,7 +146,7 @@ export function formToRequest(values: TrussFormValues, units: FormUnits): FormRe
       .filter(Boolean),
     ...pointLoadsOf(values.pointLoads ?? [], units, errors),
   };
-  const line = createLineSchema.omit({ design: true }).safeParse({
+  const line = omit(createLineSchema, { design: true }).safeParse({
     mark: values.mark,
     quantity: number('quantity', 'a quantity', false),
     plies: draft.plies,
