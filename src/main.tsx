@@ -9,7 +9,7 @@ import { createRoot } from 'react-dom/client';
 import { RouterProvider } from 'react-router/dom';
 import { Providers } from './app/providers';
 import { queryClient } from './app/query-client';
-import { createAppRouter } from './app/router';
+import { createAppRouter } from './app/entry-router';
 
 const router = createAppRouter(queryClient);
 const root = document.getElementById('root');

@@ -7,6 +7,7 @@ import type { QuoteSnapshot } from '../services/pricing';
 import { formatMoney } from '../services/quotePdf/format';
 import { queueMail } from '../services/mailQueue';
 import { orderEvent } from './audit';
+import { requireSeenVersion } from './orderVersion';
 import { releaseAfterCommit } from './release';
 
 const today = () => new Date().toISOString().slice(0, 10);
@@ -74,6 +75,10 @@ export async function acceptQuote(
     throw badRequest('Say how the builder accepted: phone, paper or e-mail.', {
       method: 'Say how the builder accepted',
     });
+  if (onBehalf && input.version === undefined)
+    throw badRequest('Reload the order: send the version you looked at.', {
+      version: 'Reload the order: send the version you looked at',
+    });
   return Order.sequelize!.transaction(async (t) => {
     const locked = await Order.findByPk(order.id, { transaction: t, lock: t.LOCK.UPDATE });
     if (!locked) throw conflict('The order no longer exists.');
@@ -85,6 +90,7 @@ export async function acceptQuote(
       if (existing.quoteId === quote.id) return { changed: false };
       throw conflict('This order was already accepted on another revision.');
     }
+    if (onBehalf) requireSeenVersion(locked, input.version!);
     const refusal = await acceptRefusal(locked, quote, t);
     if (refusal) throw conflict(refusal);
     await QuoteAcceptance.create(
@@ -109,6 +115,7 @@ export async function acceptQuote(
       onBehalf,
       method,
       ip,
+      ...(onBehalf && input.note ? { note: input.note } : {}),
     });
     await acceptanceMail(t, actor, locked, quote, input.name, onBehalf);
     // An account builder's order whose designs are approved goes to production at once.

@@ -5,6 +5,7 @@ import { Order, Payment, PaymentEvent, Quote } from '../models';
 import { conflict } from '../errors';
 import { audit } from './audit';
 import { queueReceipt, receiptNumber, settleDeposit } from './payments';
+import { bumpOrderVersion } from './orderVersion';
 import { releaseAfterCommit } from './release';
 
 type Meta = { metadata?: Record<string, string> | null };
@@ -52,6 +53,7 @@ async function markPaid(t: Transaction, order: Order, p: Payment, intentId: stri
     receiptNumber: p.receiptNumber,
     paymentIntent: p.providerPaymentIntentId,
   });
+  await bumpOrderVersion(t, order);
   await settleDeposit(t, order);
   await queueReceipt(
     t,
@@ -109,6 +111,7 @@ async function refundCreated(t: Transaction, order: Order, r: Stripe.Refund) {
     amountCents: p.amountCents,
     currency: p.currency,
   });
+  await bumpOrderVersion(t, order);
   await queueReceipt(t, order, p, null);
 }
 

@@ -9,6 +9,7 @@ import { queueMail } from '../services/mailQueue';
 import { findAcceptance } from './acceptance';
 import { audit, orderEvent } from './audit';
 import { pricesFor } from './priceBook';
+import { bumpOrderVersion, requireSeenVersion } from './orderVersion';
 import { releaseAfterCommit } from './release';
 
 const cents = (v: string | number) => Math.round(Number(v) * 100);
@@ -159,15 +160,11 @@ export async function recordOfflinePayment(actor: User, order: Order, input: Off
     const locked = (await Order.findByPk(order.id, { transaction: t, lock: t.LOCK.UPDATE }))!;
     if (['draft', 'quoted', 'cancelled'].includes(locked.status))
       throw conflict(`Payments are recorded on accepted orders; this one is ${locked.status}.`);
-    if (
-      input.expectedPaid !== undefined &&
-      (await paidCents(locked.id, t)) !== cents(input.expectedPaid)
-    )
-      throw new AppError(
-        409,
-        'stale',
-        'Another payment was recorded on this order since you opened it. Check the payments below before recording this one.',
-      );
+    requireSeenVersion(
+      locked,
+      input.version,
+      'Check the payments below (one may have been recorded meanwhile) before recording this one.',
+    );
     const acceptance = await findAcceptance(order.id);
     const quote = acceptance ? await Quote.findByPk(acceptance.quoteId, { transaction: t }) : null;
     const currency = (quote?.snapshot as unknown as QuoteSnapshot | undefined)?.currency ?? 'USD';
@@ -196,6 +193,7 @@ export async function recordOfflinePayment(actor: User, order: Order, input: Off
       currency,
       receiptNumber: p.receiptNumber,
     });
+    await bumpOrderVersion(t, locked);
     await settleDeposit(t, locked);
     await queueReceipt(t, locked, p, quote);
     releaseAfterCommit(t, locked.id, null);

@@ -1,9 +1,9 @@
 import type { RequestHandler } from 'express';
-import type { z } from 'zod';
+import { z } from 'zod';
 import { badRequest } from '../errors';
 
 /** Turn zod issues into `{ field: message }` the client shows beside each field. */
-export function fieldMessages(error: z.ZodError): Record<string, string> {
+export function fieldMessages(error: z.core.$ZodError): Record<string, string> {
   // A Map, so a field named like an Object.prototype member (`constructor`, `__proto__`) is kept.
   const fields = new Map<string, string>();
   for (const issue of error.issues) {
@@ -14,12 +14,13 @@ export function fieldMessages(error: z.ZodError): Record<string, string> {
 }
 
 /** Parse `req.body` or `req.query` with a schema from shared/; the parsed value lands in res.locals. */
-export function validate<T extends z.ZodTypeAny>(
+// Any zod schema, classic or zod/mini (the portal's shared schemas are mini: see shared/api/auth.ts).
+export function validate<T extends z.core.$ZodType>(
   schema: T,
   source: 'body' | 'query' = 'body',
 ): RequestHandler {
   return (req, res, next) => {
-    const parsed = schema.safeParse(source === 'body' ? (req.body ?? {}) : req.query);
+    const parsed = z.safeParse(schema, source === 'body' ? (req.body ?? {}) : req.query);
     if (!parsed.success) {
       const fields = fieldMessages(parsed.error);
       const first = Object.values(fields)[0] ?? 'Check the highlighted fields.';

@@ -110,6 +110,8 @@ export function presentMailState(m: MailMessage): MailState {
 }
 
 const d = (e: AuditEvent, k: string) => String(e.data[k] ?? '');
+/** How an acceptance recorded by the desk reached it, in words. */
+const METHOD_WORDS: Record<string, string> = { phone: 'phone', paper: 'paper', email: 'e-mail' };
 const money = (e: AuditEvent) =>
   `${(Number(e.data.amountCents ?? 0) / 100).toFixed(2)} ${d(e, 'currency')}`;
 
@@ -122,7 +124,7 @@ const BUILDER_SUMMARIES: Record<string, (e: AuditEvent) => string> = {
   'quote.sent': (e) => `Quote ${d(e, 'reference')} sent to you`,
   'quote.accepted': (e) =>
     e.data.onBehalf
-      ? `${d(e, 'reference')} accepted for you by the plant (${d(e, 'method')}, ${d(e, 'name')})`
+      ? `${d(e, 'reference')} accepted for you by the plant (${METHOD_WORDS[d(e, 'method')] ?? d(e, 'method')}, ${d(e, 'name')})`
       : `You accepted ${d(e, 'reference')} (${d(e, 'name')})`,
   'quote.changes_requested': (e) =>
     `You asked for changes to ${d(e, 'reference')}: ${d(e, 'message')}`,
@@ -150,7 +152,7 @@ export function presentBuilderHistory(events: AuditEvent[]): HistoryEntry[] {
 export function summarizePortalEvent(e: AuditEvent): string | null {
   switch (e.action) {
     case 'quote.accepted':
-      return `Accepted ${d(e, 'reference')} as “${d(e, 'name')}”${e.data.onBehalf ? ` on the builder's behalf (${d(e, 'method')})` : ` in the portal from ${d(e, 'ip')}`}`;
+      return `Accepted ${d(e, 'reference')} as “${d(e, 'name')}”${e.data.onBehalf ? ` on the builder's behalf (by ${METHOD_WORDS[d(e, 'method')] ?? d(e, 'method')})${e.data.note ? `: ${d(e, 'note')}` : ''}` : ` in the portal from ${d(e, 'ip')}`}`;
     case 'quote.changes_requested':
       return `Builder asked for changes to ${d(e, 'reference')}: ${d(e, 'message')}`;
     case 'payment.received':

@@ -1,4 +1,5 @@
-import { z } from 'zod';
+// zod/mini: the builder's portal parses these on a phone (see shared/api/auth.ts).
+import * as z from 'zod/mini';
 import { quoteSchema } from './pricing';
 
 /** How a quote was accepted: in the portal, or recorded by the desk on the builder's behalf. */
@@ -10,27 +11,42 @@ export const ACCEPTANCE_METHODS = ['portal', 'phone', 'paper', 'email'] as const
  */
 export const acceptQuoteSchema = z.object({
   name: z
-    .string({ message: 'Type your full name' })
-    .trim()
-    .min(2, 'Type your full name')
-    .max(120, 'Use at most 120 characters'),
-  agree: z.literal(true, { message: 'Tick the box to accept the terms' }),
-  method: z.enum(ACCEPTANCE_METHODS).optional(),
+    .string({ error: 'Type your full name' })
+    .check(
+      z.trim(),
+      z.minLength(2, 'Type your full name'),
+      z.maxLength(120, 'Use at most 120 characters'),
+    ),
+  agree: z.literal(true, { error: 'Tick the box to accept the terms' }),
+  method: z.optional(z.enum(ACCEPTANCE_METHODS, { error: 'Phone, paper or e-mail' })),
+  /** The desk's note of how and when it came ("signed copy faxed Tuesday"); kept in the history. */
+  note: z.optional(z.string().check(z.trim(), z.maxLength(1000, 'Use at most 1000 characters'))),
+  /**
+   * The order's version the desk saw when it recorded the acceptance (required of the desk, 409
+   * `stale` when the order changed since); the builder's own acceptance may leave it out.
+   */
+  version: z.optional(
+    z
+      .int({ error: 'Reload the order: send the version you looked at' })
+      .check(z.positive('Reload the order: send the version you looked at')),
+  ),
 });
 export type AcceptQuoteInput = z.infer<typeof acceptQuoteSchema>;
 
 /** Body of `POST /api/orders/:id/quotes/:number/changes`: what the builder wants changed. */
 export const requestChangesSchema = z.object({
   message: z
-    .string({ message: 'Say what should change' })
-    .trim()
-    .min(3, 'Say what should change')
-    .max(4000, 'Use at most 4000 characters'),
+    .string({ error: 'Say what should change' })
+    .check(
+      z.trim(),
+      z.minLength(3, 'Say what should change'),
+      z.maxLength(4000, 'Use at most 4000 characters'),
+    ),
 });
 export type RequestChangesInput = z.infer<typeof requestChangesSchema>;
 
 export const acceptanceSchema = z.object({
-  quoteNumber: z.number().int(),
+  quoteNumber: z.int(),
   reference: z.string(),
   name: z.string(),
   onBehalf: z.boolean(),
@@ -41,15 +57,15 @@ export type Acceptance = z.infer<typeof acceptanceSchema>;
 
 /** One payment as the order shows it; amounts in the currency's major unit (dollars). */
 export const paymentSummarySchema = z.object({
-  id: z.number().int(),
+  id: z.int(),
   kind: z.enum(['deposit', 'offline', 'refund']),
   method: z.enum(['card', 'cheque', 'transfer', 'cash']),
   amount: z.number(),
   currency: z.string(),
   status: z.enum(['pending', 'succeeded', 'failed']),
-  reference: z.string().nullable(),
-  receiptNumber: z.string().nullable(),
-  paidAt: z.string().nullable(),
+  reference: z.nullable(z.string()),
+  receiptNumber: z.nullable(z.string()),
+  paidAt: z.nullable(z.string()),
 });
 export type PaymentSummary = z.infer<typeof paymentSummarySchema>;
 
@@ -61,9 +77,9 @@ export const orderMoneySchema = z.object({
   balance: z.number(),
   depositDue: z.number(),
   /** The deposit the accepted revision asks for (what was due before anything was paid). */
-  deposit: z.number().default(0),
+  deposit: z._default(z.number(), 0),
   /** Refunds sent back (already taken off `paid`). */
-  refunded: z.number().default(0),
+  refunded: z._default(z.number(), 0),
 });
 export type OrderMoney = z.infer<typeof orderMoneySchema>;
 
@@ -79,36 +95,46 @@ export type DepositSession = z.infer<typeof depositSessionSchema>;
 /** Body of `POST /api/orders/:id/payments`: a cheque or transfer the desk received. */
 export const offlinePaymentSchema = z.object({
   amount: z
-    .number({ message: 'Enter the amount received' })
-    .positive('Enter the amount received')
-    .max(10_000_000, 'That amount looks too large'),
-  method: z.enum(['cheque', 'transfer', 'cash'], { message: 'Cheque, transfer or cash' }),
+    .number({ error: 'Enter the amount received' })
+    .check(
+      z.positive('Enter the amount received'),
+      z.maximum(10_000_000, 'That amount looks too large'),
+    ),
+  method: z.enum(['cheque', 'transfer', 'cash'], { error: 'Cheque, transfer or cash' }),
   reference: z
-    .string({ message: 'Enter the cheque number or transfer reference' })
-    .trim()
-    .min(1, 'Enter the cheque number or transfer reference')
-    .max(120),
+    .string({ error: 'Enter the cheque number or transfer reference' })
+    .check(
+      z.trim(),
+      z.minLength(1, 'Enter the cheque number or transfer reference'),
+      z.maxLength(120, 'Use at most 120 characters'),
+    ),
   /**
-   * What the desk saw as paid when it filled the form: a payment recorded meanwhile (another tab,
-   * a colleague, a card deposit) answers 409 instead of a second entry of the same cheque.
+   * The order's `version` the desk saw: a payment recorded meanwhile (another tab, a colleague, a
+   * card deposit) raises it, so the same cheque is not entered twice (409 `stale`).
    */
-  expectedPaid: z
-    .number({ message: 'Reload the order: the paid amount you saw is missing' })
-    .optional(),
+  version: z
+    .int({ error: 'Reload the order: send the version you looked at' })
+    .check(z.positive('Reload the order: send the version you looked at')),
 });
 export type OfflinePaymentInput = z.infer<typeof offlinePaymentSchema>;
 
 /** Body of `POST /api/orders/:id/cancel`. */
 export const cancelOrderSchema = z.object({
-  reason: z.string().trim().min(3, 'Say why the order is cancelled').max(2000),
+  reason: z
+    .string({ error: 'Say why the order is cancelled' })
+    .check(
+      z.trim(),
+      z.minLength(3, 'Say why the order is cancelled'),
+      z.maxLength(2000, 'Use at most 2000 characters'),
+    ),
 });
 
 /** A quote revision as a builder reads it: only sent revisions, with whether it can be accepted. */
-export const builderQuoteSchema = quoteSchema.extend({
+export const builderQuoteSchema = z.extend(quoteSchema, {
   expired: z.boolean(),
   /** Why it cannot be accepted now (superseded, expired, already accepted …), or null. */
-  refusal: z.string().nullable(),
-  acceptance: acceptanceSchema.nullable(),
+  refusal: z.nullable(z.string()),
+  acceptance: z.nullable(acceptanceSchema),
   units: z.enum(['imperial', 'metric']),
   designs: z.array(
     z.object({
@@ -116,7 +142,7 @@ export const builderQuoteSchema = quoteSchema.extend({
       description: z.string(),
       span: z.string(),
       rise: z.string(),
-      pitch: z.string().nullable(),
+      pitch: z.nullable(z.string()),
       joints: z.array(z.object({ id: z.string(), x: z.number(), y: z.number() })),
       members: z.array(z.object({ from: z.string(), to: z.string(), role: z.string() })),
     }),
@@ -126,15 +152,15 @@ export type BuilderQuote = z.infer<typeof builderQuoteSchema>;
 
 /** The delivery state of one queued e-mail (the desk's view of the outbox). */
 export const mailStateSchema = z.object({
-  id: z.number().int(),
+  id: z.int(),
   kind: z.string(),
   to: z.string(),
   subject: z.string(),
   status: z.enum(['queued', 'retrying', 'sent', 'failed']),
-  attempts: z.number().int(),
-  lastError: z.string().nullable(),
+  attempts: z.int(),
+  lastError: z.nullable(z.string()),
   createdAt: z.string(),
-  sentAt: z.string().nullable(),
+  sentAt: z.nullable(z.string()),
 });
 export type MailState = z.infer<typeof mailStateSchema>;
 
@@ -142,12 +168,12 @@ export type MailState = z.infer<typeof mailStateSchema>;
 export const timelineStepSchema = z.object({
   status: z.string(),
   label: z.string(),
-  at: z.string().nullable(),
+  at: z.nullable(z.string()),
 });
 export type TimelineStep = z.infer<typeof timelineStepSchema>;
 
 const homeOrder = {
-  orderId: z.number().int(),
+  orderId: z.int(),
   orderNumber: z.string(),
   job: z.string(),
   status: z.string(),
@@ -158,22 +184,22 @@ export const portalHomeSchema = z.object({
   quotesWaiting: z.array(
     z.object({
       ...homeOrder,
-      number: z.number().int(),
+      number: z.int(),
       reference: z.string(),
       total: z.number(),
       currency: z.string(),
       validUntil: z.string(),
-      daysLeft: z.number().int(),
+      daysLeft: z.int(),
     }),
   ),
   depositsDue: z.array(
     z.object({ ...homeOrder, reference: z.string(), amount: z.number(), currency: z.string() }),
   ),
-  inProgress: z.array(z.object({ ...homeOrder, plannedDelivery: z.string().nullable() })),
+  inProgress: z.array(z.object({ ...homeOrder, plannedDelivery: z.nullable(z.string()) })),
   messages: z.array(
     z.object({
-      id: z.number().int(),
-      orderId: z.number().int().nullable(),
+      id: z.int(),
+      orderId: z.nullable(z.int()),
       subject: z.string(),
       at: z.string(),
     }),

@@ -1,36 +1,41 @@
-import { z } from 'zod';
+// zod/mini: a builder's quote page parses `quoteSchema` (see shared/api/auth.ts).
+import * as z from 'zod/mini';
 
 const money = (label: string) =>
   z
-    .number({ message: `${label} must be a number` })
-    .min(0, `${label} cannot be negative`)
-    .max(1_000_000, `${label} looks too large`);
+    .number({ error: `${label} must be a number` })
+    .check(
+      z.minimum(0, `${label} cannot be negative`),
+      z.maximum(1_000_000, `${label} looks too large`),
+    );
 const fraction = (label: string, max = 1) =>
   z
-    .number({ message: `${label} must be a number` })
-    .min(0, `${label} cannot be negative`)
-    .max(max, `${label} must be at most ${max * 100} %`);
+    .number({ error: `${label} must be a number` })
+    .check(
+      z.minimum(0, `${label} cannot be negative`),
+      z.maximum(max, `${label} must be at most ${max * 100} %`),
+    );
 
 /**
  * The plant's price book (admin writes, sales reads). Money in the plant's currency; fractions as
  * 0–1 (0.25 = 25 %). `margin` is a share of the selling price: price = cost / (1 − margin).
  */
 export const priceBookSchema = z.object({
-  currency: z
-    .string()
-    .trim()
-    .length(3, 'Use a 3-letter currency code, e.g. USD')
-    .toUpperCase()
-    .default('USD'),
+  currency: z._default(
+    z
+      .string({ error: 'Use a 3-letter currency code, e.g. USD' })
+      .check(z.trim(), z.length(3, 'Use a 3-letter currency code, e.g. USD'), z.toUpperCase()),
+    'USD',
+  ),
   /** Cost per board foot by lumber id ("2x4 SPF-1/2"); `defaultPerBoardFoot` covers any other. */
   lumber: z.object({
     defaultPerBoardFoot: money('Default lumber cost'),
-    byLumber: z.record(z.string(), money('Lumber cost')).default({}),
+    byLumber: z._default(z.record(z.string(), money('Lumber cost')), {}),
   }),
   /** Cost per plate by catalog id ("4x6-20"); `defaultPerSquareInch` prices any other plate by area. */
   plates: z.object({
     defaultPerSquareInch: money('Default plate cost'),
-    byPlate: z.record(z.string(), money('Plate cost')).default({}),
+    byPlate: z._default(z.record(z.string(), money('Plate cost')), {}),
   }),
   /** Labour minutes per truss = perTruss + perPiece × pieces + perJoint × joints, at ratePerHour. */
   labour: z.object({
@@ -45,32 +50,37 @@ export const priceBookSchema = z.object({
   /** Deposit asked of builders without a credit account. */
   depositRate: fraction('Deposit', 1),
   /** Kept from a card deposit when the plant manager cancels an order before production. */
-  cancellationFee: money('Cancellation fee').optional(),
-  quoteValidityDays: z
-    .number()
-    .int('Whole days')
-    .min(1, 'At least 1 day')
-    .max(365, 'At most 365 days')
-    .default(30),
-  terms: z.string().trim().max(4000, 'Use at most 4000 characters').default(''),
+  cancellationFee: z.optional(money('Cancellation fee')),
+  quoteValidityDays: z._default(
+    z
+      .number({ error: 'Whole days' })
+      .check(
+        z.int('Whole days'),
+        z.minimum(1, 'At least 1 day'),
+        z.maximum(365, 'At most 365 days'),
+      ),
+    30,
+  ),
+  terms: z._default(
+    z.string().check(z.trim(), z.maxLength(4000, 'Use at most 4000 characters')),
+    '',
+  ),
 });
 export type PriceBook = z.infer<typeof priceBookSchema>;
 
 export const quoteLineSchema = z.object({
   mark: z.string(),
   description: z.string(),
-  quantity: z.number().int(),
-  plies: z.number().int(),
+  quantity: z.int(),
+  plies: z.int(),
   boardFeet: z.number(),
   // Costs are the plant's own: present for staff, left out of what a builder receives.
-  lumberCost: z.number().optional(),
-  plates: z.array(
-    z.object({ plate: z.string(), count: z.number().int(), cost: z.number().optional() }),
-  ),
-  plateCost: z.number().optional(),
-  labourMinutes: z.number().optional(),
-  labourCost: z.number().optional(),
-  unitCost: z.number().optional(),
+  lumberCost: z.optional(z.number()),
+  plates: z.array(z.object({ plate: z.string(), count: z.int(), cost: z.optional(z.number()) })),
+  plateCost: z.optional(z.number()),
+  labourMinutes: z.optional(z.number()),
+  labourCost: z.optional(z.number()),
+  unitCost: z.optional(z.number()),
   unitPrice: z.number(),
   lineTotal: z.number(),
 });
@@ -78,10 +88,10 @@ export type QuoteLine = z.infer<typeof quoteLineSchema>;
 
 /** A quote revision: an immutable snapshot (`POST /api/orders/:id/quotes` answers this). */
 export const quoteSchema = z.object({
-  id: z.number().int(),
-  orderId: z.number().int(),
+  id: z.int(),
+  orderId: z.int(),
   /** Revision number within the order: 1, 2, … */
-  number: z.number().int(),
+  number: z.int(),
   /** Printed reference, e.g. "2026-0001-Q2". */
   reference: z.string(),
   currency: z.string(),
@@ -96,9 +106,9 @@ export const quoteSchema = z.object({
   terms: z.string(),
   cautions: z.array(z.string()),
   createdAt: z.string(),
-  createdBy: z.string().nullable(),
-  sentAt: z.string().nullable(),
-  sentTo: z.string().nullable(),
+  createdBy: z.nullable(z.string()),
+  sentAt: z.nullable(z.string()),
+  sentTo: z.nullable(z.string()),
   superseded: z.boolean(),
 });
 export type Quote = z.infer<typeof quoteSchema>;
@@ -119,12 +129,12 @@ export type MailMessage = z.infer<typeof mailMessageSchema>;
 
 /** `GET /api/jobs/:id/files` rows. */
 export const storedFileSchema = z.object({
-  id: z.number().int(),
-  jobId: z.number().int(),
+  id: z.int(),
+  jobId: z.int(),
   name: z.string(),
   contentType: z.enum(['application/pdf', 'image/png', 'image/jpeg']),
-  size: z.number().int(),
-  uploadedBy: z.string().nullable(),
+  size: z.int(),
+  uploadedBy: z.nullable(z.string()),
   createdAt: z.string(),
   /** Whether the signed-in user may delete it (the server's policy decides). */
   canDelete: z.boolean(),

@@ -18,6 +18,7 @@ import { OrderProductionCard } from '../features/schedule/components/OrderProduc
 import { OrdersPage } from '../features/orders/components/OrdersPage';
 import { UsersPage } from '../features/users/components/UsersPage';
 import { DeskPayments } from '../features/payments/components/DeskPayments';
+import { RecordAcceptanceCard } from '../features/quotes/components/RecordAcceptance';
 import { canManageSales } from '../lib/permissions';
 import { SECTION_ROLES } from './navigation';
 import { markLinkFor } from './mark-links';
@@ -105,7 +106,14 @@ export function OrderRoute() {
           canSeeShop={(SECTION_ROLES.shop as readonly string[]).includes(me.user.role)}
           markHref={markLinkFor(me.user.role)}
           payments={
-            canManageSales(me.user.role) ? (order) => <DeskPayments order={order} /> : undefined
+            canManageSales(me.user.role)
+              ? (order) => (
+                  <>
+                    <RecordAcceptanceCard order={order} />
+                    <DeskPayments order={order} />
+                  </>
+                )
+              : undefined
           }
           production={(order) => (
             <OrderProductionCard

@@ -1,9 +1,8 @@
 /**
- * The builder's portal pages, composed from the portal and payments features. Loaded lazily
+ * The builder's order and quote pages (the home loads on its own), composed from the portal and payments features. Loaded lazily
  * (portal-routes.tsx), so a builder's phone never downloads the desk's pages or the truss editor.
  */
 import { useParams } from 'react-router';
-import { PortalHome } from '../features/portal/components/PortalHome';
 import { PortalOrderPage } from '../features/portal/components/PortalOrderPage';
 import { BuilderQuotePage } from '../features/portal/components/BuilderQuotePage';
 import { PaymentsCard } from '../features/payments/components/PaymentsCard';
@@ -13,10 +12,6 @@ const num = (v: string | undefined) => {
   if (!Number.isInteger(n) || n < 1) throw new Response('No such record.', { status: 404 });
   return n;
 };
-
-export function PortalHomeRoute() {
-  return <PortalHome />;
-}
 
 export function PortalOrderRoute() {
   const { id } = useParams();

@@ -15,7 +15,10 @@ export function portalRoutes(queryClient: QueryClient): RouteObject[] {
     {
       path: 'portal',
       loader: guard,
-      lazy: async () => ({ Component: (await pages()).PortalHomeRoute }),
+      // The home is its own chunk: a builder's first load carries no quote drawing or forms.
+      lazy: async () => ({
+        Component: (await import('../features/portal/components/PortalHome')).PortalHome,
+      }),
     },
     {
       path: 'portal/orders/:id',

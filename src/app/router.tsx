@@ -1,11 +1,11 @@
 import type { QueryClient } from '@tanstack/react-query';
-import { createBrowserRouter, redirect, type LoaderFunctionArgs } from 'react-router';
+import type { LoaderFunctionArgs, RouteObject } from 'react-router';
+import type { Me } from '../../shared/api/auth';
 import { customerQueryOptions } from '../features/builders/api/customer';
 import {
   customerListParamsFromSearch,
   customersQueryOptions,
 } from '../features/builders/api/list-customers';
-import { healthQueryOptions } from '../features/auth/api/health';
 import {
   buildersQueryOptions,
   recentJobsQueryOptions,
@@ -29,18 +29,9 @@ import { scheduleRoutes } from '../features/schedule/routes';
 import { floorRoutes } from '../features/floor/routes';
 import { productionSettingsRoutes } from '../features/production-settings/routes';
 import { usersQueryOptions } from '../features/users/api/list-users';
-import { Spinner } from '../components/ui';
 import { listParamsFromSearch } from '../lib/list-params';
-import { AppFrame } from './AppFrame';
-import { ErrorPage, NotFoundPage } from './ErrorPages';
-import { redirectIfSignedIn, requireRole, requireSession } from './guards';
+import { requireRole } from './guards';
 import { SECTION_ROLES } from './navigation';
-import { portalRoutes } from './portal-routes';
-import { lazyPage } from './lazy-page';
-
-const SignInPage = lazyPage(() =>
-  import('../features/auth/components/SignInPage').then((m) => m.SignInPage),
-);
 
 /** How long a loader waits for its data before showing the page with its own loading state. */
 const PREFETCH_WAIT_MS = 800;
@@ -58,14 +49,6 @@ const prefetch = (promise: Promise<unknown>) =>
     new Promise<null>((resolve) => setTimeout(() => resolve(null), PREFETCH_WAIT_MS)),
   ]);
 
-function StartupSpinner() {
-  return (
-    <div className="flex min-h-screen items-center justify-center">
-      <Spinner label="Loading Spanwise…" />
-    </div>
-  );
-}
-
 const searchOf = (request: Request) => new URL(request.url).searchParams;
 const paramsOf = (request: Request) => listParamsFromSearch(searchOf(request));
 
@@ -81,8 +64,27 @@ const desk = (name: keyof typeof import('./desk-pages')) => async () => ({
   Component: (await import('./desk-pages'))[name],
 });
 
-/** The route table: public sign-in, then the guarded frame with one section per role. */
-export function createAppRouter(queryClient: QueryClient) {
+/** What the desk's home loads before it shows (a builder's home is the portal). */
+export function homeLoader(queryClient: QueryClient, role: Me['user']['role']) {
+  const jobs = queryClient.ensureQueryData(recentJobsQueryOptions());
+  const extra =
+    role === 'admin'
+      ? [
+          queryClient.ensureQueryData(usersOverviewQueryOptions()),
+          queryClient.ensureQueryData(buildersQueryOptions()),
+        ]
+      : role === 'sales'
+        ? [queryClient.ensureQueryData(buildersQueryOptions())]
+        : [];
+  return prefetch(Promise.all([jobs, ...extra]));
+}
+
+/**
+ * The staff's routes (and the features' own), children of the signed-in frame. Loaded only when a
+ * path outside the portal is first opened (`entry-router.tsx` patches them in), so the sign-in
+ * page and the builder's portal never download these loaders or their schemas.
+ */
+export function deskRoutes(queryClient: QueryClient): RouteObject[] {
   const section =
     (
       roles: readonly Parameters<typeof requireRole>[2][number][],
@@ -93,137 +95,88 @@ export function createAppRouter(queryClient: QueryClient) {
       return load(args);
     };
 
-  return createBrowserRouter([
+  return [
     {
-      path: '/sign-in',
-      loader: async () => {
-        void queryClient.prefetchQuery(healthQueryOptions());
-        return redirectIfSignedIn(queryClient);
-      },
-      element: <SignInPage />,
-      hydrateFallbackElement: <StartupSpinner />,
-      errorElement: <ErrorPage />,
+      path: 'users',
+      loader: section(SECTION_ROLES.users, ({ request }) =>
+        prefetch(queryClient.ensureQueryData(usersQueryOptions(paramsOf(request)))),
+      ),
+      lazy: desk('UsersRoute'),
     },
     {
-      path: '/',
-      id: 'frame',
-      loader: ({ request }) => requireSession(queryClient, request),
-      element: <AppFrame />,
-      hydrateFallbackElement: <StartupSpinner />,
-      errorElement: <ErrorPage />,
-      children: [
-        {
-          errorElement: <ErrorPage />,
-          children: [
-            {
-              index: true,
-              loader: async ({ request }) => {
-                const me = await requireSession(queryClient, request);
-                // A builder's home is the portal's "what needs you".
-                if (me.user.role === 'builder') throw redirect('/portal');
-                const jobs = queryClient.ensureQueryData(recentJobsQueryOptions());
-                const extra =
-                  me.user.role === 'admin'
-                    ? [
-                        queryClient.ensureQueryData(usersOverviewQueryOptions()),
-                        queryClient.ensureQueryData(buildersQueryOptions()),
-                      ]
-                    : me.user.role === 'sales'
-                      ? [queryClient.ensureQueryData(buildersQueryOptions())]
-                      : [];
-                return prefetch(Promise.all([jobs, ...extra]));
-              },
-              lazy: desk('HomeRoute'),
-            },
-            {
-              path: 'users',
-              loader: section(SECTION_ROLES.users, ({ request }) =>
-                prefetch(queryClient.ensureQueryData(usersQueryOptions(paramsOf(request)))),
-              ),
-              lazy: desk('UsersRoute'),
-            },
-            {
-              path: 'builders',
-              loader: section(SECTION_ROLES.builders, ({ request }) =>
-                prefetch(
-                  queryClient.ensureQueryData(
-                    customersQueryOptions(customerListParamsFromSearch(searchOf(request))),
-                  ),
-                ),
-              ),
-              lazy: desk('BuildersRoute'),
-            },
-            {
-              path: 'builders/:id',
-              loader: section(SECTION_ROLES.builders, ({ params }) =>
-                prefetch(
-                  Promise.all([
-                    queryClient.ensureQueryData(customerQueryOptions(idParam(params.id))),
-                    queryClient.ensureQueryData(plantQueryOptions()),
-                  ]),
-                ),
-              ),
-              lazy: desk('BuilderRoute'),
-            },
-            {
-              path: 'jobs',
-              loader: section(SECTION_ROLES.jobs, ({ request }) =>
-                prefetch(
-                  queryClient.ensureQueryData(
-                    jobsQueryOptions(jobListParamsFromSearch(searchOf(request))),
-                  ),
-                ),
-              ),
-              lazy: desk('JobsRoute'),
-            },
-            {
-              path: 'jobs/:id',
-              loader: section(SECTION_ROLES.job, ({ params }) =>
-                prefetch(
-                  Promise.all([
-                    queryClient.ensureQueryData(jobQueryOptions(idParam(params.id))),
-                    queryClient.ensureQueryData(plantQueryOptions()),
-                  ]),
-                ),
-              ),
-              lazy: desk('JobRoute'),
-            },
-            {
-              path: 'orders',
-              loader: section(SECTION_ROLES.orders, ({ request }) =>
-                prefetch(
-                  queryClient.ensureQueryData(
-                    ordersQueryOptions(orderListParamsFromSearch(searchOf(request))),
-                  ),
-                ),
-              ),
-              lazy: desk('OrdersRoute'),
-            },
-            {
-              path: 'orders/:id',
-              loader: section(SECTION_ROLES.orders, ({ params }) =>
-                prefetch(queryClient.ensureQueryData(orderQueryOptions(idParam(params.id)))),
-              ),
-              lazy: desk('OrderRoute'),
-            },
-            ...trussEditorRoutes(queryClient),
-            ...reviewRoutes(queryClient),
-            ...planFileRoutes(queryClient),
-            ...priceBookRoutes(queryClient),
-            ...quoteRoutes(queryClient),
-            ...inboxRoutes(queryClient),
-            ...portalRoutes(queryClient),
-            ...stockSettingsRoutes(queryClient),
-            ...lumberPlanRoutes(queryClient),
-            ...shopRoutes(queryClient),
-            ...shopPaperRoutes(queryClient),
-            ...scheduleRoutes(queryClient),
-            ...floorRoutes(queryClient),
-            ...productionSettingsRoutes(queryClient),
-            { path: '*', element: <NotFoundPage /> },
-          ],
-        },
-      ],
+      path: 'builders',
+      loader: section(SECTION_ROLES.builders, ({ request }) =>
+        prefetch(
+          queryClient.ensureQueryData(
+            customersQueryOptions(customerListParamsFromSearch(searchOf(request))),
+          ),
+        ),
+      ),
+      lazy: desk('BuildersRoute'),
     },
-  ]);
+    {
+      path: 'builders/:id',
+      loader: section(SECTION_ROLES.builders, ({ params }) =>
+        prefetch(
+          Promise.all([
+            queryClient.ensureQueryData(customerQueryOptions(idParam(params.id))),
+            queryClient.ensureQueryData(plantQueryOptions()),
+          ]),
+        ),
+      ),
+      lazy: desk('BuilderRoute'),
+    },
+    {
+      path: 'jobs',
+      loader: section(SECTION_ROLES.jobs, ({ request }) =>
+        prefetch(
+          queryClient.ensureQueryData(jobsQueryOptions(jobListParamsFromSearch(searchOf(request)))),
+        ),
+      ),
+      lazy: desk('JobsRoute'),
+    },
+    {
+      path: 'jobs/:id',
+      loader: section(SECTION_ROLES.job, ({ params }) =>
+        prefetch(
+          Promise.all([
+            queryClient.ensureQueryData(jobQueryOptions(idParam(params.id))),
+            queryClient.ensureQueryData(plantQueryOptions()),
+          ]),
+        ),
+      ),
+      lazy: desk('JobRoute'),
+    },
+    {
+      path: 'orders',
+      loader: section(SECTION_ROLES.orders, ({ request }) =>
+        prefetch(
+          queryClient.ensureQueryData(
+            ordersQueryOptions(orderListParamsFromSearch(searchOf(request))),
+          ),
+        ),
+      ),
+      lazy: desk('OrdersRoute'),
+    },
+    {
+      path: 'orders/:id',
+      loader: section(SECTION_ROLES.orders, ({ params }) =>
+        prefetch(queryClient.ensureQueryData(orderQueryOptions(idParam(params.id)))),
+      ),
+      lazy: desk('OrderRoute'),
+    },
+    ...trussEditorRoutes(queryClient),
+    ...reviewRoutes(queryClient),
+    ...planFileRoutes(queryClient),
+    ...priceBookRoutes(queryClient),
+    ...quoteRoutes(queryClient),
+    ...inboxRoutes(queryClient),
+    ...stockSettingsRoutes(queryClient),
+    ...lumberPlanRoutes(queryClient),
+    ...shopRoutes(queryClient),
+    ...shopPaperRoutes(queryClient),
+    ...scheduleRoutes(queryClient),
+    ...floorRoutes(queryClient),
+    ...productionSettingsRoutes(queryClient),
+  ];
 }

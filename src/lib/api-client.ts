@@ -1,5 +1,16 @@
-import type { z } from 'zod';
-import { apiErrorSchema } from '../../shared/api/auth';
+import type { ApiErrorBody } from '../../shared/api/auth';
+
+/** The result of a Standard Schema validation (the interface every zod schema implements). */
+type Checked<T> =
+  { readonly value: T; readonly issues?: undefined } | { readonly issues: readonly unknown[] };
+
+/** A response schema: any zod schema, classic or mini, through its Standard Schema side. */
+export interface ResponseSchema<T> {
+  readonly '~standard': {
+    readonly validate: (value: unknown) => Checked<T> | Promise<Checked<T>>;
+    readonly types?: { readonly output: T } | undefined;
+  };
+}
 
 /** A failed API call, parsed from the server's `{ error: { code, message, fields? } }`. */
 export interface ApiError extends Error {
@@ -25,12 +36,16 @@ export function isApiError(value: unknown): value is ApiError {
   return value instanceof Error && value.name === 'ApiError' && 'status' in value;
 }
 
-/** Options of one request. `body` is sent as JSON; `schema` validates the response. */
+/**
+ * Options of one request. `body` is sent as JSON; `schema` (any zod schema, classic or mini)
+ * validates the response through the Standard Schema interface zod implements, so the client
+ * itself loads no zod: a page that parses nothing (the portal's home) downloads none.
+ */
 export interface RequestOptions<T> {
   method?: 'GET' | 'POST' | 'PATCH' | 'PUT' | 'DELETE';
   body?: unknown;
   query?: Record<string, string | number | undefined | null>;
-  schema?: z.ZodType<T>;
+  schema?: ResponseSchema<T>;
   signal?: AbortSignal;
 }
 
@@ -53,6 +68,17 @@ export function withQuery(path: string, query?: RequestOptions<unknown>['query']
   return text ? `${path}?${text}` : path;
 }
 
+const isText = (v: unknown): v is string => typeof v === 'string';
+
+/** The server's `{ error: { code, message, fields? } }` (`apiErrorSchema`), checked by hand. */
+function isErrorBody(json: unknown): json is ApiErrorBody {
+  const error = (json as { error?: unknown } | null)?.error as Record<string, unknown> | undefined;
+  if (!error || !isText(error.code) || !isText(error.message)) return false;
+  const { fields } = error;
+  if (fields === undefined) return true;
+  return typeof fields === 'object' && fields !== null && Object.values(fields).every(isText);
+}
+
 /** Reads a response body into an ApiError, whatever shape the server (or a proxy) sent. */
 async function toApiError(response: Response): Promise<ApiError> {
   let json: unknown = null;
@@ -61,9 +87,8 @@ async function toApiError(response: Response): Promise<ApiError> {
   } catch {
     // Not JSON (for instance a proxy's HTML page): fall back to the status text below.
   }
-  const parsed = apiErrorSchema.safeParse(json);
-  if (parsed.success) {
-    const { code, message, fields } = parsed.data.error;
+  if (isErrorBody(json)) {
+    const { code, message, fields } = json.error;
     return createApiError(response.status, code, message, fields ?? {});
   }
   const message =
@@ -135,15 +160,15 @@ export function createApiClient(fetchImpl: typeof fetch = (...a) => fetch(...a))
     const text = await response.text();
     const json: unknown = text ? JSON.parse(text) : undefined;
     if (!options.schema) return json as T;
-    const parsed = options.schema.safeParse(json);
-    if (!parsed.success) {
+    const parsed = await options.schema['~standard'].validate(json);
+    if (parsed.issues) {
       throw createApiError(
         response.status,
         'bad_response',
         'The server sent data this page does not understand. Reload to get the latest version.',
       );
     }
-    return parsed.data;
+    return parsed.value;
   };
 
   return { request, resetCsrf: () => void (csrf = null) };

@@ -1,5 +1,5 @@
 import { keepPreviousData, queryOptions, type QueryKey } from '@tanstack/react-query';
-import type { z } from 'zod';
+import type { core } from 'zod/mini';
 import { api } from './api-client';
 import type { ListParams } from './query-keys';
 
@@ -7,7 +7,7 @@ import type { ListParams } from './query-keys';
 export function pagedListQueryOptions<T, K extends QueryKey>(options: {
   queryKey: K;
   path: string;
-  schema: z.ZodType<{ items: T[]; total: number; page: number; pageSize: number }>;
+  schema: core.$ZodType<{ items: T[]; total: number; page: number; pageSize: number }>;
   params: ListParams;
 }) {
   const { queryKey, path, schema, params } = options;

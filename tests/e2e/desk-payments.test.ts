@@ -69,11 +69,12 @@ describe('the desk’s side of payments, on a desktop', () => {
         amount: 20,
         method: 'transfer',
         reference: 'TRF 88',
+        version: (await colleague.get(`/api/orders/${order.id}`).expect(200)).body.version,
       })
       .expect(201);
     await page.getByLabel('Reference').fill('Chq 20411');
     await page.getByRole('button', { name: 'Record payment' }).click();
-    await page.getByText('Another payment was recorded on this order').waitFor();
+    await page.getByText(/changed since you opened it.*Check the payments below/).waitFor();
     await page.getByTestId('order-payments').getByText('TRF 88').waitFor();
     await shot('2-stale');
 

@@ -5,7 +5,8 @@ export { createCustomerSchema, updateCustomerSchema } from '../../../shared/api/
 export { createJobSchema } from '../../../shared/api/jobs';
 
 /** Builders table: paging, search, sort, and a terms filter. */
-export const customerListQuerySchema = listQuerySchema.extend({
+export const customerListQuerySchema = z.object({
+  ...listQuerySchema.shape,
   terms: z.enum(['account', 'deposit']).optional(),
 });
 export type CustomerListQuery = z.infer<typeof customerListQuerySchema>;

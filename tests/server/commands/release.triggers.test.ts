@@ -64,10 +64,12 @@ describe('an order releases by itself when a command completes the gate', () => 
     await approveAll(w.order.id);
     await accept(w);
     expect((await Order.findByPk(w.order.id))!.status).toBe('accepted');
-    await recordOfflinePayment(w.sales, (await Order.findByPk(w.order.id))!, {
+    const seen = (await Order.findByPk(w.order.id))!;
+    await recordOfflinePayment(w.sales, seen, {
       amount: Number(w.quote.depositDue),
       method: 'cheque',
       reference: 'CHQ 1001',
+      version: seen.version,
     });
     await expectReleased(w.order.id);
   });
@@ -107,10 +109,12 @@ describe('an order releases by itself when a command completes the gate', () => 
   it('not when the gate is still open: a design pending, the deposit paid', async () => {
     const w = await sentQuoteWorld(plant);
     await accept(w);
-    await recordOfflinePayment(w.sales, (await Order.findByPk(w.order.id))!, {
+    const seen = (await Order.findByPk(w.order.id))!;
+    await recordOfflinePayment(w.sales, seen, {
       amount: Number(w.quote.depositDue),
       method: 'cheque',
       reference: 'CHQ 1002',
+      version: seen.version,
     });
     expect((await Order.findByPk(w.order.id))!.status).toBe('deposit_paid');
   });

@@ -332,6 +332,7 @@ describe('role matrix: the builder, every route group', () => {
           amount: 10,
           method: 'cheque',
           reference: 'Chq 1',
+          version: 1,
         }),
       403,
       404,

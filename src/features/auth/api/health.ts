@@ -1,5 +1,5 @@
 import { queryOptions, useQuery } from '@tanstack/react-query';
-import { z } from 'zod';
+import * as z from 'zod/mini';
 import { api } from '../../../lib/api-client';
 import { authKeys } from '../../../lib/query-keys';
 

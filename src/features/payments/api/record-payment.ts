@@ -4,7 +4,7 @@ import { api, isApiError } from '../../../lib/api-client';
 import { orderKeys } from '../../../lib/query-keys';
 
 /**
- * `POST /api/orders/:id/payments { amount, method, reference, expectedPaid }` → 201 the payment.
+ * `POST /api/orders/:id/payments { amount, method, reference, version }` → 201 the payment.
  * The order (payments, balance, status) and its mail (the receipt) refetch; so does a stale order.
  */
 export function useRecordPayment(orderId: number) {

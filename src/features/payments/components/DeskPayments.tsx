@@ -131,7 +131,7 @@ export function DeskPayments({ order }: { order: OrderDetail }) {
                 <OfflinePaymentForm
                   orderId={order.id}
                   currency={money.currency}
-                  paid={money.paid}
+                  version={order.version}
                   suggested={money.depositDue > 0 ? money.depositDue : Math.max(0, money.balance)}
                 />
               </div>

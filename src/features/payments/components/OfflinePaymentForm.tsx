@@ -1,7 +1,7 @@
 import { zodResolver } from '@hookform/resolvers/zod';
 import { useState } from 'react';
 import { useForm } from 'react-hook-form';
-import type { z } from 'zod';
+import { omit, type z } from 'zod/mini';
 import { offlinePaymentSchema, type OfflinePaymentInput } from '../../../../shared/api/portal';
 import {
   Alert,
@@ -16,15 +16,17 @@ import { isApiError } from '../../../lib/api-client';
 import { useRecordPayment } from '../api/record-payment';
 import { formatAmount } from '../money';
 
-type Values = z.input<typeof offlinePaymentSchema>;
+/** What the desk types: the route's schema without the order version, which the page adds. */
+const formSchema = omit(offlinePaymentSchema, { version: true });
+type Values = z.input<typeof formSchema>;
 const FIELDS = ['amount', 'method', 'reference'] as const;
 
 /** Props of {@link OfflinePaymentForm}. */
 export interface OfflinePaymentFormProps {
   orderId: number;
   currency: string;
-  /** What the desk sees as paid now; a payment recorded meanwhile answers 409. */
-  paid: number;
+  /** The order's version the desk sees; a payment (or any change) recorded meanwhile answers 409. */
+  version: number;
   /** Offered as the amount: the deposit still due, else the balance. */
   suggested: number;
 }
@@ -36,7 +38,7 @@ export interface OfflinePaymentFormProps {
 export function OfflinePaymentForm({
   orderId,
   currency,
-  paid,
+  version,
   suggested,
 }: OfflinePaymentFormProps) {
   const record = useRecordPayment(orderId);
@@ -47,8 +49,8 @@ export function OfflinePaymentForm({
     reset,
     setError,
     formState: { errors },
-  } = useForm<Values, unknown, OfflinePaymentInput>({
-    resolver: zodResolver(offlinePaymentSchema),
+  } = useForm<Values, unknown, Omit<OfflinePaymentInput, 'version'>>({
+    resolver: zodResolver(formSchema),
     defaultValues: {
       amount: suggested > 0 ? suggested : undefined,
       method: 'cheque',
@@ -59,7 +61,7 @@ export function OfflinePaymentForm({
   const onSubmit = handleSubmit((values) => {
     setDone(null);
     record.mutate(
-      { ...values, expectedPaid: paid },
+      { ...values, version },
       {
         onSuccess: (p) => {
           setDone(

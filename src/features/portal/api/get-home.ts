@@ -1,5 +1,5 @@
 import { queryOptions, useQuery } from '@tanstack/react-query';
-import { portalHomeSchema } from '../../../../shared/api/portal';
+import type { PortalHome } from '../../../../shared/api/portal';
 import { api } from '../../../lib/api-client';
 import { portalKeys } from './keys';
 
@@ -7,7 +7,9 @@ import { portalKeys } from './keys';
 export const portalHomeQueryOptions = () =>
   queryOptions({
     queryKey: portalKeys.home(),
-    queryFn: ({ signal }) => api.request('/api/portal/home', { schema: portalHomeSchema, signal }),
+    // Typed, not parsed: this answer is on a builder's first load, which carries no zod (README,
+    // "Portal bundle"); tests/server parse it with the shared schema.
+    queryFn: ({ signal }) => api.request<PortalHome>('/api/portal/home', { signal }),
   });
 
 export const usePortalHome = () => useQuery(portalHomeQueryOptions());

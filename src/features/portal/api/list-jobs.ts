@@ -1,6 +1,7 @@
 import { queryOptions, useQuery } from '@tanstack/react-query';
-import { jobSummarySchema, pageOf } from '../../../../shared/api/list';
-import { orderSummarySchema } from '../../../../shared/api/orders';
+import type { JobSummary } from '../../../../shared/api/list';
+import type { OrderSummary } from '../../../../shared/api/orders';
+import type { PageOf } from '../../../components/ui';
 import { api } from '../../../lib/api-client';
 import { portalKeys } from './keys';
 
@@ -15,9 +16,11 @@ export const portalJobsQueryOptions = () =>
   queryOptions({
     queryKey: [...portalKeys.all, 'jobs'] as const,
     queryFn: async ({ signal }) => {
+      // Typed, not parsed: this answer is on a builder's first load, which carries no zod (README,
+      // "Portal bundle"); tests/server parse it with the shared schema.
       const [jobs, orders] = await Promise.all([
-        api.request('/api/jobs', { query: ALL, schema: pageOf(jobSummarySchema), signal }),
-        api.request('/api/orders', { query: ALL, schema: pageOf(orderSummarySchema), signal }),
+        api.request<PageOf<JobSummary>>('/api/jobs', { query: ALL, signal }),
+        api.request<PageOf<OrderSummary>>('/api/orders', { query: ALL, signal }),
       ]);
       return jobs.items.map((job) => ({
         ...job,

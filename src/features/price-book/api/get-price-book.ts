@@ -8,7 +8,8 @@ import { priceBookKeys } from './keys';
  * The answer of `GET`/`PUT /api/price-book`: the book, `demo` while it is invented defaults, and
  * when and by whom it was last saved (null until it is).
  */
-export const storedPriceBookSchema = priceBookSchema.extend({
+export const storedPriceBookSchema = z.object({
+  ...priceBookSchema.shape,
   demo: z.boolean().default(false),
   updatedAt: z.string().nullable().default(null),
   updatedBy: z.string().nullable().default(null),

@@ -5,7 +5,7 @@ import { fractionToPercent, percentToFraction } from './percent';
 const book = priceBookSchema.shape;
 
 /** A percentage field over one of the book's fractions: its range messages are the server's. */
-const percentOf = (fraction: z.ZodType<number, number>, label: string) =>
+const percentOf = (fraction: z.core.$ZodType<number, number>, label: string) =>
   z
     .number({ message: `${label} must be a number` })
     .transform(percentToFraction)
@@ -15,7 +15,7 @@ const percentOf = (fraction: z.ZodType<number, number>, label: string) =>
  * Override rows (id + cost) over one of the book's `record` maps. A table of rows is what a person
  * edits; ids must be filled in and unique, because the record keeps only one cost per id.
  */
-const overrideRows = (cost: z.ZodType<number>, what: string) =>
+const overrideRows = (cost: z.core.$ZodType<number>, what: string) =>
   z
     .array(z.object({ id: z.string().trim().min(1, `Enter a ${what} id`), cost }))
     .superRefine((rows, ctx) => {
@@ -43,21 +43,21 @@ export const priceBookFormSchema = z
     currency: book.currency,
     lumber: z.object({
       defaultPerBoardFoot: book.lumber.shape.defaultPerBoardFoot,
-      byLumber: overrideRows(book.lumber.shape.byLumber.unwrap().valueType, 'lumber'),
+      byLumber: overrideRows(book.lumber.shape.byLumber.def.innerType.def.valueType, 'lumber'),
     }),
     plates: z.object({
       defaultPerSquareInch: book.plates.shape.defaultPerSquareInch,
-      byPlate: overrideRows(book.plates.shape.byPlate.unwrap().valueType, 'plate'),
+      byPlate: overrideRows(book.plates.shape.byPlate.def.innerType.def.valueType, 'plate'),
     }),
     labour: book.labour,
     deliveryCharge: book.deliveryCharge,
     margin: percentOf(book.margin, 'Margin'),
     taxRate: percentOf(book.taxRate, 'Tax rate'),
     depositRate: percentOf(book.depositRate, 'Deposit'),
-    cancellationFee: book.cancellationFee.unwrap(),
+    cancellationFee: book.cancellationFee.def.innerType,
     quoteValidityDays: z
       .number({ message: 'Enter a number of days' })
-      .pipe(book.quoteValidityDays.unwrap()),
+      .pipe(book.quoteValidityDays.def.innerType),
     terms: book.terms,
   })
   .transform((value, ctx): PriceBook => {

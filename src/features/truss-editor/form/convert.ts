@@ -5,6 +5,7 @@ import {
   type DesignInputDraft,
   type WebBraceKind,
 } from '../../../../shared/api/design';
+import { omit } from 'zod/mini';
 import { createLineSchema } from '../../../../shared/api/orders';
 import {
   formatFeetInches,
@@ -150,7 +151,7 @@ export function formToRequest(values: TrussFormValues, units: FormUnits): FormRe
     ...pointLoadsOf(values.pointLoads ?? [], units, errors),
     ...bracingOf(values, length),
   };
-  const line = createLineSchema.omit({ design: true }).safeParse({
+  const line = omit(createLineSchema, { design: true }).safeParse({
     mark: values.mark,
     quantity: number('quantity', 'a quantity', false),
     plies: draft.plies,

@@ -278,11 +278,13 @@ describe('refunds and offline payments', () => {
     await sales
       .post(`/api/orders/${order.id}/payments`, { amount: due, method: 'cheque' })
       .expect(400);
+    const { version } = (await sales.get(`/api/orders/${order.id}`).expect(200)).body;
     const res = await sales
       .post(`/api/orders/${order.id}/payments`, {
         amount: due,
         method: 'cheque',
         reference: 'Chq 20411',
+        version,
       })
       .expect(201);
     expect(res.body).toMatchObject({

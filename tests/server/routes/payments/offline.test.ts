@@ -28,7 +28,8 @@ async function acceptedWithDesk() {
 describe('the desk’s side of an order’s money', () => {
   it('shows the deposit asked, what is still due, paid, refunded and outstanding', async () => {
     const { order, quote, sales } = await acceptedWithDesk();
-    const before = (await sales.get(`/api/orders/${order.id}`).expect(200)).body.money;
+    const seen = (await sales.get(`/api/orders/${order.id}`).expect(200)).body;
+    const before = seen.money;
     expect(before).toEqual({
       currency: 'USD',
       total: Number(quote.total),
@@ -43,10 +44,13 @@ describe('the desk’s side of an order’s money', () => {
         amount: 50,
         method: 'transfer',
         reference: 'TRF 0031',
-        expectedPaid: 0,
+        version: seen.version,
       })
       .expect(201);
-    const after = (await sales.get(`/api/orders/${order.id}`).expect(200)).body.money;
+    const view = (await sales.get(`/api/orders/${order.id}`).expect(200)).body;
+    // Money arriving raises the order's version: a form opened before it is stale.
+    expect(view.version).toBeGreaterThan(seen.version);
+    const after = view.money;
     expect(after).toMatchObject({
       paid: 50,
       deposit: Number(quote.depositDue),
@@ -57,21 +61,28 @@ describe('the desk’s side of an order’s money', () => {
 
   it('answers 409 when money was recorded since the desk opened the order, and records nothing', async () => {
     const { order, sales } = await acceptedWithDesk();
-    const body = { amount: 100, method: 'cheque', reference: 'Chq 1001', expectedPaid: 0 };
+    const { version } = (await sales.get(`/api/orders/${order.id}`).expect(200)).body;
+    const body = { amount: 100, method: 'cheque', reference: 'Chq 1001', version };
     await sales.post(`/api/orders/${order.id}/payments`, body).expect(201);
-    // A second tab still showing nothing paid sends the same cheque again.
+    // A second tab still showing the order as it was sends the same cheque again.
     const stale = await sales.post(`/api/orders/${order.id}/payments`, body).expect(409);
     expect(stale.body.error).toMatchObject({ code: 'stale' });
-    expect(stale.body.error.message).toMatch(/Another payment was recorded/);
+    expect(stale.body.error.message).toMatch(/changed since you opened it.*Check the payments/);
     expect(await Payment.count({ where: { orderId: order.id } })).toBe(1);
-    // With what it now sees, it records the next one.
+    // With the version it now sees, it records the next one.
+    const now = (await sales.get(`/api/orders/${order.id}`).expect(200)).body.version;
     await sales
-      .post(`/api/orders/${order.id}/payments`, {
-        ...body,
-        reference: 'Chq 1002',
-        expectedPaid: 100,
-      })
+      .post(`/api/orders/${order.id}/payments`, { ...body, reference: 'Chq 1002', version: now })
       .expect(201);
+  });
+
+  it('refuses a payment that names no version, and records nothing', async () => {
+    const { order, sales } = await acceptedWithDesk();
+    const res = await sales
+      .post(`/api/orders/${order.id}/payments`, { amount: 5, method: 'cash', reference: 'Till' })
+      .expect(400);
+    expect(res.body.error.fields.version).toBe('Reload the order: send the version you looked at');
+    expect(await Payment.count({ where: { orderId: order.id } })).toBe(0);
   });
 
   it('refuses bad input with a message beside the field and records nothing', async () => {
@@ -81,17 +92,17 @@ describe('the desk’s side of an order’s money', () => {
       expect(res.body.error.fields[field]).toBe(message);
     };
     await bad(
-      { amount: 0, method: 'cheque', reference: 'x' },
+      { amount: 0, method: 'cheque', reference: 'x', version: 1 },
       'amount',
       'Enter the amount received',
     );
     await bad(
-      { amount: 10, method: 'barter', reference: 'x' },
+      { amount: 10, method: 'barter', reference: 'x', version: 1 },
       'method',
       'Cheque, transfer or cash',
     );
     await bad(
-      { amount: 10, method: 'cheque', reference: '  ' },
+      { amount: 10, method: 'cheque', reference: '  ', version: 1 },
       'reference',
       'Enter the cheque number or transfer reference',
     );

@@ -117,17 +117,49 @@ describe('accepting a quote', () => {
     await s.post(`/api/orders/${order.id}/quotes/1/accept`, agree()).expect(404);
   });
 
-  it("the desk records an acceptance on the builder's behalf, saying how", async () => {
+  it("the desk records an acceptance on the builder's behalf, saying how, with the version it saw", async () => {
     const { sales, order } = await sentQuoteWorld(plant);
     const s = await signedIn(app, sales.email);
-    const bare = await s.post(`/api/orders/${order.id}/quotes/1/accept`, agree()).expect(400);
+    const { version } = (await s.get(`/api/orders/${order.id}`).expect(200)).body;
+    const bare = await s
+      .post(`/api/orders/${order.id}/quotes/1/accept`, { ...agree(), version })
+      .expect(400);
     expect(bare.body.error.message).toMatch(/phone, paper or e-mail/);
-    const res = await s
+    const unseen = await s
       .post(`/api/orders/${order.id}/quotes/1/accept`, { ...agree(), method: 'phone' })
+      .expect(400);
+    expect(unseen.body.error.fields.version).toMatch(/Reload the order/);
+    // The order changed since the desk opened it: nothing is recorded.
+    const stale = await s
+      .post(`/api/orders/${order.id}/quotes/1/accept`, {
+        ...agree(),
+        method: 'phone',
+        version: version - 1 || version + 1,
+      })
+      .expect(409);
+    expect(stale.body.error.code).toBe('stale');
+    expect(await QuoteAcceptance.count({ where: { orderId: order.id } })).toBe(0);
+    const res = await s
+      .post(`/api/orders/${order.id}/quotes/1/accept`, {
+        ...agree(),
+        method: 'email',
+        note: 'Signed copy attached to their e-mail of Tuesday',
+        version,
+      })
       .expect(200);
-    expect(res.body.acceptance).toMatchObject({ onBehalf: true, method: 'phone' });
+    expect(res.body.acceptance).toMatchObject({ onBehalf: true, method: 'email' });
     const summary = res.body.history.find((h: { action: string }) => h.action === 'quote.accepted');
-    expect(summary.summary).toMatch(/on the builder's behalf \(phone\)/);
+    expect(summary.summary).toBe(
+      "Accepted Q as “Dana Whitaker” on the builder's behalf (by e-mail): Signed copy attached to their e-mail of Tuesday".replace(
+        'Q',
+        res.body.acceptance.reference,
+      ),
+    );
+    // A second click with the page as it was changes nothing and answers the same.
+    await s
+      .post(`/api/orders/${order.id}/quotes/1/accept`, { ...agree(), method: 'email', version })
+      .expect(200);
+    expect(await QuoteAcceptance.count({ where: { orderId: order.id } })).toBe(1);
   });
 });
 
