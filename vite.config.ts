@@ -37,7 +37,7 @@ export default defineConfig({
         extends: true,
         test: {
           name: 'integration',
-          include: ['tests/server/**/*.test.ts'],
+          include: ['tests/server/**/*.test.ts', 'tests/seeders/**/*.test.ts'],
           setupFiles: ['tests/support/matchers.ts'],
           fileParallelism: false,
           testTimeout: 30000,

@@ -8,6 +8,7 @@ import { Customer, Job, Plant, User } from '../server/models';
 import { DEMO_PASSWORD, DEMO_SIGN_INS } from '../shared/api/demo';
 import { seedOrders } from './orders';
 import { seedPriceBook } from './priceBook';
+import { seedScenario } from './scenario';
 
 const CUSTOMERS = [
   {
@@ -166,6 +167,8 @@ export async function seedDemo() {
   }
   await seedOrders(plant);
   await seedPriceBook(plant);
+  // Orders past "quote sent": portal, payments, shop, schedule, floor and delivery.
+  await seedScenario(plant);
   await seedShopPlans(plant);
   return plant;
 }
