@@ -1,9 +1,6 @@
 import type { WhereOptions } from 'sequelize';
 import type { Order, User } from '../models';
-import { all, hasRole, ownCompany, type Predicate } from './predicates';
-
-/** Lines may change only while the order is a draft (a quoted order needs a new revision). */
-export const isDraft: Predicate<Order> = (_actor, order) => order.status === 'draft';
+import { all, hasRole, ownCompany } from './predicates';
 
 /** Orders: the desk writes, every staff role reads, a builder reads their company's. */
 export const orderPolicy = {

@@ -16,6 +16,13 @@ export const ORDER_STATUSES = [
 ] as const;
 export type OrderStatus = (typeof ORDER_STATUSES)[number];
 
+/**
+ * Truss lines change only on a draft or a quoted order (a change to a quoted order makes a new
+ * revision); once accepted the builder agreed to these trusses and the shop works from them.
+ */
+export const linesMayChange = (status: OrderStatus): boolean =>
+  status === 'draft' || status === 'quoted';
+
 export const REVIEW_STATES = ['pending', 'approved', 'returned'] as const;
 export type ReviewState = (typeof REVIEW_STATES)[number];
 

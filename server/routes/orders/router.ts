@@ -3,7 +3,8 @@ import { Op } from 'sequelize';
 import { requireUser } from '../../middleware/auth';
 import { validate, parseId } from '../../middleware/validate';
 import { authorize } from '../../policies/predicates';
-import { orderPolicy, isDraft } from '../../policies/order';
+import { orderPolicy } from '../../policies/order';
+import { linesMayChange } from '../../../shared/api/orders';
 import {
   addLine,
   copyLine,
@@ -47,8 +48,8 @@ const loadLine: RequestHandler = handle(async (req, res, next) => {
  * A draft order's lines change, and a quoted one's (the command turns it back to draft for a new
  * quote revision); any other status answers 409 with the reason.
  */
-const requireDraft: RequestHandler = (req, res, next) =>
-  isDraft(req.user!, res.locals.record) || (res.locals.record as Order).status === 'quoted'
+const requireDraft: RequestHandler = (_req, res, next) =>
+  linesMayChange((res.locals.record as Order).status)
     ? next()
     : next(conflict('Only a draft or quoted order’s lines can change.'));
 

@@ -1,6 +1,6 @@
 import { useState, type ReactNode } from 'react';
 import { useLocation } from 'react-router';
-import type { LineSummary, OrderDetail } from '../../../../shared/api/orders';
+import { linesMayChange, type LineSummary, type OrderDetail } from '../../../../shared/api/orders';
 import {
   Alert,
   Button,
@@ -221,40 +221,49 @@ export function OrderPage({
   const saved = (useLocation().state as { saved?: string } | null)?.saved;
   return (
     <QueryState query={order} what="the order">
-      {(o) => (
-        <>
-          <p className="mb-2 text-sm print:hidden">
-            <TextLink to="/orders">← Orders</TextLink>
-          </p>
-          <Header
-            order={o}
-            canEdit={canEdit}
-            canOpenJob={canOpenJob}
-            canSeeQuotes={canSeeQuotes}
-            canSeeShop={canSeeShop}
-          />
-          {saved ? (
-            <Alert tone="success" className="mb-4">
-              {saved}
-            </Alert>
-          ) : null}
-          {!canEdit ? (
-            <Alert className="mb-4 print:hidden">
-              You can follow this order here; the plant’s sales desk makes the changes.
-            </Alert>
-          ) : null}
-          <div className="grid grid-cols-[minmax(0,1fr)] gap-6">
-            {production?.(o)}
-            <Lines
+      {(o) => {
+        // The desk's line actions only where the server takes them (one rule, shared).
+        const editable = canEdit && linesMayChange(o.status);
+        return (
+          <>
+            <p className="mb-2 text-sm print:hidden">
+              <TextLink to="/orders">← Orders</TextLink>
+            </p>
+            <Header
               order={o}
-              canEdit={canEdit}
-              markHref={markHref ? (line) => markHref(o.id, line) : undefined}
+              canEdit={editable}
+              canOpenJob={canOpenJob}
+              canSeeQuotes={canSeeQuotes}
+              canSeeShop={canSeeShop}
             />
-            {payments?.(o)}
-            <OrderHistory entries={o.history} />
-          </div>
-        </>
-      )}
+            {saved ? (
+              <Alert tone="success" className="mb-4">
+                {saved}
+              </Alert>
+            ) : null}
+            {!canEdit ? (
+              <Alert className="mb-4 print:hidden">
+                You can follow this order here; the plant’s sales desk makes the changes.
+              </Alert>
+            ) : !editable ? (
+              <Alert className="mb-4 print:hidden">
+                The builder has accepted this order, so its trusses are fixed: open a mark to read
+                its design. A change needs a new order or a change agreed with the builder.
+              </Alert>
+            ) : null}
+            <div className="grid grid-cols-[minmax(0,1fr)] gap-6">
+              {production?.(o)}
+              <Lines
+                order={o}
+                canEdit={editable}
+                markHref={markHref ? (line) => markHref(o.id, line) : undefined}
+              />
+              {payments?.(o)}
+              <OrderHistory entries={o.history} />
+            </div>
+          </>
+        );
+      }}
     </QueryState>
   );
 }
