@@ -105,6 +105,29 @@ function downNormal(
   return { ...down, len };
 }
 
+/** What every load set of a profile reuses: member index by id, each member's down normal. */
+interface ProfileLoadGeometry {
+  index: ReadonlyMap<string, number>;
+  normals: { x: number; y: number; len: number }[];
+}
+
+// Loads are built several times per design (each combination, each sizing pass, deflection):
+// the geometry they need is the profile's and is computed once per profile.
+const geometryOf = new WeakMap<TrussProfile, ProfileLoadGeometry>();
+
+function loadGeometry(profile: TrussProfile): ProfileLoadGeometry {
+  let g = geometryOf.get(profile);
+  if (!g) {
+    const byId = new Map(profile.joints.map((j) => [j.id, j]));
+    g = {
+      index: new Map(profile.members.map((m, k) => [m.id, k])),
+      normals: profile.members.map((mb) => downNormal(byId, mb.from, mb.to)),
+    };
+    geometryOf.set(profile, g);
+  }
+  return g;
+}
+
 /**
  * Loads of one load set on the design frame. The loads module lumps each chord's line load to
  * its panel points (half of each member's total to each end) and gives the part across the
@@ -133,11 +156,11 @@ export function frameLoadsOf(
     j.fy! += l.fy ?? 0;
   }
   const members: FrameMemberLoad[] = [];
-  const byId = new Map(profile.joints.map((j) => [j.id, j]));
+  const { index, normals } = loadGeometry(profile);
   profile.members.forEach((mb, k) => {
     const t = transverse[k];
     if (!t) return;
-    const n = downNormal(byId, mb.from, mb.to);
+    const n = normals[k];
     for (const end of [mb.from, mb.to]) {
       const j = at(end);
       j.fx! -= (t * n.len * n.x) / 2;
@@ -145,7 +168,6 @@ export function frameLoadsOf(
     }
     members.push({ kind: 'uniform', member: mb.id, transverse: t });
   });
-  const index = new Map(profile.members.map((m, k) => [m.id, k]));
   const seen = new Set<number>();
   for (const o of profile.overhangs) {
     const k = index.get(o.member);
@@ -163,7 +185,7 @@ export function caseFrameLoads(
   profile: TrussProfile,
   terms: readonly (readonly [CaseLoads | undefined, number])[],
 ): FrameLoads {
-  const index = new Map(profile.members.map((m, k) => [m.id, k]));
+  const { index } = loadGeometry(profile);
   const transverse = new Float64Array(profile.members.length);
   const overhang = new Float64Array(profile.members.length);
   const jointLoads: JointLoad[] = [];

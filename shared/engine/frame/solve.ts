@@ -5,6 +5,8 @@ import { addPointFixedEnd, addUniformFixedEnd, alongMember, type LocalPoint } fr
 import type { PreparedFrame } from './prepare';
 import type { FrameLoads, FrameMemberResult, FrameResult } from './types';
 
+const NO_POINTS: readonly LocalPoint[] = [];
+
 /** Local loads of one member collected from a load set. */
 interface Local {
   px: Float64Array;
@@ -87,13 +89,15 @@ export function solveFrame(p: PreparedFrame, loads: FrameLoads): FrameResult {
   let largest = 0;
   for (const l of loads.joints ?? []) {
     const j = p.jointIndex.get(l.joint);
-    const f = [l.fx ?? 0, l.fy ?? 0, l.m ?? 0];
-    if (j === undefined || !f.every(Number.isFinite)) {
+    const fx = l.fx ?? 0;
+    const fy = l.fy ?? 0;
+    const m = l.m ?? 0;
+    if (j === undefined || !(Number.isFinite(fx) && Number.isFinite(fy) && Number.isFinite(m))) {
       throw new EngineError('invalid', `Invalid load at joint "${l.joint}".`, { joint: l.joint });
     }
-    nodal[3 * j] += f[0];
-    nodal[3 * j + 1] += f[1];
-    nodal[3 * j + 2] += f[2];
+    nodal[3 * j] += fx;
+    nodal[3 * j + 1] += fy;
+    nodal[3 * j + 2] += m;
   }
   const local = localLoads(p, loads);
   // Equivalent joint loads: −Tᵀ·G·q₀ of every loaded member.
@@ -129,10 +133,9 @@ export function solveFrame(p: PreparedFrame, loads: FrameLoads): FrameResult {
     const at = 6 * e;
     const c = p.cos[e];
     const s = p.sin[e];
-    for (const [end, j] of [
-      [0, p.from[e]],
-      [3, p.to[e]],
-    ] as const) {
+    // No per-member arrays here: this loop runs for every member of every load set.
+    for (let end = 0; end <= 3; end += 3) {
+      const j = end === 0 ? p.from[e] : p.to[e];
       ul[end] = c * u[3 * j] + s * u[3 * j + 1];
       ul[end + 1] = -s * u[3 * j] + c * u[3 * j + 1];
       ul[end + 2] = u[3 * j + 2];
@@ -144,7 +147,7 @@ export function solveFrame(p: PreparedFrame, loads: FrameLoads): FrameResult {
     }
     scatter(p, e, q, at, balance, 1);
     const L = p.length[e];
-    const along = alongMember(q, at, L, local.py[e], local.points.get(e) ?? []);
+    const along = alongMember(q, at, L, local.py[e], local.points.get(e) ?? NO_POINTS);
     const sign = downSign(c, s);
     // Sagging about local y is tension on the −y face; flip when local y points down.
     members[e] = {
@@ -205,10 +208,8 @@ function scatter(
 ) {
   const c = p.cos[e];
   const s = p.sin[e];
-  for (const [end, j] of [
-    [0, p.from[e]],
-    [3, p.to[e]],
-  ] as const) {
+  for (let end = 0; end <= 3; end += 3) {
+    const j = end === 0 ? p.from[e] : p.to[e];
     into[3 * j] += sign * (c * q[at + end] - s * q[at + end + 1]);
     into[3 * j + 1] += sign * (s * q[at + end] + c * q[at + end + 1]);
     into[3 * j + 2] += sign * q[at + end + 2];
