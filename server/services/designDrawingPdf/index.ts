@@ -177,11 +177,13 @@ function sheet(doc: Doc, s: DesignDrawingSheet) {
     y + 2,
     [
       { title: 'Joint', width: 30 },
-      { title: 'x from left', width: 56, align: 'right' },
-      { title: 'y above brg', width: 56, align: 'right' },
-      { title: 'Connector', width: 132 },
+      { title: 'x from left', width: 46, align: 'right' },
+      { title: 'y above brg', width: 46, align: 'right' },
+      { title: 'Connector', width: 112 },
       { title: 'Plate size', width: 58 },
-      { title: 'Plate position', width: leftW - 30 - 56 - 56 - 132 - 58 },
+      { title: 'Plate position', width: leftW - 30 - 46 - 46 - 112 - 58 - 74 },
+      // Teeth on a member, or the steel in tension, shear or both combined; and its ratio.
+      { title: 'Governs', width: 74 },
     ],
     s.joints,
     bottom,

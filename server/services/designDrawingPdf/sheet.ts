@@ -149,6 +149,9 @@ export function designDrawingSheet(ctx: DesignDrawingContext): DesignDrawingShee
       p ? `${p.plate}, ${p.gauge} ga, both faces` : plate?.message ? 'No plate fits' : '—',
       p ? `${p.widthIn} × ${p.lengthIn} in.` : '—',
       p ? p.position.replace(/ of the joint$/, '') : '—',
+      plate?.governing
+        ? `${plate.governing.check} ${plate.governing.member} ${plate.governing.ratio.toFixed(2)}`
+        : '—',
     ];
   });
 

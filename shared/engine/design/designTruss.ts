@@ -324,7 +324,7 @@ export function designTruss(input: EngineDesignInput, options: DesignOptions = {
       : []),
     `Long-term deflection ${KCR_SEASONED_DRY}·Δ(dead) + Δ(live) against the total-load limit: creep factor Kcr = ${KCR_SEASONED_DRY} for seasoned lumber in dry service (NDS 2018 §3.5.2).`,
     "Chord shear fv = 1.5V/A ≤ Fv′ = Fv·CD (NDS 2018 §3.4.2) with V the largest shear along each chord member in the frame, taken at the panel point (loads within d of it are not neglected), and on the member that carries an overhang at least the overhang's root shear at the bearing (its whole load square to the chord); it counts in the member's CSI.",
-    'Plates: tooth holding with |F|/CD of each combination (tooth values take CD); the steel across heel and splice lines with the full |F| (steel capacities take no load-duration factor).',
+    'Plates: tooth holding with |F|/CD of each combination (tooth values take CD), the value for each member by its angle to the plate (AA/EA/AE/EE, straight-line between) and to the grain (Hankinson), the top chord at a heel reduced by HR = 0.85 − 0.05(12 tan θ − 2), 0.65…0.85 (ANSI/TPI 1-2014, from memory); the steel with the full signed forces of each combination (steel capacities take no load-duration factor) in tension, shear and (T/Tc)² + (V/Vc)² ≤ 1 across the heel or splice line, the chord face at a panel point (the webs together) and the line through a peak (members along it not credited).',
     ...(catalog.demo ? [catalog.label] : []),
     ...girderNotes(input.plies),
     ...plyConnections.map((c) => c.text),

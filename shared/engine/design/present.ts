@@ -1,5 +1,6 @@
 import { formatFeetInches, formatMm } from '../format';
 import { MM_PER_INCH, MPA_PER_PSI, N_PER_LBF } from '../units';
+import { plateGovernsText } from '../plates/report';
 import type { AdditionalChecks, ShearCheck, UpliftCheck } from './additionalChecks';
 import type { DeflectionCheck, TrussDesign } from './types';
 
@@ -124,8 +125,31 @@ export interface PresentedDesign {
     /** Slide of the plate centre from the joint, square to its length axis (+ toward the axis turned +90°), in or mm. */
     offset?: number;
     ratio?: number;
-    members?: { member: string; area: number; demand: number; capacity: number; ratio: number }[];
-    steel?: { kind: string; member: string; demand: number; capacity: number; ratio: number }[];
+    /** What governs, in words: teeth on a member at its angle, or steel tension/shear/combined. */
+    governs?: string;
+    /** The same, as data: `check` teeth | tension | shear | combined, the member(s), the ratio. */
+    governing?: { check: string; member: string; ratio: number };
+    /** Tooth holding per member: angles in degrees, lateral value per face (stress units). */
+    members?: {
+      member: string;
+      area: number;
+      demand: number;
+      capacity: number;
+      ratio: number;
+      plateToLoadDeg: number;
+      loadToGrainDeg: number;
+      lateralValue: number;
+      heelFactor: number;
+    }[];
+    /** Steel per section: `line` heel | splice | chordFace | joint; `member` the crossing members. */
+    steel?: {
+      kind: string;
+      line: string;
+      member: string;
+      demand: number;
+      capacity: number;
+      ratio: number;
+    }[];
     message?: string;
   }[];
   demoPlates: boolean;
@@ -267,15 +291,22 @@ export function presentDesign(design: TrussDesign, units: PresentUnits): Present
         angleDeg: round((p.design.angle * 180) / Math.PI, 2),
         offset: len(p.design.offset),
         ratio: ratio(p.design.ratio),
+        governs: plateGovernsText(p.design),
+        governing: { ...p.design.governs, ratio: ratio(p.design.governs.ratio) },
         members: p.design.members.map((c) => ({
           member: c.member,
           area: area(c.area),
           demand: force(c.demand),
           capacity: force(c.capacity),
           ratio: ratio(c.ratio),
+          plateToLoadDeg: round((c.plateToLoad * 180) / Math.PI, 1),
+          loadToGrainDeg: round((c.loadToGrain * 180) / Math.PI, 1),
+          lateralValue: stress(c.lateralValue),
+          heelFactor: round(c.heelFactor, 3),
         })),
         steel: p.design.steel.map((s) => ({
           kind: s.kind,
+          line: s.line,
           member: s.member,
           demand: force(s.demand),
           capacity: force(s.capacity),

@@ -216,7 +216,10 @@ export function AdditionalChecksCard({ design }: { design: PresentedDesign }) {
   );
 }
 
-/** The plate chosen at each joint, with its worst ratio; demo catalogs say so. */
+/**
+ * The plate chosen at each joint, what governs it (teeth by angle, steel tension, shear or
+ * combined) and its worst ratio; demo catalogs say so.
+ */
 export function PlatesTable({ design }: { design: PresentedDesign }) {
   return (
     <Card title="Plates (both faces of each joint)" flush>
@@ -225,12 +228,13 @@ export function PlatesTable({ design }: { design: PresentedDesign }) {
           Demo plate catalog: its design values are invented and are not for construction.
         </p>
       ) : null}
-      <SimpleTable caption="Plates" headers={['Joint', 'Kind', 'Plate', 'Ratio', '']}>
+      <SimpleTable caption="Plates" headers={['Joint', 'Kind', 'Plate', 'Governs', 'Ratio', '']}>
         {design.plates.map((p) => (
           <tr key={p.joint}>
             <td className={`${cell} font-semibold`}>{p.joint}</td>
             <td className={cell}>{p.kind}</td>
             <td className={cell}>{p.plate ?? p.message ?? '—'}</td>
+            <td className={cell}>{p.governs ?? '—'}</td>
             <td className={cell}>{formatCsi(p.ratio)}</td>
             <td className={cell}>{passBadge(p.ok)}</td>
           </tr>
