@@ -17,6 +17,7 @@ import { usersRouter } from './routes/users/router';
 import { customersRouter } from './routes/customers/router';
 import { jobsRouter } from './routes/jobs/router';
 import { plantRouter } from './routes/plant/router';
+import { designRulesRouter } from './routes/plant/designRules';
 import { designDrawingRouter } from './routes/designDrawing/router';
 import { ordersRouter } from './routes/orders/router';
 import { reviewsRouter } from './routes/reviews/router';
@@ -188,6 +189,7 @@ export function createApp(opts: AppOptions) {
   app.use('/api/users', usersRouter());
   app.use('/api/customers', customersRouter());
   app.use('/api/jobs', jobsRouter());
+  app.use('/api/plant/design-rules', designRulesRouter());
   app.use('/api/plant', plantRouter());
   app.use('/api/orders/:id/quotes', acceptanceRouter());
   app.use('/api/orders/:id/quotes', quotesRouter());

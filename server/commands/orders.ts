@@ -4,6 +4,7 @@ import { nextFreeMark } from '../../shared/api/marks';
 import { Order, OrderLine, Plant, type Job, type User } from '../models';
 import { AppError, badRequest, conflict, notFound } from '../errors';
 import { computeDesign, type ComputedDesign } from '../services/design';
+import { loadDesignRules } from '../services/designRules';
 import { orderEvent } from './audit';
 import { releaseAfterCommit } from './release';
 import { queueShopPlanIfReady } from './shopPlans';
@@ -53,7 +54,8 @@ export const lockOrder = async (order: Order, t: Transaction, actor: User) => {
 export const designColumns = (d: ComputedDesign) => ({
   profile: d.profile,
   designInput: d.input as unknown as Record<string, unknown>,
-  designResult: d.result as unknown as Record<string, unknown>,
+  // The plant's design rules the engine ran with are recorded beside the result.
+  designResult: { ...d.result, designRules: d.rules } as unknown as Record<string, unknown>,
   engineVersion: d.engineVersion,
   designOk: d.ok,
   maxCsi: d.maxCsi,
@@ -86,7 +88,8 @@ export async function createOrder(actor: User, job: Job) {
 
 /** Add a truss line; the server computes and stores the design snapshot. */
 export async function addLine(actor: User, order: Order, input: CreateLineInput) {
-  const design = computeDesign(input.design, { plies: input.plies });
+  const rules = await loadDesignRules(order.plantId);
+  const design = computeDesign(input.design, { plies: input.plies }, undefined, rules);
   return Order.sequelize!.transaction(async (t) => {
     await lockOrder(order, t, actor);
     await assertMarkFree(order.id, input.mark, t);
@@ -129,8 +132,14 @@ export async function updateLine(
   if (isNoChange(loaded, input)) return loaded; // a save that changes nothing records nothing
   const redesignOf = (l: OrderLine) =>
     input.design !== undefined || (input.plies !== undefined && input.plies !== l.plies);
+  const rules = await loadDesignRules(order.plantId);
   const designFor = (l: OrderLine) =>
-    computeDesign(input.design ?? l.designInput, { plies: input.plies ?? l.plies });
+    computeDesign(
+      input.design ?? l.designInput,
+      { plies: input.plies ?? l.plies },
+      undefined,
+      rules,
+    );
   if (redesignOf(loaded) && loaded.reviewState === 'approved') throw conflictLocked();
   // The engine runs outside the locks; it runs again inside only if the line changed meanwhile.
   const early = redesignOf(loaded) ? designFor(loaded) : null;
@@ -215,7 +224,8 @@ async function nextMark(orderId: number, t: Transaction) {
 
 /** Copy a line (design recomputed by the current engine) under the next free mark; it needs its own review. */
 export async function copyLine(actor: User, order: Order, loaded: OrderLine) {
-  const early = computeDesign(loaded.designInput, { plies: loaded.plies });
+  const rules = await loadDesignRules(order.plantId);
+  const early = computeDesign(loaded.designInput, { plies: loaded.plies }, undefined, rules);
   return Order.sequelize!.transaction(async (t) => {
     await lockOrder(order, t, actor);
     // The copy is of the design as it is now (recomputed only if it changed since it was loaded).
@@ -223,7 +233,7 @@ export async function copyLine(actor: User, order: Order, loaded: OrderLine) {
     const design =
       line.designVersion === loaded.designVersion && line.plies === loaded.plies
         ? early
-        : computeDesign(line.designInput, { plies: line.plies });
+        : computeDesign(line.designInput, { plies: line.plies }, undefined, rules);
     const max = (await OrderLine.max('position', {
       where: { orderId: order.id },
       transaction: t,

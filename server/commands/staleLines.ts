@@ -8,6 +8,7 @@ import {
 import { Job, Order, OrderLine, Plant, type User } from '../models';
 import { jobDesignLoadsOf } from '../presenters/plant';
 import { computeDesign } from '../services/design';
+import { loadDesignRules } from '../services/designRules';
 import { orderEvent } from './audit';
 import { designColumns, lockOrder } from './orders';
 
@@ -73,7 +74,12 @@ export async function currentJobLoads(job: Job, t?: Transaction) {
 export async function redesignWithJobLoads(actor: User, order: Order, line: OrderLine) {
   const job = await Job.findByPk(order.jobId);
   const { loads } = await currentJobLoads(job!);
-  const design = computeDesign(withJobLoads(line.designInput, loads), { plies: line.plies });
+  const design = computeDesign(
+    withJobLoads(line.designInput, loads),
+    { plies: line.plies },
+    undefined,
+    await loadDesignRules(order.plantId),
+  );
   return Order.sequelize!.transaction(async (t) => {
     await lockOrder(order, t, actor);
     const locked = await OrderLine.findByPk(line.id, { transaction: t, lock: t.LOCK.UPDATE });

@@ -15,6 +15,8 @@ export interface PlantSettings {
   /** Contact details printed on quotes and truss design drawings. */
   phone?: string;
   email?: string;
+  /** Engine options of every design the plant runs (absent: common practice, all off). */
+  designRules?: { amplifyPanelPointMoment?: boolean; version?: number };
 }
 
 /** The fabricator: owns every other record. */

@@ -2,6 +2,7 @@ import type { AreaLoads, DesignCriteria } from '../../shared/api/jobs';
 import { jobDesignLoads } from '../../shared/api/jobLoads';
 import type { PlantDetail } from '../../shared/api/plant';
 import type { Plant } from '../models';
+import { designRulesOf } from '../services/designRules';
 
 /** Typical residential loads, 20/10/0/10 psf (DESIGN.md §1, common practice); kPa by exact conversion. */
 export const DEFAULT_LOADS: Record<'imperial' | 'metric', AreaLoads> = {
@@ -26,5 +27,6 @@ export function presentPlant(plant: Plant, demo: boolean): PlantDetail {
     demo,
     address: plant.address,
     defaultLoads: plantDefaultLoads(plant),
+    designRules: { amplifyPanelPointMoment: designRulesOf(plant).amplifyPanelPointMoment },
   };
 }

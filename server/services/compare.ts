@@ -5,6 +5,7 @@ import { trussLumberMassKg } from '../../shared/engine/design';
 import type { PriceBook } from '../../shared/api/pricing';
 import { AppError } from '../errors';
 import { computeDesign } from './design';
+import { DEFAULT_DESIGN_RULES, type DesignRules } from '../../shared/api/plant';
 import { PLATES_PER_JOINT, priceLine } from './pricing';
 
 const LB_PER_KG = 2.2046226218;
@@ -78,14 +79,17 @@ export function compareProfiles(
   raw: unknown,
   book: PriceBook | null,
   demoPrices: boolean,
+  rules: DesignRules = DEFAULT_DESIGN_RULES,
 ): ProfileComparisons {
-  const base = computeDesign(raw, {}, ''); // validates the request itself (400 with fields)
+  const base = computeDesign(raw, {}, '', rules); // validates the request itself (400 with fields)
   const input = base.input as unknown as Record<string, unknown>;
   const kinds = base.input.profile === 'flat' ? (['flat'] as const) : PITCHED;
   const rows = kinds.map((profile): ProfileComparison => {
     try {
       const d =
-        profile === base.input.profile ? base : computeDesign(asProfile(input, profile), {}, '');
+        profile === base.input.profile
+          ? base
+          : computeDesign(asProfile(input, profile), {}, '', rules);
       return summarize(profile, d.result, d.description, base.input.plies, book);
     } catch (e) {
       if (!(e instanceof AppError)) throw e;

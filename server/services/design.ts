@@ -7,6 +7,8 @@ import { formatFeetInches, formatMm } from '../../shared/engine/format';
 import { inch, inchToMm, mm } from '../../shared/engine/units';
 import { AppError } from '../errors';
 import { fieldMessages } from '../middleware/validate';
+import { DEFAULT_DESIGN_RULES, type DesignRules } from '../../shared/api/plant';
+import { engineOptionsOf } from './designRules';
 
 /** The server's own computation of one design: what is saved, priced and printed. */
 export interface ComputedDesign {
@@ -18,6 +20,8 @@ export interface ComputedDesign {
   warningCount: number;
   profile: string;
   description: string;
+  /** The plant's design rules the engine ran with (stored with the design). */
+  rules: DesignRules;
 }
 
 /** Short line text in the design's own units, e.g. `Fink 28'-0" 6/12`. */
@@ -37,12 +41,14 @@ export function describeDesign(input: DesignInput) {
 /**
  * Parse the design input with the shared schema and run the engine. Bad input and geometry that
  * cannot be built answer 400 and store nothing; a design that merely fails its checks is returned
- * with `ok: false` so the desk sees why.
+ * with `ok: false` so the desk sees why. `rules` are the plant's (`loadDesignRules`); the
+ * design's notes say which panel-point moment rule was used.
  */
 export function computeDesign(
   raw: unknown,
   overrides: { plies?: number } = {},
   fieldPrefix = 'design.',
+  rules: DesignRules = DEFAULT_DESIGN_RULES,
 ): ComputedDesign {
   const body = raw && typeof raw === 'object' ? { ...(raw as object), ...overrides } : raw;
   const parsed = designInputSchema.safeParse(body);
@@ -53,7 +59,7 @@ export function computeDesign(
     throw new AppError(400, 'invalid', Object.values(fields)[0] ?? 'Check the design.', fields);
   }
   try {
-    const design = designTruss(toEngineInput(parsed.data));
+    const design = designTruss(toEngineInput(parsed.data), engineOptionsOf(rules));
     const result = presentDesign(design, parsed.data.units);
     const csis = result.members.map((m) => m.csi).filter(Number.isFinite);
     return {
@@ -65,6 +71,7 @@ export function computeDesign(
       warningCount: result.warnings.length,
       profile: parsed.data.profile,
       description: describeDesign(parsed.data),
+      rules,
     };
   } catch (e) {
     if (isEngineError(e))

@@ -3,6 +3,7 @@ import { requireUser } from '../../middleware/auth';
 import { authorize } from '../../policies/predicates';
 import { orderPolicy } from '../../policies/order';
 import { computeDesign } from '../../services/design';
+import { loadDesignRules } from '../../services/designRules';
 import { compareProfiles } from '../../services/compare';
 import { pricesFor } from '../../commands/priceBook';
 import { priceBookPolicy } from '../../policies/priceBook';
@@ -12,10 +13,15 @@ import { handle } from '../load';
 export function designsRouter() {
   const router = Router();
   // Validation happens inside computeDesign with the shared designInputSchema (400 with field messages).
-  router.post('/preview', requireUser, authorize(orderPolicy.preview), (req, res) => {
-    const d = computeDesign(req.body, {}, '');
-    res.json({ ...d.result, description: d.description });
-  });
+  router.post(
+    '/preview',
+    requireUser,
+    authorize(orderPolicy.preview),
+    handle(async (req, res) => {
+      const d = computeDesign(req.body, {}, '', await loadDesignRules(req.user!.plantId));
+      res.json({ ...d.result, description: d.description, designRules: d.rules });
+    }),
+  );
   // Every profile that fits the same span, pitch and loads; prices only for roles that see them.
   router.post(
     '/compare',
@@ -24,7 +30,14 @@ export function designsRouter() {
     handle(async (req, res) => {
       const seesPrices = priceBookPolicy.show(req.user!, null);
       const prices = seesPrices ? await pricesFor(req.user!.plantId) : null;
-      res.json(compareProfiles(req.body, prices?.book ?? null, prices?.demo ?? false));
+      res.json(
+        compareProfiles(
+          req.body,
+          prices?.book ?? null,
+          prices?.demo ?? false,
+          await loadDesignRules(req.user!.plantId),
+        ),
+      );
     }),
   );
   return router;

@@ -6,6 +6,7 @@ import type {
 } from '../../../shared/api/shopPaper';
 import { ENGINE_VERSION } from '../../../shared/engine/version';
 import { computeDesign } from '../design';
+import type { DesignRules } from '../../../shared/api/plant';
 import { PLATES_PER_JOINT } from '../pricing';
 import { shortLengthText, type ShopLine, type ShopOrderPaper } from './lines';
 
@@ -42,7 +43,9 @@ function positions(line: ShopLine): Map<string, Position | null> {
   }
   if (![...stored.values()].includes(null) || line.engineVersion !== ENGINE_VERSION) return stored;
   try {
-    const again = computeDesign(line.designInput, { plies: line.plies }).result;
+    // Recomputed with the rules the stored design was made with (recorded beside its result).
+    const rules = (line.design as { designRules?: DesignRules }).designRules;
+    const again = computeDesign(line.designInput, { plies: line.plies }, undefined, rules).result;
     for (const p of again.plates) {
       const was = line.design.plates.find((s) => s.joint === p.joint);
       if (stored.get(p.joint) === null && was?.plate === p.plate && p.angleDeg !== undefined)

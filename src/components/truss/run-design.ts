@@ -1,5 +1,10 @@
 import { designInputSchema, toEngineInput, type DesignInput } from '../../../shared/api/design';
-import { designTruss, presentDesign, type PresentedDesign } from '../../../shared/engine/design';
+import {
+  designTruss,
+  presentDesign,
+  type DesignOptions,
+  type PresentedDesign,
+} from '../../../shared/engine/design';
 import { generateProfile } from '../../../shared/engine/profiles';
 import type { ProfileParams } from '../../../shared/engine/profiles/types';
 import { drawingFromDesign, presentedToMm } from './from-design';
@@ -30,10 +35,13 @@ export function overhangsOf(params: ProfileParams, analysedHeel: number): Drawin
   }
 }
 
-/** Runs the full engine on a checked input, in the user's units. Throws EngineError. */
-export function runDesign(input: DesignInput): DesignRun {
+/**
+ * Runs the full engine on a checked input, in the user's units, with the plant's design rules
+ * (the same options the server designs with). Throws EngineError.
+ */
+export function runDesign(input: DesignInput, options: DesignOptions = {}): DesignRun {
   const engine = toEngineInput(input);
-  const design = designTruss(engine);
+  const design = designTruss(engine, options);
   const presented = presentDesign(design, input.units);
   const drawing = drawingFromDesign(presented, {
     overhangs: overhangsOf(engine.profile, design.heelHeight.analysed),

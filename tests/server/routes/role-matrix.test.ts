@@ -68,6 +68,10 @@ const routes: Record<string, Call> = {
   'GET /api/jobs/:id': { name: 'jobs.show', run: (s) => s.get(`/api/jobs/${job.id}`) },
   'GET /api/plant': { name: 'plant', run: (s) => s.get('/api/plant') },
   'GET /api/stock': { name: 'stock.show', run: (s) => s.get('/api/stock') },
+  'GET /api/plant/design-rules': {
+    name: 'designRules.show',
+    run: (s) => s.get('/api/plant/design-rules'),
+  },
   'GET /api/shop/orders/:id/lumber-plan': {
     name: 'lumberPlan.show',
     run: (s) => s.get(`/api/shop/orders/${approved.id}/lumber-plan`),
@@ -114,6 +118,13 @@ const expected: Record<string, Record<Role, number>> = {
   'GET /api/jobs/:id': { admin: 200, sales: 200, engineer: 200, foreman: 200, builder: 200 },
   'GET /api/plant': { admin: 200, sales: 200, engineer: 200, foreman: 200, builder: 200 },
   'GET /api/stock': { admin: 200, sales: 200, engineer: 403, foreman: 200, builder: 403 },
+  'GET /api/plant/design-rules': {
+    admin: 200,
+    sales: 200,
+    engineer: 200,
+    foreman: 200,
+    builder: 403,
+  },
   'GET /api/shop/orders/:id/lumber-plan': {
     admin: 200,
     sales: 200,

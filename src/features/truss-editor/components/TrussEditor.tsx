@@ -22,6 +22,7 @@ import { formToRequest, serverFieldErrors, type FormUnits } from '../form/conver
 import type { TrussFormErrors, TrussFormField, TrussFormValues } from '../form/values';
 import type { FieldContext } from './FormFields';
 import { CompareProfiles } from './CompareProfiles';
+import type { DesignRules } from '../../../../shared/api/plant';
 import { BracingFields } from './BracingFields';
 import { PointLoadFields } from './PointLoadFields';
 import { ProfilePicker } from './ProfilePicker';
@@ -40,6 +41,8 @@ export interface TrussEditorProps {
   lockedNote?: string;
   /** The reviewer's comment when the design was sent back. */
   returnedNote?: string;
+  /** The plant's design rules, so the live design matches the server's. */
+  designRules?: DesignRules;
 }
 
 const LINE_FIELDS: TrussFormField[] = ['mark', 'quantity', 'plies'];
@@ -55,6 +58,7 @@ export function TrussEditor({
   initial,
   lockedNote,
   returnedNote,
+  designRules,
 }: TrussEditorProps) {
   const navigate = useNavigate();
   const [locked, setLocked] = useState<string | undefined>(lockedNote);
@@ -81,7 +85,7 @@ export function TrussEditor({
   const watched = useWatch({ control });
   const values = useMemo(() => ({ ...initial, ...watched }) as TrussFormValues, [initial, watched]);
   const reading = useMemo(() => formToRequest(values, units), [values, units]);
-  const live = useLiveDesign(reading.input);
+  const live = useLiveDesign(reading.input, designRules);
   const server = useServerPreview(reading.input, live.crashed);
   const save = useSaveLine(orderId, lineId);
   // Leaving with unsaved edits asks first; a successful save leaves without asking.

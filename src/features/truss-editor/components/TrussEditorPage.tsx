@@ -71,6 +71,7 @@ export function TrussEditorPage() {
       lineId={lineId}
       orderLabel={label}
       units={units}
+      designRules={plant.data.designRules}
       initial={initial}
       returnedNote={
         stored?.reviewState === 'returned'

@@ -1,5 +1,6 @@
 import { useMemo, useState } from 'react';
 import type { DesignInput } from '../../../../shared/api/design';
+import type { DesignRules } from '../../../../shared/api/plant';
 import { isEngineError } from '../../../../shared/engine/errors';
 import { runDesign, type DesignRun } from '../../../components/truss/run-design';
 
@@ -21,11 +22,13 @@ type Attempt =
   | { kind: 'refused'; message: string }
   | { kind: 'crashed'; message: string };
 
-const attempt = (inputKey: string | null): Attempt => {
+const attempt = (inputKey: string | null, amplify: boolean): Attempt => {
   if (inputKey === null) return { kind: 'invalid' };
   const started = performance.now();
   try {
-    const run = runDesign(JSON.parse(inputKey) as DesignInput);
+    const run = runDesign(JSON.parse(inputKey) as DesignInput, {
+      ...(amplify && { amplifyPanelPointMoment: true }),
+    });
     return { kind: 'ok', run, ms: performance.now() - started };
   } catch (error) {
     if (isEngineError(error)) return { kind: 'refused', message: error.message };
@@ -36,11 +39,12 @@ const attempt = (inputKey: string | null): Attempt => {
 /**
  * Designs the truss in the browser on every change of the checked input, memoised on the input
  * itself (not on object identity), and keeps the last good design to show dimmed while the
- * input is invalid or the engine refuses it. No debounce: a run takes a few milliseconds.
+ * input is invalid or the engine refuses it. `rules` are the plant's design rules. No debounce: a run takes a few milliseconds.
  */
-export function useLiveDesign(input: DesignInput | null): LiveDesign {
+export function useLiveDesign(input: DesignInput | null, rules?: DesignRules): LiveDesign {
   const inputKey = input ? JSON.stringify(input) : null;
-  const result = useMemo(() => attempt(inputKey), [inputKey]);
+  const amplify = rules?.amplifyPanelPointMoment === true;
+  const result = useMemo(() => attempt(inputKey, amplify), [inputKey, amplify]);
   const [lastGood, setLastGood] = useState<DesignRun | null>(null);
   // Remember the newest good run (React's "adjust state while rendering" pattern: no effect).
   if (result.kind === 'ok' && lastGood !== result.run) setLastGood(result.run);
