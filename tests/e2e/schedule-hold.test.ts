@@ -96,10 +96,10 @@ describe('hold and release from the schedule board', () => {
     await held.getByRole('button', { name: `Release order ${order.number}` }).click();
     await Order.update({ promisedOn: addCalendarDays(today, 8) }, { where: { id: order.id } });
     await page.getByLabel('Reason').fill('Site drained');
-    await page.getByRole('button', { name: 'Release order' }).click();
+    await page.getByRole('button', { name: 'Release order', exact: true }).click();
     await page.getByText('Someone changed this order meanwhile').waitFor();
     expect((await Order.findByPk(order.id))!.onHold).toBe(true);
-    await page.getByRole('button', { name: 'Release order' }).click();
+    await page.getByRole('button', { name: 'Release order', exact: true }).click();
     await page.getByText(`Order ${order.number} is released to production.`).waitFor();
     await page.getByTestId(`block-${order.id}-${today}`).waitFor();
     expect((await Order.findByPk(order.id))!.onHold).toBe(false);

@@ -43,7 +43,8 @@ export function HeldOrders({
       {releasing ? (
         <HoldReleaseDialog
           mode="release"
-          order={releasing}
+          // The list as now fetched: after a 409 the next try carries the order's current version.
+          order={orders.find((o) => o.id === releasing.id) ?? releasing}
           open
           onClose={() => setReleasing(null)}
           onDone={onDone}
