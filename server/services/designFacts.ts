@@ -82,14 +82,17 @@ export function loadRows(input: DesignInput): [string, string][] {
   rows.push(['Wind', windParts.length ? windParts.join('; ') : 'None']);
   const kinds = { roofLive: 'Lr', snow: 'S', floor: 'L' } as const;
   const force = input.units === 'imperial' ? 'lb' : 'kN';
+  // One load a line: where (from the left heel, which chord), then its dead and live parts.
   const points = (input.pointLoads ?? []).map(
     (p) =>
-      `${p.label ? `${p.label}: ` : ''}D ${num(p.dead)} + ${kinds[p.kind]} ${num(p.live)} ${force} ` +
-      `on the ${p.chord} chord at ${inputLength(input, p.x)} from the left heel`,
+      `${p.label ? `${p.label} at ` : 'At '}${inputLength(input, p.x)}, ${p.chord} chord: ` +
+      `D ${num(p.dead)} + ${kinds[p.kind]} ${num(p.live)} ${force}`,
   );
   rows.push([
     'Concentrated loads',
-    points.length ? points.join('; ') : 'None (uniform area loads only)',
+    points.length
+      ? `${points.join('\n')}\n(positions from the left heel)`
+      : 'None (uniform area loads only)',
   ]);
   return rows;
 }

@@ -1,7 +1,7 @@
 import type { DeliveryTicket } from '../../../shared/api/shopPaper';
 import { paragraph, textAt } from '../quotePdf/text';
 import { COLORS, type Doc } from '../quotePdf/theme';
-import { pageFooters, shopPdf } from '../shopPaper/pdf';
+import { pageFooters, shopPage, shopPdf } from '../shopPaper/pdf';
 import { cautionsBox, pdfTable } from '../shopPaper/pdfTable';
 
 const M = 44;
@@ -40,12 +40,7 @@ export function renderDeliveryTicketPdf(t: DeliveryTicket): Promise<Buffer> {
     title: `Delivery ticket ${t.order.number}`,
     author: t.order.plant,
   });
-  const w = doc.page.width - 2 * M;
-  const bottom = doc.page.height - M - 10;
-  const newPage = () => {
-    doc.addPage();
-    return M;
-  };
+  const { w, bottom, newPage } = shopPage(doc, M, 10);
   textAt(doc, 'Delivery ticket', M, M, { font: 'bold', size: 18 });
   textAt(doc, `Order ${t.order.number}`, M, M + 3, {
     font: 'bold',

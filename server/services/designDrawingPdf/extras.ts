@@ -18,12 +18,21 @@ const tick = (doc: Doc, x: number, y: number) =>
     .stroke();
 
 /** A horizontal dimension at page height `y` between page xs, text centred above or below. */
-function horizontal(doc: Doc, x0: number, x1: number, y: number, text: string, below: boolean) {
+function horizontal(
+  doc: Doc,
+  x0: number,
+  x1: number,
+  y: number,
+  text: string,
+  within: [number, number],
+) {
   doc.moveTo(x0, y).lineTo(x1, y).stroke();
   tick(doc, x0, y);
   tick(doc, x1, y);
   const tw = doc.widthOfString(text);
-  doc.text(text, (x0 + x1) / 2 - tw / 2, y + (below ? 1.5 : -7.5), { lineBreak: false });
+  // Centred under the dimension, but kept inside the drawing's frame (a short end overhang).
+  const tx = Math.min(Math.max((x0 + x1) / 2 - tw / 2, within[0]), within[1] - tw);
+  doc.text(text, tx, y + 1.5, { lineBreak: false });
 }
 
 /** A vertical dimension at page x between page ys, its text turned to read up beside it. */
@@ -60,6 +69,8 @@ export function drawExtras(
     overall: number;
     overallText: string;
     bearings: { x: number; label: string }[];
+    /** Page xs of the drawing's frame: no text passes them. */
+    frame: [number, number];
   },
 ) {
   const { px, py } = map;
@@ -77,7 +88,7 @@ export function drawExtras(
       .moveTo(tipX, py(oh.tip.y) + 3)
       .lineTo(tipX, chainY)
       .stroke();
-    horizontal(doc, x0, x1, chainY, `${oh.text} overhang`, true);
+    horizontal(doc, x0, x1, chainY, `${oh.text} overhang`, o.frame);
   }
   const xs = g.outlines.flatMap((ol) => ol.points.map((p) => p[0]));
   const left = px(Math.min(...xs)) - 10;

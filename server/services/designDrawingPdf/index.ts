@@ -3,130 +3,122 @@ import { paragraph, paragraphHeight, textAt } from '../quotePdf/text';
 import { COLORS, type Doc } from '../quotePdf/theme';
 import { drawGeometry } from '../shopDrawingPdf/drawing';
 import { pageFooters, shopPdf } from '../shopPaper/pdf';
-import { pdfTable } from '../shopPaper/pdfTable';
+import { pdfTable, type PdfColumn } from '../shopPaper/pdfTable';
+import {
+  BODY,
+  bulletsBlock,
+  drawRows,
+  drawStack,
+  heading,
+  HEADING_H,
+  rowsBlock,
+  rowsHeight,
+  stackHeight,
+  tableHeight,
+  type Block,
+  type Column,
+} from './blocks';
 import { drawExtras } from './extras';
 import type { DesignDrawingSheet, Rows } from './sheet';
 
 const M = 24;
-const RIGHT_W = 236;
+const RIGHT_W = 296;
 const GAP = 12;
-const BODY = 6.5;
+const HEADER_H = 40;
+const APPROVAL_H = 30;
+/** The drawing's height on the sheet: as tall as the facts leave room for, within these. */
+const DRAWING_H = { min: 120, max: 210 };
 
-/** A column that flows to the next page (same x) when it runs out of room. */
-interface Column {
-  x: number;
-  w: number;
-  y: number;
+/** A table under a heading, as a block. */
+function tableBlock(title: string, columns: PdfColumn[], rows: string[][]): Block {
+  return {
+    height: () => HEADING_H + tableHeight(rows.length),
+    draw: (doc, c) => {
+      heading(doc, c, title);
+      c.y = pdfTable(doc, c.x, c.y, columns, rows, c.bottom, () => newPage(doc), BODY);
+    },
+  };
 }
 
-function room(doc: Doc, c: Column, need: number) {
-  const bottom = doc.page.height - M;
-  if (c.y + need > bottom) {
-    doc.addPage();
-    c.y = M;
-  }
-}
-
-function heading(doc: Doc, c: Column, text: string) {
-  room(doc, c, 22);
-  c.y += 4;
-  textAt(doc, text.toUpperCase(), c.x, c.y, { font: 'bold', size: 7, color: COLORS.accent });
-  c.y += 10;
-}
-
-/** Label/value rows: the label in a fixed left column, the value wrapped beside it. */
-function rows(doc: Doc, c: Column, list: Rows, labelW = 78) {
-  for (const [label, value] of list) {
-    const h = paragraphHeight(doc, value, c.w - labelW, { size: BODY });
-    room(doc, c, h + 2);
-    textAt(doc, label, c.x, c.y, { size: BODY, color: COLORS.muted, width: labelW - 4 });
-    c.y = paragraph(doc, value, c.x + labelW, c.y, c.w - labelW, {
-      size: BODY,
-      color: COLORS.text,
-    });
-    c.y += 1.5;
-  }
-}
-
-function bullets(doc: Doc, c: Column, list: string[], color: string = COLORS.text) {
-  for (const t of list) {
-    const h = paragraphHeight(doc, t, c.w - 8, { size: BODY });
-    room(doc, c, h + 2);
-    textAt(doc, '•', c.x, c.y, { size: BODY });
-    c.y = paragraph(doc, t, c.x + 8, c.y, c.w - 8, { size: BODY, color }) + 1.5;
-  }
+function newPage(doc: Doc) {
+  doc.addPage();
+  return M;
 }
 
 /** Title block: the plant and its contacts, the order, the line and its review status. */
-function titleBlock(doc: Doc, s: DesignDrawingSheet, c: Column) {
+function titleBlock(s: DesignDrawingSheet): Block {
   const p = s.plant;
-  textAt(doc, p.name, c.x, c.y, { font: 'bold', size: 11, width: c.w });
-  c.y += 14;
   const contact = [p.address, [p.phone, p.email].filter(Boolean).join(' · ')].filter(
     (v): v is string => Boolean(v),
   );
-  for (const line of contact) c.y = paragraph(doc, line, c.x, c.y, c.w, { size: BODY }) + 1;
-  c.y += 3;
-  rows(doc, c, [
+  const rows: Rows = [
     ['Order', s.order.number],
-    ['Job', `${s.order.job}, ${s.order.jobAddress}`],
-    ['Builder', s.order.builder],
     ['Printed', formatDate(s.printedAt)],
+    ['Builder', s.order.builder],
     ['Engine', `Spanwise engine ${s.engineVersion}`],
-  ]);
-  const h = paragraphHeight(doc, s.review.status, c.w - 12, { size: 7, font: 'medium' }) + 8;
-  doc.rect(c.x, c.y + 2, c.w, h).fill(s.review.approved ? '#e8f3ec' : COLORS.noteBg);
-  paragraph(doc, s.review.status, c.x + 6, c.y + 6, c.w - 12, {
-    size: 7,
-    font: 'medium',
-    color: COLORS.text,
-  });
-  c.y += h + 4;
+    ['Job', `${s.order.job}, ${s.order.jobAddress}`],
+  ];
+  const contactH = (doc: Doc, w: number) =>
+    contact.reduce((h, line) => h + paragraphHeight(doc, line, w, { size: BODY }) + 1, 0);
+  const statusH = (doc: Doc, w: number) =>
+    paragraphHeight(doc, s.review.status, w - 12, { size: 7, font: 'medium' }) + 8;
+  return {
+    height: (doc, w) => 14 + contactH(doc, w) + 3 + rowsHeight(doc, rows, w) + statusH(doc, w) + 4,
+    draw: (doc, c) => {
+      textAt(doc, p.name, c.x, c.y, { font: 'bold', size: 11, width: c.w });
+      c.y += 14;
+      for (const line of contact) c.y = paragraph(doc, line, c.x, c.y, c.w, { size: BODY }) + 1;
+      c.y += 3;
+      drawRows(doc, c, rows);
+      const h = statusH(doc, c.w);
+      doc.rect(c.x, c.y + 2, c.w, h).fill(s.review.approved ? '#e8f3ec' : COLORS.noteBg);
+      paragraph(doc, s.review.status, c.x + 6, c.y + 6, c.w - 12, {
+        size: 7,
+        font: 'medium',
+        color: COLORS.text,
+      });
+      c.y += h + 4;
+    },
+  };
 }
 
-/** Signature lines for the reviewer who approves the sheet. */
+/** Signature lines for the reviewer who approves the sheet, at the foot of the column. */
 function approval(doc: Doc, c: Column) {
-  room(doc, c, 28);
-  c.y += 16;
+  const y = Math.max(c.y + 16, c.bottom - APPROVAL_H + 16);
   const half = (c.w - 12) / 2;
   for (const [i, label] of ['Design reviewer (signature)', 'Date'].entries()) {
     const x = c.x + i * (half + 12);
     doc
-      .moveTo(x, c.y)
-      .lineTo(x + half, c.y)
+      .moveTo(x, y)
+      .lineTo(x + half, y)
       .lineWidth(0.5)
       .strokeColor(COLORS.text)
       .stroke();
-    textAt(doc, label, x, c.y + 2, { size: 6, color: COLORS.muted });
+    textAt(doc, label, x, y + 2, { size: 6, color: COLORS.muted });
   }
-  c.y += 12;
 }
 
-/** One truss design drawing (US Letter landscape): drawing and tables left, facts right. */
-function sheet(doc: Doc, s: DesignDrawingSheet) {
-  const pageW = doc.page.width;
-  const leftW = pageW - 2 * M - RIGHT_W - GAP;
-  const bottom = doc.page.height - M;
-
-  // Heading over the drawing: mark, description and count.
+/** Mark, description and count over the drawing. */
+function header(doc: Doc, s: DesignDrawingSheet, w: number) {
   textAt(doc, 'TRUSS DESIGN DRAWING', M, M, { font: 'medium', size: 7, color: COLORS.accent });
   textAt(doc, s.title.mark, M, M + 9, { font: 'bold', size: 18 });
   doc.font('bold').fontSize(18);
   const mw = doc.widthOfString(s.title.mark) + 10;
-  textAt(doc, s.title.description, M + mw, M + 12, {
-    font: 'medium',
-    size: 9,
-    width: leftW - mw,
-  });
+  textAt(doc, s.title.description, M + mw, M + 12, { font: 'medium', size: 9, width: w - mw });
   textAt(
     doc,
     `${s.title.quantity} · dimensions to panel points along the chords (centre lines), feet-inches-sixteenths; plates at their joints`,
     M + mw,
     M + 24,
-    { size: 7, color: COLORS.muted, width: leftW - mw },
+    { size: 7, color: COLORS.muted, width: w - mw },
   );
+}
 
-  const box = { x: M, y: M + 40, w: leftW, h: 176 };
+function drawing(
+  doc: Doc,
+  s: DesignDrawingSheet,
+  box: { x: number; y: number; w: number; h: number },
+) {
   doc.rect(box.x, box.y, box.w, box.h).lineWidth(0.5).strokeColor(COLORS.rule).stroke();
   const map = drawGeometry(doc, s.geometry, {
     x: box.x + 8,
@@ -144,105 +136,140 @@ function sheet(doc: Doc, s: DesignDrawingSheet) {
       x: s.geometry.jointLabels.find((j) => j.text === r[0])?.at[0] ?? 0,
       label: `${r[0]}: ${r[1]} brg`,
     })),
+    frame: [box.x + 3, box.x + box.w - 3],
   });
+}
 
-  // Left, under the drawing: members (lumber per member), then joints (location and plates).
-  const first = doc.bufferedPageRange().start + doc.bufferedPageRange().count - 1;
-  const newPage = () => {
-    doc.addPage();
-    return M;
-  };
-  let y = box.y + box.h + 8;
-  y = pdfTable(
-    doc,
-    M,
-    y,
-    [
-      { title: 'Member', width: 38 },
-      { title: 'Piece', width: 32 },
-      { title: 'Lumber (size, species, grade)', width: leftW - 38 - 32 - 62 - 58 - 58 - 30 },
-      { title: 'Length', width: 62, align: 'right' },
-      { title: 'Max compr.', width: 58, align: 'right' },
-      { title: 'Max tension', width: 58, align: 'right' },
-      { title: 'CSI', width: 30, align: 'right' },
-    ],
-    s.members,
-    bottom,
-    newPage,
-    BODY,
-  );
-  y = pdfTable(
-    doc,
-    M,
-    y + 2,
-    [
-      { title: 'Joint', width: 30 },
-      { title: 'x from left', width: 46, align: 'right' },
-      { title: 'y above brg', width: 46, align: 'right' },
-      { title: 'Connector', width: 112 },
-      { title: 'Plate size', width: 58 },
-      { title: 'Plate position', width: leftW - 30 - 46 - 46 - 112 - 58 - 74 },
-      // Teeth on a member, or the steel in tension, shear or both combined; and its ratio.
-      { title: 'Governs', width: 74 },
-    ],
-    s.joints,
-    bottom,
-    newPage,
-    BODY,
-  );
+function memberColumns(w: number): PdfColumn[] {
+  return [
+    { title: 'Member', width: 38 },
+    { title: 'Piece', width: 32 },
+    { title: 'Lumber (size, species, grade)', width: w - 38 - 32 - 62 - 58 - 58 - 30 },
+    { title: 'Length', width: 62, align: 'right' },
+    { title: 'Max compr.', width: 58, align: 'right' },
+    { title: 'Max tension', width: 58, align: 'right' },
+    { title: 'CSI', width: 30, align: 'right' },
+  ];
+}
 
-  // Left again, under the tables: adjustments, then the cautions at the foot of the sheet.
-  const a: Column = { x: M, w: leftW, y };
-  heading(doc, a, 'Adjustments for conditions of use');
-  bullets(doc, a, s.adjustments, COLORS.muted);
-  if (s.warnings.length) {
-    heading(doc, a, 'Warnings');
-    bullets(doc, a, s.warnings);
-  }
-  // The cautions in a shaded band at the foot of the sheet (on the next page when no room).
+function jointColumns(w: number): PdfColumn[] {
+  return [
+    { title: 'Joint', width: 30 },
+    { title: 'x from left', width: 46, align: 'right' },
+    { title: 'y above brg', width: 46, align: 'right' },
+    { title: 'Connector', width: 112 },
+    { title: 'Plate size', width: 58 },
+    { title: 'Plate position', width: w - 30 - 46 - 46 - 112 - 58 - 74 },
+    // Teeth on a member, or the steel in tension, shear or both combined; and its ratio.
+    { title: 'Governs', width: 74 },
+  ];
+}
+
+/**
+ * One truss design drawing on one US Letter landscape sheet. Left: the drawing, members and
+ * joints, then notes; right: title block and the facts; across the foot: the cautions. The facts
+ * that do not fit the right column move under the tables (two columns there), and the drawing
+ * takes the height that is left.
+ */
+function sheet(doc: Doc, s: DesignDrawingSheet) {
+  const pageW = doc.page.width;
+  const fullW = pageW - 2 * M;
+  const leftW = fullW - RIGHT_W - GAP;
+  const bottom = doc.page.height - M;
+
   const cautionText = s.cautions.join('  •  ');
-  const cautionH = paragraphHeight(doc, cautionText, leftW - 16, { size: BODY }) + 22;
-  const cy = Math.max(a.y + 4, bottom - cautionH);
-  const at = cy + cautionH > bottom ? newPage() : cy;
-  doc.rect(M, at, leftW, cautionH).fillAndStroke(COLORS.noteBg, COLORS.noteRule);
-  textAt(doc, 'CAUTIONS', M + 8, at + 6, { font: 'bold', size: 7 });
-  paragraph(doc, cautionText, M + 8, at + 16, leftW - 16, { size: BODY, color: COLORS.text });
+  const cautionH = paragraphHeight(doc, cautionText, fullW - 16, { size: BODY }) + 20;
+  const foot = bottom - cautionH - 6;
 
-  // Right column: title block and every other item of the list.
-  doc.switchToPage(first);
-  const c: Column = { x: pageW - M - RIGHT_W, w: RIGHT_W, y: M };
-  titleBlock(doc, s, c);
-  heading(doc, c, 'Geometry');
-  rows(doc, c, s.criteria);
-  heading(doc, c, 'Design loads (confirm with the building designer)');
-  rows(doc, c, s.loads);
-  heading(doc, c, 'Reactions and bearings');
-  c.y = pdfTable(
-    doc,
-    c.x,
-    c.y,
-    [
-      { title: 'Jt', width: 20 },
-      { title: 'Bearing', width: 38, align: 'right' },
-      { title: 'Min. req.', width: 38, align: 'right' },
-      { title: 'Down', width: 48, align: 'right' },
-      { title: 'Uplift', width: 46, align: 'right' },
-      { title: 'Horiz.', width: 46, align: 'right' },
-    ],
-    s.reactions,
-    bottom,
-    () => {
-      doc.addPage();
-      return M;
-    },
-    BODY,
+  const title = titleBlock(s);
+  const right: Block[] = [
+    rowsBlock('Geometry', s.criteria),
+    rowsBlock('Design loads (confirm with the building designer)', s.loads),
+    tableBlock(
+      'Reactions and bearings',
+      [
+        { title: 'Jt', width: 26 },
+        { title: 'Bearing', width: 50, align: 'right' },
+        { title: 'Min. req.', width: 50, align: 'right' },
+        { title: 'Down', width: 58, align: 'right' },
+        { title: 'Uplift', width: 56, align: 'right' },
+        { title: 'Horiz.', width: 56, align: 'right' },
+      ],
+      s.reactions,
+    ),
+    rowsBlock('Deflection', s.deflection),
+  ];
+  // Each of these goes in the right column while it fits there, else under the tables.
+  const flexible: Block[] = [
+    rowsBlock('Connections', s.connections),
+    bulletsBlock('Web compression and bracing', [s.webCompression, ...s.bracing]),
+    ...(s.warnings.length ? [bulletsBlock('Warnings', s.warnings)] : []),
+    bulletsBlock('Adjustments for conditions of use', s.adjustments, COLORS.muted),
+  ];
+  let rightRoom =
+    foot - M - APPROVAL_H - title.height(doc, RIGHT_W) - stackHeight(doc, right, RIGHT_W);
+  const under: Block[] = [];
+  for (const b of flexible) {
+    const h = b.height(doc, RIGHT_W);
+    if (h <= rightRoom) {
+      right.push(b);
+      rightRoom -= h;
+    } else under.push(b);
+  }
+  // Under the tables: one block takes the width; more share two columns, split where the two
+  // heights come closest.
+  const halfW = (leftW - GAP) / 2;
+  let split = under.length;
+  if (under.length > 1) {
+    let best = Infinity;
+    for (let i = 1; i < under.length; i++) {
+      const h = Math.max(
+        stackHeight(doc, under.slice(0, i), halfW),
+        stackHeight(doc, under.slice(i), halfW),
+      );
+      if (h < best) [best, split] = [h, i];
+    }
+  }
+  const bandH =
+    split < under.length
+      ? Math.max(
+          stackHeight(doc, under.slice(0, split), halfW),
+          stackHeight(doc, under.slice(split), halfW),
+        )
+      : stackHeight(doc, under, leftW);
+  const tablesH = tableHeight(s.members.length) + 2 + tableHeight(s.joints.length);
+  const top = M + HEADER_H;
+  // No taller than the truss drawn across the full width needs.
+  const b = s.geometry.bounds;
+  const natural = ((b.maxY - b.minY) / (b.maxX - b.minX || 1)) * (leftW - 16) + 12;
+  const drawingH = Math.min(
+    DRAWING_H.max,
+    natural,
+    Math.max(DRAWING_H.min, foot - top - 8 - tablesH - bandH - 2),
   );
-  heading(doc, c, 'Deflection');
-  rows(doc, c, s.deflection);
-  heading(doc, c, 'Web compression and bracing');
-  bullets(doc, c, [s.webCompression, ...s.bracing]);
-  heading(doc, c, 'Connections');
-  rows(doc, c, s.connections);
+
+  const first = doc.bufferedPageRange().start + doc.bufferedPageRange().count - 1;
+  header(doc, s, leftW);
+  drawing(doc, s, { x: M, y: top, w: leftW, h: drawingH });
+  let y = top + drawingH + 8;
+  y = pdfTable(doc, M, y, memberColumns(leftW), s.members, foot, () => newPage(doc), BODY);
+  y = pdfTable(doc, M, y + 2, jointColumns(leftW), s.joints, foot, () => newPage(doc), BODY);
+  const bandPage = doc.bufferedPageRange().start + doc.bufferedPageRange().count - 1;
+  if (split < under.length) {
+    drawStack(doc, { x: M, w: halfW, y, bottom: foot }, under.slice(0, split));
+    doc.switchToPage(bandPage);
+    drawStack(doc, { x: M + halfW + GAP, w: halfW, y, bottom: foot }, under.slice(split));
+  } else drawStack(doc, { x: M, w: leftW, y, bottom: foot }, under);
+
+  // The cautions in a shaded band across the foot of the sheet.
+  doc.switchToPage(first);
+  doc.rect(M, foot + 6, fullW, cautionH).fillAndStroke(COLORS.noteBg, COLORS.noteRule);
+  textAt(doc, 'CAUTIONS', M + 8, foot + 11, { font: 'bold', size: 7 });
+  paragraph(doc, cautionText, M + 8, foot + 20, fullW - 16, { size: BODY, color: COLORS.text });
+
+  const c: Column = { x: pageW - M - RIGHT_W, w: RIGHT_W, y: M, bottom: foot - APPROVAL_H };
+  drawStack(doc, c, [title, ...right]);
+  c.bottom = foot;
   approval(doc, c);
 }
 

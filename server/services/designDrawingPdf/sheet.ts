@@ -178,6 +178,7 @@ export function designDrawingSheet(ctx: DesignDrawingContext): DesignDrawingShee
   ];
 
   const defl = d.deflection;
+  const roller = d.additional?.rollerMovement;
   const dText = (c: NonNullable<typeof defl.live>) =>
     `L/${c.ratio ?? '∞'} (limit L/${c.limit}), max ${deflText(d, c.max)} at ${c.joint} (${c.load})`;
   const deflection: Rows = [
@@ -185,8 +186,8 @@ export function designDrawingSheet(ctx: DesignDrawingContext): DesignDrawingShee
     ['Total-load vertical', dText(defl.total)],
     [
       'Horizontal',
-      d.additional?.rollerMovement
-        ? `${d.additional.rollerMovement.movement} ${d.units.length === 'mm' ? 'mm' : 'in.'} at roller ${d.additional.rollerMovement.joint} (${d.additional.rollerMovement.load})`
+      roller
+        ? `${deflText(d, Math.abs(roller.movement))} ${roller.movement >= 0 ? 'outward' : 'inward'} at roller ${roller.joint} (${roller.load})`
         : `Bearing ${d.reactions[d.reactions.length - 1]?.joint ?? ''} slides (roller); horizontal movement is not calculated for this design`,
     ],
   ];
@@ -201,11 +202,16 @@ export function designDrawingSheet(ctx: DesignDrawingContext): DesignDrawingShee
     [
       'Ply-to-ply',
       d.plyConnections?.length
-        ? `${line.plies} plies: ${d.plyConnections.map((c) => c.text).join('; ')}`
+        ? `${line.plies} plies, fastened chord by chord:`
         : line.plies > 1
           ? `${line.plies} plies, each plated on both faces, fastened together per the reviewer's ply-to-ply schedule`
           : 'Single ply: none',
     ],
+    // The engine's words lead with "Top chord, 3-ply: "; the row's label says the chord.
+    ...(d.plyConnections ?? []).map((c): [string, string] => [
+      `  ${c.chord === 'top' ? 'Top' : 'Bottom'} chord`,
+      c.text.replace(/^(Top|Bottom) chord, \d+-ply: /, ''),
+    ]),
   ];
 
   const reviewStatus =

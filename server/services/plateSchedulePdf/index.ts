@@ -1,7 +1,7 @@
 import type { PlateSchedule } from '../../../shared/api/shopPaper';
 import { paragraph, textAt } from '../quotePdf/text';
 import { COLORS } from '../quotePdf/theme';
-import { pageFooters, shopPdf } from '../shopPaper/pdf';
+import { pageFooters, shopPage, shopPdf } from '../shopPaper/pdf';
 import { cautionsBox, pdfTable } from '../shopPaper/pdfTable';
 
 const M = 40;
@@ -19,12 +19,7 @@ export function renderPlateSchedulePdf(s: PlateSchedule): Promise<Buffer> {
     title: `Plate schedule ${s.order.number}`,
     author: s.order.plant,
   });
-  const w = doc.page.width - 2 * M;
-  const bottom = doc.page.height - M - 10;
-  const newPage = () => {
-    doc.addPage();
-    return M;
-  };
+  const { w, bottom, newPage } = shopPage(doc, M, 10);
 
   textAt(doc, 'Plate schedule', M, M, { font: 'bold', size: 16 });
   textAt(doc, `Order ${s.order.number}`, M, M + 2, {

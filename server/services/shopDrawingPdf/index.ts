@@ -1,7 +1,7 @@
 import type { ShopDrawing } from '../../../shared/api/shopPaper';
 import { paragraph, paragraphHeight, textAt } from '../quotePdf/text';
 import { COLORS, type Doc } from '../quotePdf/theme';
-import { pageFooters, shopPdf } from '../shopPaper/pdf';
+import { pageFooters, shopPage, shopPdf } from '../shopPaper/pdf';
 import { cautionsBox, pdfTable } from '../shopPaper/pdfTable';
 import { drawGeometry } from './drawing';
 
@@ -9,12 +9,7 @@ const M = 32;
 
 /** One sheet: title block, the truss drawing, piece and plate lists, bracing and cautions. */
 function sheet(doc: Doc, s: ShopDrawing) {
-  const w = doc.page.width - 2 * M;
-  const bottom = doc.page.height - M - 8;
-  const newPage = () => {
-    doc.addPage();
-    return M;
-  };
+  const { w, bottom, newPage } = shopPage(doc, M, 8);
   textAt(doc, s.mark, M, M - 4, { font: 'bold', size: 22 });
   doc.font('bold').fontSize(22);
   const mw = doc.widthOfString(s.mark) + 12;

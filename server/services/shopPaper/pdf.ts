@@ -1,5 +1,4 @@
-import PDFDocument from 'pdfkit';
-import { FONTS } from '../quotePdf/fonts';
+import { openDocument, pageFooters as footers } from '../quotePdf/document';
 import type { Doc } from '../quotePdf/theme';
 
 /** Page size and margins of one shop document, in points (72 per inch). */
@@ -12,42 +11,34 @@ export interface ShopPdfOptions {
 }
 
 /**
- * A pdfkit document with the app's own fonts (Inter from @fontsource, as the quote) and a
- * promise of its bytes once `doc.end()` is called.
+ * A pdfkit document with the app's own fonts (Inter from @fontsource, as the quote), one margin
+ * all round, and a promise of its bytes once `doc.end()` is called.
  */
 export function shopPdf(o: ShopPdfOptions): { doc: Doc; done: Promise<Buffer> } {
-  const doc = new PDFDocument({
+  return openDocument({
     size: o.size,
-    layout: o.layout ?? 'portrait',
+    layout: o.layout,
     margin: o.margin,
-    bufferPages: true,
-    autoFirstPage: true,
-    font: FONTS.regular,
     info: { Title: o.title, Author: o.author },
   });
-  for (const [name, path] of Object.entries(FONTS)) doc.registerFont(name, path);
-  const chunks: Buffer[] = [];
-  doc.on('data', (c: Buffer) => chunks.push(c));
-  const done = new Promise<Buffer>((resolve, reject) => {
-    doc.on('end', () => resolve(Buffer.concat(chunks)));
-    doc.on('error', reject);
-  });
-  return { doc, done };
 }
 
 /** "Page n of N" and a left text on every page, inside the bottom margin. */
-export function pageFooters(doc: Doc, left: string, margin: number, color = '#8a929c') {
-  const range = doc.bufferedPageRange();
-  for (let i = 0; i < range.count; i++) {
-    doc.switchToPage(range.start + i);
-    const bottom = doc.page.margins.bottom;
-    doc.page.margins.bottom = 0; // writing inside the margin must not start a page
-    const y = doc.page.height - margin + 14;
-    const w = doc.page.width - 2 * margin;
-    doc.font('regular').fontSize(7.5).fillColor(color);
-    doc.text(left, margin, y, { lineBreak: false, width: w * 0.7 });
-    const right = `Page ${i + 1} of ${range.count}`;
-    doc.text(right, margin + w - doc.widthOfString(right), y, { lineBreak: false });
-    doc.page.margins.bottom = bottom;
-  }
+export function pageFooters(doc: Doc, left: string, margin: number) {
+  footers(doc, left, { side: margin, fromFoot: margin - 14, rule: false });
+}
+
+/**
+ * The writing area of a shop document with margin `m`: its width, the lowest y a row may reach
+ * (`footRoom` above the margin) and a new page that returns the y to continue at.
+ */
+export function shopPage(doc: Doc, m: number, footRoom: number) {
+  return {
+    w: doc.page.width - 2 * m,
+    bottom: doc.page.height - m - footRoom,
+    newPage: () => {
+      doc.addPage();
+      return m;
+    },
+  };
 }

@@ -152,52 +152,62 @@ const shopRow = (t: OrderTask) => ({
   ),
 });
 
-/** The lists of one role's home page, in the order the work usually comes. */
+/** One list of the home page: its words and how it shows a row. */
+interface Section<T> {
+  title: string;
+  empty: string;
+  more?: { to: string; label: string };
+  row: (item: T) => { key: string | number; to: string; body: ReactNode };
+}
+
+type ItemOf<K extends keyof Tasks> = NonNullable<Tasks[K]>['items'][number];
+
+/** Every list a role may get, in the order the work usually comes. */
+const SECTIONS: { [K in keyof Tasks]-?: Section<ItemOf<K>> } = {
+  sentBack: {
+    title: 'Sent back by the reviewer',
+    empty: 'No designs have been sent back',
+    row: lineRows.sentBack,
+  },
+  outOfDate: {
+    title: 'Designed with old loads',
+    empty: 'Every line has its job’s current loads',
+    row: lineRows.outOfDate,
+  },
+  waitingReview: {
+    title: 'Designs waiting for review',
+    empty: 'Nothing is waiting for review',
+    more: { to: '/reviews', label: 'Open the review queue' },
+    row: lineRows.waitingReview,
+  },
+  newPlans: {
+    title: `New plans (last ${NEW_PLAN_DAYS} days)`,
+    empty: 'No new plans',
+    row: planRow,
+  },
+  releasedToShop: {
+    title: 'Released to the shop',
+    empty: 'No orders are released yet',
+    more: { to: '/shop', label: 'Ready for the shop' },
+    row: shopRow,
+  },
+};
+
+/** One section when the role has that list. */
+function ListOf<K extends keyof Tasks>({ name, tasks }: { name: K; tasks: Tasks }) {
+  const list = tasks[name];
+  if (!list) return null;
+  const section = SECTIONS[name] as Section<ItemOf<K>>;
+  return <TaskList {...section} list={list as NonNullable<Tasks[K]>} />;
+}
+
+/** The lists of one role's home page. */
 function Lists({ tasks }: { tasks: Tasks }) {
   return (
     <div className="grid gap-6 lg:grid-cols-2">
-      {tasks.sentBack ? (
-        <TaskList
-          title="Sent back by the reviewer"
-          list={tasks.sentBack}
-          empty="No designs have been sent back"
-          row={lineRows.sentBack}
-        />
-      ) : null}
-      {tasks.outOfDate ? (
-        <TaskList
-          title="Designed with old loads"
-          list={tasks.outOfDate}
-          empty="Every line has its job’s current loads"
-          row={lineRows.outOfDate}
-        />
-      ) : null}
-      {tasks.waitingReview ? (
-        <TaskList
-          title="Designs waiting for review"
-          list={tasks.waitingReview}
-          empty="Nothing is waiting for review"
-          more={{ to: '/reviews', label: 'Open the review queue' }}
-          row={lineRows.waitingReview}
-        />
-      ) : null}
-      {tasks.newPlans ? (
-        <TaskList
-          title={`New plans (last ${NEW_PLAN_DAYS} days)`}
-          list={tasks.newPlans}
-          empty="No new plans"
-          row={planRow}
-        />
-      ) : null}
-      {tasks.releasedToShop ? (
-        <TaskList
-          title="Released to the shop"
-          list={tasks.releasedToShop}
-          empty="No orders are released yet"
-          more={{ to: '/shop', label: 'Ready for the shop' }}
-          row={shopRow}
-        />
-      ) : null}
+      {(Object.keys(SECTIONS) as (keyof Tasks)[]).map((name) => (
+        <ListOf key={name} name={name} tasks={tasks} />
+      ))}
     </div>
   );
 }

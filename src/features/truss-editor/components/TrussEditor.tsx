@@ -211,7 +211,7 @@ export function TrussEditor({
         onInputCapture={() => (startedAt.current = performance.now())}
         className="flex flex-col gap-4"
       >
-        <Card title="Truss type">
+        <Card title="Truss type" className="print:hidden">
           <ProfilePicker value={values.profile} disabled={readOnly} onChange={onProfile} />
         </Card>
         <div className="grid items-start gap-4 lg:grid-cols-[minmax(20rem,26rem)_minmax(0,1fr)]">
@@ -236,7 +236,7 @@ export function TrussEditor({
                 </Alert>
               ) : null}
               {readOnly ? null : (
-                <div className="sticky bottom-0 -mx-4 -mb-4 border-t border-sand-200 bg-white px-4 py-3">
+                <div className="sticky bottom-0 -mx-4 -mb-4 border-t border-sand-200 bg-white px-4 py-3 print:hidden">
                   <Button type="submit" busy={save.isPending} className="w-full">
                     Save truss
                   </Button>
@@ -263,12 +263,15 @@ export function TrussEditor({
                 )}
               </div>
             </Card>
-            <CompareProfiles
-              input={reading.input}
-              current={values.profile}
-              disabled={readOnly}
-              onPick={onProfile}
-            />
+            {/* A chooser, not part of the design: left off paper. */}
+            <div className="print:hidden">
+              <CompareProfiles
+                input={reading.input}
+                current={values.profile}
+                disabled={readOnly}
+                onPick={onProfile}
+              />
+            </div>
             {presented ? (
               <div>
                 {live.stale && !fallback ? (
