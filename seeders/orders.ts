@@ -74,6 +74,31 @@ const ORDERS: {
       },
     ],
   },
+  {
+    // Every design approved: ready for the shop, with its cut list and lumber plan seeded.
+    job: 'Harlow Bend workshop',
+    number: '2026-0004',
+    lines: [
+      {
+        mark: 'T1',
+        quantity: 16,
+        design: { ...base, profile: 'fink', span: 336, pitch: 6, overhang: 18 },
+        review: 'approved',
+      },
+      {
+        mark: 'T2',
+        quantity: 8,
+        design: { ...base, profile: 'howe', span: 288, pitch: 6, overhang: 18 },
+        review: 'approved',
+      },
+      {
+        mark: 'T3',
+        quantity: 4,
+        design: { ...base, profile: 'kingPost', span: 120, pitch: 6, overhang: 12 },
+        review: 'approved',
+      },
+    ],
+  },
 ];
 
 export async function seedOrders(plant: Plant) {
