@@ -138,14 +138,7 @@ export function LumberPlanPage({ orderId }: { orderId: number }) {
       <QueryState query={status} what="the lumber plan">
         {(s) => (
           <div className="flex flex-col gap-4">
-            <PageHeader
-              title={`Lumber plan — order ${s.orderNumber}`}
-              description={
-                s.madeAt
-                  ? `Made ${new Date(s.madeAt).toLocaleString('en-US', { dateStyle: 'medium', timeStyle: 'short' })}${s.outOfDate.length ? ' — out of date' : ''}.`
-                  : undefined
-              }
-            />
+            <PageHeader title={`Lumber plan — order ${s.orderNumber}`} />
             <PlanRun status={s} />
             {s.plan ? <Plan plan={s.plan} orderId={orderId} /> : null}
           </div>

@@ -1,3 +1,4 @@
+import { Link } from 'react-router';
 import type { CutListGroupView, CutListView } from '../../../../shared/api/shop';
 import type { CutListStatus } from '../../../../shared/api/shopPlan';
 import { StoredPlanBar } from '../../../components/shop-plan/StoredPlanBar';
@@ -111,7 +112,9 @@ export function CutListPage({ orderId }: { orderId: number }) {
         description={order ? `${order.job.name} · ${order.customer.name}` : undefined}
         actions={
           <div className="flex items-center gap-2 print:hidden">
-            <TextLink to={`/shop/orders/${orderId}/lumber-plan`}>Lumber plan</TextLink>
+            <Link className={linkClass} to={`/shop/orders/${orderId}/lumber-plan`}>
+              Lumber plan
+            </Link>
             {stored ? (
               <>
                 <a className={linkClass} href={cutListUrl(orderId, 'csv')} download>

@@ -113,7 +113,7 @@ describe('progress inside one solve', () => {
       (p) => p.stage === 'planning' && p.solverStage !== 'starting' && p.solverStage !== 'done',
     );
     expect(inSolve.length).toBeLessThanOrEqual(Math.ceil(elapsed / 250) + 1);
-    const ends = stored.filter((p) => p.solverStage === 'done');
+    const ends = stored.filter((p) => p.stage === 'planning' && p.solverStage === 'done');
     expect(ends.length).toBe(
       (await ShopPlan.findOne({ where: { orderId: order.id } }))!.lumberPlan!.sections.length,
     );
