@@ -90,7 +90,12 @@ export async function acceptQuote(
       if (existing.quoteId === quote.id) return { changed: false };
       throw conflict('This order was already accepted on another revision.');
     }
-    if (onBehalf) requireSeenVersion(locked, input.version!);
+    if (onBehalf)
+      requireSeenVersion(
+        locked,
+        input.version!,
+        'The page now shows it as it is: check it and record the acceptance again.',
+      );
     const refusal = await acceptRefusal(locked, quote, t);
     if (refusal) throw conflict(refusal);
     await QuoteAcceptance.create(

@@ -85,8 +85,9 @@ export function OfflinePaymentForm({
     method: errors.method?.message,
     reference: errors.reference?.message,
   };
-  const hasFieldErrors =
-    record.error && isApiError(record.error) && Object.keys(record.error.fields).length > 0;
+  // A message beside a field says it all; any other refusal (409 `stale`) shows above the button.
+  const failure = record.error;
+  const hasFieldErrors = isApiError(failure) && FIELDS.some((f) => failure.fields[f]);
 
   return (
     <form onSubmit={onSubmit} noValidate aria-labelledby="offline-payment-title">

@@ -55,6 +55,13 @@ function RecordAcceptanceDialog({ order, onClose }: { order: OrderDetail; onClos
   const [agree, setAgree] = useState(false);
   const [errors, setErrors] = useState<Record<string, string>>({});
   const revision = number ?? open[0]?.number ?? null;
+  /** Edits a field and drops its message (the rest stay until the next try). */
+  const edit =
+    <T,>(field: string, set: (value: T) => void) =>
+    (value: T) => {
+      set(value);
+      setErrors(({ [field]: _, ...rest }) => rest);
+    };
 
   const submit = (e: FormEvent) => {
     e.preventDefault();
@@ -103,11 +110,15 @@ function RecordAcceptanceDialog({ order, onClose }: { order: OrderDetail; onClos
               id="acc-name"
               value={name}
               invalid={!!errors.name}
-              onChange={(e) => setName(e.target.value)}
+              onChange={(e) => edit('name', setName)(e.target.value)}
             />
           </Field>
           <Field label="How it was received" htmlFor="acc-method" error={errors.method}>
-            <Select id="acc-method" value={method} onChange={(e) => setMethod(e.target.value)}>
+            <Select
+              id="acc-method"
+              value={method}
+              onChange={(e) => edit('method', setMethod)(e.target.value)}
+            >
               {DESK_METHODS.map((m) => (
                 <option key={m} value={m}>
                   {METHOD_LABELS[m].replace(/^(by|on) /, '').replace(/^./, (c) => c.toUpperCase())}
@@ -115,21 +126,23 @@ function RecordAcceptanceDialog({ order, onClose }: { order: OrderDetail; onClos
               ))}
             </Select>
           </Field>
-          <Field label="Revision accepted" htmlFor="acc-revision" error={errors.revision}>
-            <Select
-              id="acc-revision"
-              value={revision ?? ''}
-              disabled={quotes.isPending}
-              invalid={!!errors.revision}
-              onChange={(e) => setNumber(Number(e.target.value))}
-            >
-              {open.map((q) => (
-                <option key={q.number} value={q.number}>
-                  {q.reference} (sent {formatDateTime(q.sentAt!)})
-                </option>
-              ))}
-            </Select>
-          </Field>
+          <div className="sm:col-span-2">
+            <Field label="Revision accepted" htmlFor="acc-revision" error={errors.revision}>
+              <Select
+                id="acc-revision"
+                value={revision ?? ''}
+                disabled={quotes.isPending}
+                invalid={!!errors.revision}
+                onChange={(e) => edit('revision', setNumber)(Number(e.target.value))}
+              >
+                {open.map((q) => (
+                  <option key={q.number} value={q.number}>
+                    {q.reference} (sent {formatDateTime(q.sentAt!)})
+                  </option>
+                ))}
+              </Select>
+            </Field>
+          </div>
         </div>
         <Field label="Note (optional)" htmlFor="acc-note" error={errors.note}>
           <Textarea
@@ -137,7 +150,7 @@ function RecordAcceptanceDialog({ order, onClose }: { order: OrderDetail; onClos
             rows={2}
             value={note}
             placeholder="e.g. Signed copy received by post on Tuesday"
-            onChange={(e) => setNote(e.target.value)}
+            onChange={(e) => edit('note', setNote)(e.target.value)}
           />
         </Field>
         <label className="flex items-start gap-2 text-sm">
@@ -145,7 +158,7 @@ function RecordAcceptanceDialog({ order, onClose }: { order: OrderDetail; onClos
             type="checkbox"
             className="mt-1 h-5 w-5"
             checked={agree}
-            onChange={(e) => setAgree(e.target.checked)}
+            onChange={(e) => edit('agree', setAgree)(e.target.checked)}
           />
           <span>The builder accepted this revision, its terms and its cautions.</span>
         </label>
