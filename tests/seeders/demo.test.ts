@@ -168,6 +168,8 @@ describe('the demo seed on a fresh database', () => {
       'ready',
       'released',
     ]);
+    // Each order in progress says when it comes (the promised date the plan makes).
+    for (const o of home1.inProgress) expect(o.plannedDelivery).toMatch(/^\d{4}-\d{2}-\d{2}$/);
     const b2 = await signedIn(app, 'builder2@spanwise.test', DEMO_PASSWORD);
     const home2 = (await b2.get('/api/portal/home').expect(200)).body;
     expect(home2.depositsDue).toHaveLength(1);

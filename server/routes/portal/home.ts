@@ -7,6 +7,7 @@ import { orderPolicy } from '../../policies/order';
 import { MailMessage, Order, Quote, QuoteAcceptance } from '../../models';
 import { acceptRefusal } from '../../commands/acceptance';
 import { paidCents } from '../../commands/payments';
+import { plannedDelivery } from '../../commands/schedule';
 import { orderIncludes } from '../orders/queries';
 import { handle } from '../load';
 import type { QuoteSnapshot } from '../../services/pricing';
@@ -53,7 +54,7 @@ export function portalHomeRouter() {
           });
           continue;
         }
-        inProgress.push({ ...base, plannedDelivery: null as string | null });
+        inProgress.push({ ...base, plannedDelivery: plannedDelivery(o) });
         if (o.status === 'accepted') {
           const a = await QuoteAcceptance.findOne({ where: { orderId: o.id } });
           const q = a ? await Quote.findByPk(a.quoteId) : null;
