@@ -30,7 +30,7 @@ export const ORDERS: {
       {
         mark: 'T3',
         quantity: 6,
-        design: { ...base, profile: 'scissor', span: 288, pitch: 6, bottomPitch: 3, overhang: 18 },
+        design: { ...base, profile: 'scissor', span: 288, pitch: 6, bottomPitch: 2, overhang: 18 },
       },
     ],
   },

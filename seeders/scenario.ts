@@ -69,7 +69,7 @@ const TRUSS = {
   howe32: { profile: 'howe', span: 384, pitch: 5, overhang: 12 },
   fan28: { profile: 'fan', span: 336, pitch: 7, overhang: 18 },
   doubleFink36: { profile: 'doubleFink', span: 432, pitch: 6, overhang: 24 },
-  scissor24: { profile: 'scissor', span: 288, pitch: 6, bottomPitch: 3, overhang: 18 },
+  scissor24: { profile: 'scissor', span: 288, pitch: 6, bottomPitch: 2, overhang: 18 },
   // King posts stay short: a 14 ft one with an overhang fails its overhang-tip deflection.
   kingPost12: { profile: 'kingPost', span: 144, pitch: 6, overhang: 0 },
   kingPost10: { profile: 'kingPost', span: 120, pitch: 6, overhang: 12 },
