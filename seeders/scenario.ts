@@ -275,11 +275,13 @@ async function designAndQuote(s: Scenario, order: Order, { sales, engineer }: Pe
 async function acceptAndPay(s: Scenario, order: Order, quote: Quote, people: People) {
   const a = s.acceptedBy!;
   const builder = 'builder' in a ? people[a.builder] : null;
+  const current = await fresh(order);
   await acceptQuote(
     builder ?? people.sales,
-    await fresh(order),
+    current,
     quote,
-    builder ? { name: a.name, agree: true } : { ...a, agree: true },
+    // The desk sends the version it looked at, as its dialog does.
+    builder ? { name: a.name, agree: true } : { ...a, agree: true, version: current.version },
     builder ? '198.51.100.24' : null,
   );
   if (s.promisedIn) {
