@@ -22,7 +22,6 @@ import { applyPaymentEvent } from '../server/commands/paymentEvents';
 import { setPromisedDate } from '../server/commands/release';
 import { recordProgress, signOffDelivery } from '../server/commands/progress';
 import type { Payments } from '../server/services/payments';
-import { runShopPlan } from '../server/services/shopPlan/job';
 import type { Stage } from '../shared/api/production';
 import { moveOrder, plantToday } from '../server/commands/schedule';
 
@@ -344,16 +343,6 @@ async function playOrder(plant: Plant, s: Scenario, people: People) {
   return fresh(order);
 }
 
-/**
- * Stored shop plans (cut list and lumber plan) of the orders on the floor now, made here rather
- * than when the app's job queue gets to them. Every scenario order's last approval queued its plan
- * (as in the app), so the planner makes the others in the background once the app starts. One
- * place, so it can be reconciled with any other seeding of plans.
- */
-export async function seedShopPlansForScenario(orders: Order[]) {
-  for (const o of orders) if (o.status === 'in_production') await runShopPlan(o.id);
-}
-
 /** Seeded mail is for the local demo inbox only: with a real relay configured it is not sent. */
 async function keepSeededMailLocal(orderIds: number[]) {
   if (!process.env.SMTP_URL || orderIds.length === 0) return;
@@ -377,7 +366,6 @@ export async function seedScenario(plant: Plant) {
     const order = await playOrder(plant, s, people);
     if (order) made.push(order);
   }
-  await seedShopPlansForScenario(made);
   await keepSeededMailLocal(made.map((o) => o.id));
   return made;
 }
