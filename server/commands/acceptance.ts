@@ -159,7 +159,9 @@ async function acceptanceMail(
     ...base,
     kind: 'acceptance.builder',
     to: await builderAddresses(order, actor, t),
-    subject: `You accepted ${quote.reference} — ${s.job.name}`,
+    subject: onBehalf
+      ? `Your acceptance of ${quote.reference} is recorded — ${s.job.name}`
+      : `You accepted ${quote.reference} — ${s.job.name}`,
   });
   const desk = await deskAddresses(order.plantId, t);
   if (desk)

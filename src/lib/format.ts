@@ -12,10 +12,19 @@ export function formatDateTime(iso: string | null | undefined): string {
   });
 }
 
-/** Formats an ISO timestamp as a short date ("12 Mar 2025"); '—' when null or invalid. */
+/**
+ * Formats an ISO timestamp or a calendar date as a short date ("12 Mar 2025"); '—' when null or
+ * invalid. A calendar date ("2025-03-12", e.g. a delivery day) is that day wherever the reader is.
+ */
 export function formatDate(iso: string | null | undefined): string {
   if (!iso) return '—';
-  const date = new Date(iso);
+  const day = /^\d{4}-\d{2}-\d{2}$/.test(iso);
+  const date = new Date(day ? `${iso}T00:00:00Z` : iso);
   if (Number.isNaN(date.getTime())) return '—';
-  return date.toLocaleDateString('en-GB', { day: 'numeric', month: 'short', year: 'numeric' });
+  return date.toLocaleDateString('en-GB', {
+    day: 'numeric',
+    month: 'short',
+    year: 'numeric',
+    ...(day ? { timeZone: 'UTC' } : {}),
+  });
 }

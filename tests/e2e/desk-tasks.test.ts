@@ -178,6 +178,10 @@ describe('the desk after a day’s use, in a browser', () => {
     await page.waitForSelector('svg[data-testid="truss-drawing"]');
     const editorPaper = await printed(page, 'editor-print');
     expect(editorPaper).not.toContain('Save truss');
+    // On paper the form is a fact list beside the drawing, not a page of empty-looking inputs.
+    expect(editorPaper).toMatch(/Truss T\d+ — design input/);
+    expect(editorPaper).toContain('TCLL');
+    expect(editorPaper).not.toContain('Truss type');
     await page.goto(`${base}/orders/${order.id}`);
     await expect
       .poll(() => page.getByRole('cell', { name: 'T2' }).count(), PATIENT)
@@ -186,6 +190,7 @@ describe('the desk after a day’s use, in a browser', () => {
     expect(orderPaper).toContain(`Order ${order.number}`);
     expect(orderPaper).not.toContain('Add truss');
     expect(orderPaper).not.toContain('← Orders');
+    expect(orderPaper).not.toContain('E-mail about this order');
 
     await page.setViewportSize({ width: 768, height: 1024 });
     await page.waitForTimeout(300);

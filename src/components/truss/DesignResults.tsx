@@ -106,7 +106,7 @@ export function SupportsAndDeflection({ design }: { design: PresentedDesign }) {
   const bearingOf = new Map(design.bearing.map((b) => [b.joint, b]));
   return (
     <div className="grid gap-4 2xl:grid-cols-2">
-      <Card title="Reactions" flush>
+      <Card title="Reactions" flush className="break-inside-avoid">
         <SimpleTable
           caption="Reactions"
           headers={['Support', 'Max down', 'Max up', 'Bearing', 'Ratio', '']}
@@ -130,7 +130,7 @@ export function SupportsAndDeflection({ design }: { design: PresentedDesign }) {
           })}
         </SimpleTable>
       </Card>
-      <Card title="Deflection" flush>
+      <Card title="Deflection" flush className="break-inside-avoid">
         <SimpleTable caption="Deflection" headers={['Load', 'Largest', 'Span / Δ', 'Limit', '']}>
           {design.deflection.live ? (
             <DeflectionRow label="Live" d={design.deflection.live} unit={design.units.length} />
@@ -162,7 +162,7 @@ export function AdditionalChecksCard({ design }: { design: PresentedDesign }) {
     ...(a.overhangTip ? [{ label: 'Overhang tip, total', d: a.overhangTip.total }] : []),
   ];
   return (
-    <Card title="More checks" flush>
+    <Card title="More checks" flush className="break-inside-avoid">
       <SimpleTable caption="More checks" headers={['Check', 'Largest', 'Ratio', 'Limit', '']}>
         {shear ? (
           <tr>
@@ -269,7 +269,7 @@ export function DesignCautions({ cautions }: { cautions: readonly string[] }) {
  */
 export const DesignResults = memo(function DesignResults({ design }: { design: PresentedDesign }) {
   return (
-    <div className="flex flex-col gap-4">
+    <div className="flex flex-col gap-4 print:block print:space-y-3">
       <DesignVerdict design={design} />
       <Card title="Members" flush>
         <MemberTable design={design} />

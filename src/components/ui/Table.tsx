@@ -104,7 +104,7 @@ export function DataTable<T extends RowData>({
   const sortable = new Set(sorting?.columns ?? []);
 
   return (
-    <div className="relative overflow-x-auto">
+    <div className="data-table relative overflow-x-auto">
       <table className="w-full border-collapse text-left text-sm">
         <caption className="sr-only">{caption}</caption>
         <thead className="bg-sand-100 text-xs font-semibold tracking-wide text-sand-700 uppercase">

@@ -30,7 +30,7 @@ function when(m: MailState) {
 export function MailStatus({ orderId }: { orderId: number }) {
   const mail = useOrderMail(orderId);
   return (
-    <Card title="E-mail about this order" flush>
+    <Card title="E-mail about this order" flush className="print:hidden">
       <QueryState query={mail} what="the order's e-mail">
         {({ items }) =>
           items.length === 0 ? (

@@ -1,3 +1,4 @@
+import { formatDate } from '../../../lib/format';
 import { designDrawingPath } from '../../../lib/design-drawing';
 import { useNavigate } from 'react-router';
 import { TERMS, validUntilText } from '../../../../shared/api/terms';
@@ -25,8 +26,7 @@ export function BuilderQuotePage({ orderId, number }: { orderId: number; number:
             <div className="space-y-4">
               {q.acceptance ? (
                 <Alert tone="success">
-                  Accepted by {q.acceptance.name} on{' '}
-                  {new Date(q.acceptance.acceptedAt).toLocaleDateString()}.
+                  Accepted by {q.acceptance.name} on {formatDate(q.acceptance.acceptedAt)}.
                 </Alert>
               ) : q.superseded ? (
                 <Alert tone="warning">This revision is superseded and cannot be accepted.</Alert>

@@ -1,3 +1,4 @@
+import { formatDate } from '../../../lib/format';
 import { Link } from 'react-router';
 import { validUntilText } from '../../../../shared/api/terms';
 import { Badge, Card, EmptyState, PageHeader, QueryState } from '../../../components/ui';
@@ -79,7 +80,7 @@ export function PortalHome() {
                         <Badge tone="info">{STATUS[o.status] ?? o.status}</Badge>
                         <br />
                         {o.plannedDelivery
-                          ? `Delivery ${o.plannedDelivery}`
+                          ? `Delivery ${formatDate(o.plannedDelivery)}`
                           : 'Delivery not scheduled yet'}
                       </span>
                     </li>

@@ -1,3 +1,4 @@
+import { formatDate, formatDateTime } from '../../../lib/format';
 import type { ReactNode } from 'react';
 import { Link, useSearchParams } from 'react-router';
 import type { OrderDetail } from '../../../../shared/api/orders';
@@ -50,9 +51,7 @@ export function PortalOrderPage({
                       className={`h-3 w-3 rounded-full ${s.done ? 'bg-timber-600' : 'border border-sand-400'}`}
                     />
                     <span className={s.done ? 'font-medium' : 'text-sand-600'}>{s.label}</span>
-                    <span className="ml-auto text-sand-600">
-                      {s.at ? new Date(s.at).toLocaleDateString() : ''}
-                    </span>
+                    <span className="ml-auto text-sand-600">{s.at ? formatDate(s.at) : ''}</span>
                   </li>
                 ))}
               </ol>
@@ -75,7 +74,7 @@ export function PortalOrderPage({
                 {order.history.map((h) => (
                   <li key={h.id}>
                     {h.summary}
-                    <span className="block text-sand-600">{new Date(h.at).toLocaleString()}</span>
+                    <span className="block text-sand-600">{formatDateTime(h.at)}</span>
                   </li>
                 ))}
               </ul>

@@ -25,6 +25,7 @@ import { CompareProfiles } from './CompareProfiles';
 import type { DesignRules } from '../../../../shared/api/plant';
 import { BracingFields } from './BracingFields';
 import { PointLoadFields } from './PointLoadFields';
+import { PrintedFacts } from './PrintedFacts';
 import { ProfilePicker } from './ProfilePicker';
 import { GeometryFields, LineFields, LoadFields, LumberFields } from './TrussFields';
 import { useLiveDesign } from './use-live-design';
@@ -209,13 +210,14 @@ export function TrussEditor({
         noValidate
         onSubmit={(e) => void handleSubmit(onValid)(e)}
         onInputCapture={() => (startedAt.current = performance.now())}
-        className="flex flex-col gap-4"
+        className="flex flex-col gap-4 print:block print:space-y-3"
       >
         <Card title="Truss type" className="print:hidden">
           <ProfilePicker value={values.profile} disabled={readOnly} onChange={onProfile} />
         </Card>
-        <div className="grid items-start gap-4 lg:grid-cols-[minmax(20rem,26rem)_minmax(0,1fr)]">
-          <Card>
+        <div className="grid items-start gap-4 lg:grid-cols-[minmax(20rem,26rem)_minmax(0,1fr)] print:block">
+          {/* On paper the fields print as a fact list under the drawing instead. */}
+          <Card className="print:hidden">
             <div className="flex flex-col gap-5">
               <LineFields ctx={ctx} />
               <GeometryFields ctx={ctx} units={units} kind={values.profile} />
@@ -244,8 +246,8 @@ export function TrussEditor({
               )}
             </div>
           </Card>
-          <div className="flex min-w-0 flex-col gap-4">
-            <Card title="Drawing">
+          <div className="flex min-w-0 flex-col gap-4 print:block print:space-y-3">
+            <Card title="Drawing" className="break-inside-avoid">
               <div ref={drawingBox}>
                 {shown ? (
                   <TrussDrawing
@@ -263,6 +265,13 @@ export function TrussEditor({
                 )}
               </div>
             </Card>
+            <PrintedFacts
+              input={reading.input}
+              presented={presented}
+              mark={values.mark}
+              quantity={values.quantity}
+              plies={values.plies}
+            />
             {/* A chooser, not part of the design: left off paper. */}
             <div className="print:hidden">
               <CompareProfiles

@@ -47,6 +47,10 @@ describe('accepting a quote', () => {
     expect(events).toHaveLength(1);
     const kinds = (await MailMessage.findAll({ where: { orderId: order.id } })).map((m) => m.kind);
     expect(kinds).toEqual(expect.arrayContaining(['acceptance.builder', 'acceptance.desk']));
+    const copy = await MailMessage.findOne({
+      where: { orderId: order.id, kind: 'acceptance.builder' },
+    });
+    expect(copy!.subject).toMatch(/^You accepted /);
   });
 
   it('twice is once: the second answer is the same and nothing changes', async () => {
@@ -155,6 +159,11 @@ describe('accepting a quote', () => {
         res.body.acceptance.reference,
       ),
     );
+    // The builder's copy says the plant recorded it, not that they clicked anything.
+    const copy = await MailMessage.findOne({
+      where: { orderId: order.id, kind: 'acceptance.builder' },
+    });
+    expect(copy!.subject).toMatch(/^Your acceptance of .+ is recorded/);
     // A second click with the page as it was changes nothing and answers the same.
     await s
       .post(`/api/orders/${order.id}/quotes/1/accept`, { ...agree(), method: 'email', version })
