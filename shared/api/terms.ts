@@ -28,18 +28,21 @@ export const depositSentence = (amount: number, money: (v: number) => string): s
     ? `${TERMS.depositDue} ${TERMS.onAcceptance}: ${money(amount)}.`
     : `${TERMS.noDeposit}: your account terms apply.`;
 
-/** A calendar date of the terms ("January 1, 2027"), read as a UTC day, never shifted by zone. */
+/**
+ * A calendar date of the terms ("1 January 2027": day first, as every date the app prints), read as
+ * a UTC day, never shifted by zone.
+ */
 export function formatTermsDate(isoDate: string): string {
   const d = new Date(`${isoDate.slice(0, 10)}T00:00:00Z`);
   if (Number.isNaN(d.getTime())) return isoDate;
-  return d.toLocaleDateString('en-US', {
-    year: 'numeric',
-    month: 'long',
+  return d.toLocaleDateString('en-GB', {
     day: 'numeric',
+    month: 'long',
+    year: 'numeric',
     timeZone: 'UTC',
   });
 }
 
-/** "Valid until January 1, 2027". */
+/** "Valid until 1 January 2027". */
 export const validUntilText = (isoDate: string): string =>
   `${TERMS.validUntil} ${formatTermsDate(isoDate)}`;

@@ -1,18 +1,7 @@
 import type { OrderStatus, ReviewState } from '../../../shared/api/orders';
 import type { BadgeTone } from '../../components/ui';
 
-/** Plain names of an order's states (DESIGN.md §2), as the sales desk says them. */
-export const ORDER_STATUS_LABELS: Record<OrderStatus, string> = {
-  draft: 'Draft',
-  quoted: 'Quoted',
-  accepted: 'Accepted',
-  deposit_paid: 'Deposit paid',
-  released: 'Released',
-  in_production: 'In production',
-  ready: 'Ready',
-  delivered: 'Delivered',
-  cancelled: 'Cancelled',
-};
+export { ORDER_STATUS_LABELS, orderStatusLabel } from '../../../shared/api/orderStatus';
 
 /** Badge colour per order state: grey while open, blue while committed, green when done. */
 export const ORDER_STATUS_TONES: Record<OrderStatus, BadgeTone> = {
@@ -40,13 +29,6 @@ export const REVIEW_STATE_TONES: Record<ReviewState, BadgeTone> = {
   approved: 'success',
   returned: 'danger',
 };
-
-/** Label of a status string from the API, tolerating one this client does not know yet. */
-export function orderStatusLabel(status: string): string {
-  return status in ORDER_STATUS_LABELS
-    ? ORDER_STATUS_LABELS[status as OrderStatus]
-    : status.replace(/_/g, ' ');
-}
 
 /** Badge tone of a status string from the API ('neutral' for one this client does not know). */
 export function orderStatusTone(status: string): BadgeTone {

@@ -1,3 +1,4 @@
+import { formatDate } from '../../../lib/format';
 import { useQueryClient } from '@tanstack/react-query';
 import clsx from 'clsx';
 import { useCallback, useEffect, useState } from 'react';
@@ -137,7 +138,7 @@ export function FloorPage() {
           return (
             <>
               <div className="mb-4 flex items-center justify-between gap-4">
-                <h1 className="text-3xl font-bold text-sand-900">Today · {day.date}</h1>
+                <h1 className="text-3xl font-bold text-sand-900">Today · {formatDate(day.date)}</h1>
                 <a
                   href={`/api/floor/sheet.pdf?date=${day.date}`}
                   className="min-h-14 rounded-lg border-2 border-sand-300 bg-white px-4 py-3 text-lg text-sand-800"

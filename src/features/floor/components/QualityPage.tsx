@@ -1,3 +1,4 @@
+import { formatDateTime } from '../../../lib/format';
 import clsx from 'clsx';
 import { useState } from 'react';
 import { INSPECTION_CHECKS } from '../../../../shared/api/production';
@@ -139,7 +140,7 @@ export function QualityPage() {
                     <tbody>
                       {log.records.map((r) => (
                         <tr key={r.id} className="border-t border-sand-200">
-                          <td className="p-2">{new Date(r.at).toLocaleString()}</td>
+                          <td className="p-2">{formatDateTime(r.at)}</td>
                           <td className="p-2">{r.station}</td>
                           <td className="p-2">{r.truss}</td>
                           <td className="p-2">

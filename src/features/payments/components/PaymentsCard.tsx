@@ -1,3 +1,4 @@
+import { formatDate } from '../../../lib/format';
 import type { OrderDetail } from '../../../../shared/api/orders';
 import { Button, Card, ErrorMessage } from '../../../components/ui';
 import { useStartDeposit } from '../api/start-deposit';
@@ -40,7 +41,7 @@ export function PaymentsCard({ order }: { order: OrderDetail }) {
           .map((p) => (
             <li key={p.id} className="flex items-center justify-between gap-2 py-2 text-sm">
               <span>
-                {KIND[p.kind]} · {p.paidAt ? new Date(p.paidAt).toLocaleDateString() : ''}
+                {KIND[p.kind]} · {p.paidAt ? formatDate(p.paidAt) : ''}
                 <br />
                 <a
                   className="text-timber-700 underline"

@@ -1,4 +1,5 @@
-import { formatDate } from '../../../lib/format';
+import { orderStatusLabel } from '../../../../shared/api/orderStatus';
+import { formatDate, formatDateTime } from '../../../lib/format';
 import { Link } from 'react-router';
 import { validUntilText } from '../../../../shared/api/terms';
 import { Badge, Card, EmptyState, PageHeader, QueryState } from '../../../components/ui';
@@ -7,13 +8,6 @@ import { PortalJobs } from './PortalJobs';
 
 const money = (v: number, c: string) =>
   new Intl.NumberFormat('en-US', { style: 'currency', currency: c }).format(v);
-const STATUS: Record<string, string> = {
-  accepted: 'Accepted',
-  deposit_paid: 'Deposit paid',
-  released: 'Released',
-  in_production: 'In production',
-  ready: 'Ready',
-};
 
 /** The builder's home: what needs them now, first. */
 export function PortalHome() {
@@ -77,7 +71,7 @@ export function PortalHome() {
                         {o.job} · {o.orderNumber}
                       </Link>
                       <span className="text-right text-sm">
-                        <Badge tone="info">{STATUS[o.status] ?? o.status}</Badge>
+                        <Badge tone="info">{orderStatusLabel(o.status, 'builder')}</Badge>
                         <br />
                         {o.plannedDelivery
                           ? `Delivery ${formatDate(o.plannedDelivery)}`
@@ -97,7 +91,7 @@ export function PortalHome() {
                   {h.messages.map((m) => (
                     <li key={m.id}>
                       {m.subject}
-                      <span className="block text-sand-600">{new Date(m.at).toLocaleString()}</span>
+                      <span className="block text-sand-600">{formatDateTime(m.at)}</span>
                     </li>
                   ))}
                 </ul>

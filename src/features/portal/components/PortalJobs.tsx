@@ -1,17 +1,7 @@
+import { orderStatusLabel } from '../../../../shared/api/orderStatus';
 import { Link } from 'react-router';
 import { Badge, Card, EmptyState, QueryState, focusRing } from '../../../components/ui';
 import { usePortalJobs } from '../api/list-jobs';
-
-const STATUS: Record<string, string> = {
-  quoted: 'Quote sent',
-  accepted: 'Accepted',
-  deposit_paid: 'Deposit paid',
-  released: 'Released',
-  in_production: 'In production',
-  ready: 'Ready',
-  delivered: 'Delivered',
-  cancelled: 'Cancelled',
-};
 
 const rowLink = `block rounded px-1 py-2 text-timber-700 underline underline-offset-2 hover:bg-sand-50 ${focusRing}`;
 
@@ -37,7 +27,7 @@ export function PortalJobs() {
                         <li key={o.id}>
                           <Link className={rowLink} to={`/portal/orders/${o.id}`}>
                             Order {o.number}{' '}
-                            <Badge tone="info">{STATUS[o.status] ?? o.status}</Badge>
+                            <Badge tone="info">{orderStatusLabel(o.status, 'builder')}</Badge>
                           </Link>
                         </li>
                       ))}

@@ -1,3 +1,4 @@
+import { formatDateTime } from '../../../lib/format';
 import { Link } from 'react-router';
 import type { CutListGroupView, CutListView } from '../../../../shared/api/shop';
 import type { CutListStatus } from '../../../../shared/api/shopPlan';
@@ -70,8 +71,8 @@ function CutList({ view }: { view: CutListView }) {
         {view.cautions.join(' ')}
       </Alert>
       <p className="mt-3 text-xs text-sand-500">
-        Made {new Date(view.computedAt).toLocaleString()} by engine {view.engineVersion} from
-        designs of engine {view.designEngineVersions.join(', ')}.
+        Made {formatDateTime(view.computedAt)} by engine {view.engineVersion} from designs of engine{' '}
+        {view.designEngineVersions.join(', ')}.
       </p>
     </>
   );

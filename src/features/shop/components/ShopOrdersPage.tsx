@@ -1,3 +1,4 @@
+import { orderStatusLabel } from '../../../../shared/api/orderStatus';
 import { Card, EmptyState, PageHeader, QueryState, TextLink } from '../../../components/ui';
 import { formatDate } from '../../../lib/format';
 import { useShopOrders } from '../api/list-shop-orders';
@@ -26,6 +27,7 @@ export function ShopOrdersPage() {
                     <th className="px-4 py-3 font-medium">Order</th>
                     <th className="px-4 py-3 font-medium">Job</th>
                     <th className="px-4 py-3 font-medium">Builder</th>
+                    <th className="px-4 py-3 font-medium">Status</th>
                     <th className="px-4 py-3 text-right font-medium">Lines</th>
                     <th className="px-4 py-3 text-right font-medium">Trusses</th>
                     <th className="px-4 py-3 font-medium">Updated</th>
@@ -34,14 +36,17 @@ export function ShopOrdersPage() {
                 <tbody>
                   {items.map((o) => (
                     <tr key={o.id} className="border-b border-sand-100 last:border-0">
-                      <td className="px-4 py-3">
+                      <td className="px-4 py-3 whitespace-nowrap">
                         <TextLink to={`/shop/orders/${o.id}`}>{o.number}</TextLink>
                       </td>
                       <td className="px-4 py-3">{o.job.name}</td>
                       <td className="px-4 py-3">{o.customer.name}</td>
+                      <td className="px-4 py-3 whitespace-nowrap">{orderStatusLabel(o.status)}</td>
                       <td className="px-4 py-3 text-right tabular-nums">{o.lineCount}</td>
                       <td className="px-4 py-3 text-right tabular-nums">{o.trussCount}</td>
-                      <td className="px-4 py-3 text-sand-600">{formatDate(o.updatedAt)}</td>
+                      <td className="px-4 py-3 whitespace-nowrap text-sand-600">
+                        {formatDate(o.updatedAt)}
+                      </td>
                     </tr>
                   ))}
                 </tbody>
