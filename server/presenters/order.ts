@@ -8,6 +8,7 @@ import type {
 } from '../../shared/api/orders';
 import type { AuditEvent, Order, OrderLine, User } from '../models';
 import { summarizePortalEvent } from './portal';
+import { formatInstantUtc, formatMoney, formatShortDay } from '../services/quotePdf/format';
 import { plannedDelivery } from '../../shared/engine/schedule';
 
 type Counted = Order & { get(k: 'lineCount' | 'trussCount'): unknown };
@@ -69,6 +70,7 @@ export function presentLine(l: OrderLine): LineDetail {
 }
 
 const d = (e: AuditEvent, k: string) => e.data[k] as string | number | undefined;
+const day = (e: AuditEvent, k: string) => formatShortDay(String(d(e, k) ?? ''));
 
 /** One sentence per change, in the desk's words. */
 export function summarizeEvent(e: AuditEvent): string {
@@ -96,7 +98,7 @@ export function summarizeEvent(e: AuditEvent): string {
     case 'line.approved':
       return `Approved the design of ${d(e, 'mark')}${e.data.comment ? `: ${d(e, 'comment')}` : ''}`;
     case 'quote.created':
-      return `Quoted ${d(e, 'reference')}${e.data.total !== undefined ? ` (total ${Number(e.data.total).toFixed(2)} ${d(e, 'currency') ?? ''})`.replace(' )', ')') : ''}`;
+      return `Quoted ${d(e, 'reference')}${e.data.total !== undefined ? ` (total ${formatMoney(Number(e.data.total), String(d(e, 'currency') ?? 'USD'))})` : ''}`;
     case 'quote.sent':
       return `Sent ${d(e, 'reference')} to ${d(e, 'to') ?? 'the builder'}`;
     case 'order.reopened':
@@ -115,10 +117,10 @@ export function summarizeEvent(e: AuditEvent): string {
       return `Hold lifted: ${d(e, 'reason')}`;
     case 'order.promised':
       return e.data.from
-        ? `Promised date ${d(e, 'from')} → ${d(e, 'to')}: ${d(e, 'reason')}`
-        : `Promised delivery on ${d(e, 'to')}`;
+        ? `Promised date ${day(e, 'from')} → ${day(e, 'to')}: ${d(e, 'reason')}`
+        : `Promised delivery on ${day(e, 'to')}`;
     case 'order.moved':
-      return `Moved on the schedule to table ${d(e, 'tableId')} from ${d(e, 'date')}`;
+      return `Moved on the schedule to table ${d(e, 'tableId')} from ${day(e, 'date')}`;
     case 'line.progress':
       return `${d(e, 'mark')}: ${d(e, 'count')} of ${d(e, 'quantity')} ${d(e, 'stage')}`;
     case 'order.in_production':
@@ -126,7 +128,7 @@ export function summarizeEvent(e: AuditEvent): string {
     case 'order.ready':
       return 'Ready: every truss banded';
     case 'order.delivered':
-      return `Delivered, signed for by ${d(e, 'receivedBy')}${e.data.receivedAt ? ` on ${String(e.data.receivedAt).slice(0, 16).replace('T', ' ')}` : ''}${e.data.note ? `: ${d(e, 'note')}` : ''}`;
+      return `Delivered, signed for by ${d(e, 'receivedBy')}${e.data.receivedAt ? ` on ${formatInstantUtc(String(e.data.receivedAt))}` : ''}${e.data.note ? `: ${d(e, 'note')}` : ''}`;
     default:
       return summarizePortalEvent(e) ?? e.action;
   }

@@ -9,6 +9,7 @@ import type {
 import type { AuditEvent, MailMessage, Payment, Quote, QuoteAcceptance, User } from '../models';
 import type { QuoteSnapshot } from '../services/pricing';
 import { presentQuote } from './quote';
+import { formatMoney } from '../services/quotePdf/format';
 
 const dollars = (cents: number) => Math.round(cents) / 100;
 
@@ -113,7 +114,7 @@ const d = (e: AuditEvent, k: string) => String(e.data[k] ?? '');
 /** How an acceptance recorded by the desk reached it, in words. */
 const METHOD_WORDS: Record<string, string> = { phone: 'phone', paper: 'paper', email: 'e-mail' };
 const money = (e: AuditEvent) =>
-  `${(Number(e.data.amountCents ?? 0) / 100).toFixed(2)} ${d(e, 'currency')}`;
+  formatMoney(Number(e.data.amountCents ?? 0) / 100, d(e, 'currency') || 'USD');
 
 /**
  * The order's history written for the builder: what the plant sent them and what they did, the
@@ -162,7 +163,7 @@ export function summarizePortalEvent(e: AuditEvent): string | null {
     case 'order.cancelled':
       return `Cancelled: ${d(e, 'reason')}`;
     case 'refund.requested':
-      return `Refund requested: ${money(e)} (cancellation fee ${(Number(e.data.feeCents ?? 0) / 100).toFixed(2)})`;
+      return `Refund requested: ${money(e)} (cancellation fee ${formatMoney(Number(e.data.feeCents ?? 0) / 100, d(e, 'currency') || 'USD')})`;
     case 'refund.succeeded':
       return `Refund completed: ${money(e)}`;
     case 'deposit.session':

@@ -1,4 +1,5 @@
 /** Money, dates and numbers as the printed quote and its e-mail show them. */
+import { formatTermsDate } from '../../../shared/api/terms';
 
 /** "$1,234.50" in the quote's currency (en-US grouping; any ISO code). */
 export function formatMoney(amount: number, currency: string): string {
@@ -10,15 +11,28 @@ export function formatMoney(amount: number, currency: string): string {
   }
 }
 
-/** "December 31, 2026" — spelled out so neither day-month order misreads it. */
+/** "31 December 2026" — spelled out so neither day-month order misreads it (the terms' words). */
 export function formatDate(date: string | Date): string {
-  const d = typeof date === 'string' ? new Date(`${date.slice(0, 10)}T00:00:00Z`) : date;
-  return d.toLocaleDateString('en-US', {
-    year: 'numeric',
-    month: 'long',
+  return formatTermsDate(typeof date === 'string' ? date : date.toISOString());
+}
+
+/** "9 Dec 2026": a calendar day in a line of history, never shifted by time zones. */
+export function formatShortDay(iso: string): string {
+  const d = new Date(`${iso.slice(0, 10)}T00:00:00Z`);
+  if (Number.isNaN(d.getTime())) return iso;
+  return d.toLocaleDateString('en-GB', {
     day: 'numeric',
+    month: 'short',
+    year: 'numeric',
     timeZone: 'UTC',
   });
+}
+
+/** "30 Nov 2026, 14:05 UTC": an instant in a line of history (the server knows no plant zone). */
+export function formatInstantUtc(iso: string): string {
+  const d = new Date(iso);
+  if (Number.isNaN(d.getTime())) return iso;
+  return `${formatShortDay(d.toISOString())}, ${d.toISOString().slice(11, 16)} UTC`;
 }
 
 /** A plain number with grouping and at most (`fixed`: exactly) `digits` decimals, e.g. "1,234.5". */

@@ -18,6 +18,9 @@ const KIND: Record<string, string> = {
   'changes.desk': 'Request for changes',
   receipt: 'Receipt',
   'refund.receipt': 'Refund receipt',
+  'production.released': 'Released to production',
+  'production.promised': 'Promised date',
+  'production.planned': 'Planned delivery date',
 };
 
 function when(m: MailState) {

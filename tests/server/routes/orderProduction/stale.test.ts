@@ -117,7 +117,7 @@ describe('the delivery sign-off', () => {
     }).expect(200);
     expect(res.body.status).toBe('delivered');
     expect(res.body.history[0].summary).toBe(
-      'Delivered, signed for by Sam Site on 2026-11-30 14:05: Stacked on bearers by the gate',
+      'Delivered, signed for by Sam Site on 30 Nov 2026, 14:05 UTC: Stacked on bearers by the gate',
     );
   });
 });

@@ -147,7 +147,7 @@ describe('the promised delivery date', () => {
       .expect(200);
     expect(ok.body.promisedOn).toBe('2030-05-08');
     expect(ok.body.history[0].summary).toBe(
-      'Promised date 2030-05-06 → 2030-05-08: Crane booked later',
+      'Promised date 6 May 2030 → 8 May 2030: Crane booked later',
     );
     const mails = await queuedTo(customer.email);
     expect(mails[0].subject).toMatch(/delivery date changed/); // newest first
