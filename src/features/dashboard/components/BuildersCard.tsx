@@ -1,3 +1,4 @@
+import { TERMS } from '../../../../shared/api/terms';
 import type { CustomerSummary } from '../../../../shared/api/list';
 import {
   Badge,
@@ -21,9 +22,9 @@ const columns = column.columns([
     header: 'Terms',
     cell: (info) =>
       info.getValue() === 'account' ? (
-        <Badge tone="success">Account</Badge>
+        <Badge tone="success">{TERMS.account}</Badge>
       ) : (
-        <Badge tone="warning">Deposit first</Badge>
+        <Badge tone="warning">{TERMS.deposit}</Badge>
       ),
   }),
   column.accessor('jobCount', {

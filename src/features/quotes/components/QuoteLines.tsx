@@ -7,7 +7,10 @@ const column = tableColumnHelper<QuoteLine>();
 
 const right = (text: string) => <span className="block text-right tabular-nums">{text}</span>;
 
-const boardFeet = new Intl.NumberFormat('en-US', { maximumFractionDigits: 1 });
+const boardFeet = new Intl.NumberFormat('en-US', {
+  minimumFractionDigits: 1,
+  maximumFractionDigits: 1,
+});
 
 function lineColumns(currency: string): TableColumn<QuoteLine>[] {
   return [
