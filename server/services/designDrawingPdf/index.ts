@@ -26,8 +26,11 @@ const RIGHT_W = 296;
 const GAP = 12;
 const HEADER_H = 40;
 const APPROVAL_H = 30;
-/** The drawing's height on the sheet: as tall as the facts leave room for, within these. */
-const DRAWING_H = { min: 120, max: 210 };
+/**
+ * The drawing's height on the sheet: as tall as the facts leave room for, within min…max; a truss
+ * with many members may go down to `tight` to stay on one sheet.
+ */
+const DRAWING_H = { tight: 90, min: 120, max: 210 };
 
 /** A table under a heading, as a block. */
 function tableBlock(title: string, columns: PdfColumn[], rows: string[][]): Block {
@@ -165,22 +168,32 @@ function jointColumns(w: number): PdfColumn[] {
   ];
 }
 
+/** The foot band: the cautions, and (when the sheet is full) the adjustments after them. */
+interface FootBand {
+  parts: { title: string; text: string }[];
+  height: number;
+}
+
+function footBand(doc: Doc, s: DesignDrawingSheet, fullW: number, adjustments: boolean): FootBand {
+  const parts = [{ title: 'CAUTIONS', text: s.cautions.join('  •  ') }];
+  if (adjustments)
+    parts.push({ title: 'ADJUSTMENTS FOR CONDITIONS OF USE', text: s.adjustments.join('  •  ') });
+  const height = parts.reduce(
+    (h, p) => h + paragraphHeight(doc, p.text, fullW - 16, { size: BODY }) + 12,
+    8,
+  );
+  return { parts, height };
+}
+
 /**
- * One truss design drawing on one US Letter landscape sheet. Left: the drawing, members and
- * joints, then notes; right: title block and the facts; across the foot: the cautions. The facts
- * that do not fit the right column move under the tables (two columns there), and the drawing
- * takes the height that is left.
+ * Where each block goes: the right column while a block fits, else under the tables (one block
+ * across, more in two columns split where the heights come closest), and the drawing's height.
  */
-function sheet(doc: Doc, s: DesignDrawingSheet) {
-  const pageW = doc.page.width;
-  const fullW = pageW - 2 * M;
+function plan(doc: Doc, s: DesignDrawingSheet, adjustmentsInFoot: boolean) {
+  const fullW = doc.page.width - 2 * M;
   const leftW = fullW - RIGHT_W - GAP;
-  const bottom = doc.page.height - M;
-
-  const cautionText = s.cautions.join('  •  ');
-  const cautionH = paragraphHeight(doc, cautionText, fullW - 16, { size: BODY }) + 20;
-  const foot = bottom - cautionH - 6;
-
+  const band = footBand(doc, s, fullW, adjustmentsInFoot);
+  const foot = doc.page.height - M - band.height - 6;
   const title = titleBlock(s);
   const right: Block[] = [
     rowsBlock('Geometry', s.criteria),
@@ -199,12 +212,13 @@ function sheet(doc: Doc, s: DesignDrawingSheet) {
     ),
     rowsBlock('Deflection', s.deflection),
   ];
-  // Each of these goes in the right column while it fits there, else under the tables.
   const flexible: Block[] = [
     rowsBlock('Connections', s.connections),
     bulletsBlock('Web compression and bracing', [s.webCompression, ...s.bracing]),
     ...(s.warnings.length ? [bulletsBlock('Warnings', s.warnings)] : []),
-    bulletsBlock('Adjustments for conditions of use', s.adjustments, COLORS.muted),
+    ...(adjustmentsInFoot
+      ? []
+      : [bulletsBlock('Adjustments for conditions of use', s.adjustments, COLORS.muted)]),
   ];
   let rightRoom =
     foot - M - APPROVAL_H - title.height(doc, RIGHT_W) - stackHeight(doc, right, RIGHT_W);
@@ -216,8 +230,6 @@ function sheet(doc: Doc, s: DesignDrawingSheet) {
       rightRoom -= h;
     } else under.push(b);
   }
-  // Under the tables: one block takes the width; more share two columns, split where the two
-  // heights come closest.
   const halfW = (leftW - GAP) / 2;
   let split = under.length;
   if (under.length > 1) {
@@ -238,15 +250,26 @@ function sheet(doc: Doc, s: DesignDrawingSheet) {
         )
       : stackHeight(doc, under, leftW);
   const tablesH = tableHeight(s.members.length) + 2 + tableHeight(s.joints.length);
+  const room = foot - (M + HEADER_H) - 8 - tablesH - bandH - 2;
+  return { fullW, leftW, halfW, band, foot, title, right, under, split, room };
+}
+
+/**
+ * One truss design drawing on one US Letter landscape sheet. Left: the drawing, members and
+ * joints, then notes; right: title block and the facts; across the foot: the cautions. The facts
+ * that do not fit the right column move under the tables (two columns there), and the drawing
+ * takes the height that is left; a truss with many members moves the adjustments into the foot
+ * band rather than onto a second sheet.
+ */
+function sheet(doc: Doc, s: DesignDrawingSheet) {
+  let p = plan(doc, s, false);
+  if (p.room < DRAWING_H.min) p = plan(doc, s, true);
+  const { fullW, leftW, halfW, band, foot, title, right, under, split } = p;
   const top = M + HEADER_H;
   // No taller than the truss drawn across the full width needs.
   const b = s.geometry.bounds;
   const natural = ((b.maxY - b.minY) / (b.maxX - b.minX || 1)) * (leftW - 16) + 12;
-  const drawingH = Math.min(
-    DRAWING_H.max,
-    natural,
-    Math.max(DRAWING_H.min, foot - top - 8 - tablesH - bandH - 2),
-  );
+  const drawingH = Math.min(DRAWING_H.max, natural, Math.max(DRAWING_H.tight, p.room));
 
   const first = doc.bufferedPageRange().start + doc.bufferedPageRange().count - 1;
   header(doc, s, leftW);
@@ -261,13 +284,22 @@ function sheet(doc: Doc, s: DesignDrawingSheet) {
     drawStack(doc, { x: M + halfW + GAP, w: halfW, y, bottom: foot }, under.slice(split));
   } else drawStack(doc, { x: M, w: leftW, y, bottom: foot }, under);
 
-  // The cautions in a shaded band across the foot of the sheet.
+  // The cautions (and maybe the adjustments) in a shaded band across the foot of the sheet.
   doc.switchToPage(first);
-  doc.rect(M, foot + 6, fullW, cautionH).fillAndStroke(COLORS.noteBg, COLORS.noteRule);
-  textAt(doc, 'CAUTIONS', M + 8, foot + 11, { font: 'bold', size: 7 });
-  paragraph(doc, cautionText, M + 8, foot + 20, fullW - 16, { size: BODY, color: COLORS.text });
+  doc.rect(M, foot + 6, fullW, band.height).fillAndStroke(COLORS.noteBg, COLORS.noteRule);
+  let by = foot + 11;
+  for (const part of band.parts) {
+    textAt(doc, part.title, M + 8, by, { font: 'bold', size: 7 });
+    paragraph(doc, part.text, M + 8, by + 9, fullW - 16, { size: BODY, color: COLORS.text });
+    by += paragraphHeight(doc, part.text, fullW - 16, { size: BODY }) + 12;
+  }
 
-  const c: Column = { x: pageW - M - RIGHT_W, w: RIGHT_W, y: M, bottom: foot - APPROVAL_H };
+  const c: Column = {
+    x: doc.page.width - M - RIGHT_W,
+    w: RIGHT_W,
+    y: M,
+    bottom: foot - APPROVAL_H,
+  };
   drawStack(doc, c, [title, ...right]);
   c.bottom = foot;
   approval(doc, c);

@@ -170,12 +170,7 @@ export function designDrawingSheet(ctx: DesignDrawingContext): DesignDrawingShee
   const webCompression = worst
     ? `Maximum web compression ${force(worst.maxCompression)} in ${worst.id} (${worst.length.text}).`
     : 'No webs.';
-  const bracing = [
-    ...d.members
-      .filter((m) => m.braced)
-      .map((m) => `${m.id} (${m.piece}): ${m.bracing.replace(/\.$/, '')}.`),
-    'Top chord: continuous lateral restraint by the roof sheathing; bottom chord: by the ceiling (or purlins at 10 ft o.c. where there is none).',
-  ];
+  const bracing = [...webBracing(d.members.filter((m) => m.braced)), ...chordBracing(d.members)];
 
   const defl = d.deflection;
   const roller = d.additional?.rollerMovement;
@@ -267,4 +262,37 @@ function widenBounds(g: ShopDrawingGeometry) {
   const side = (g.bounds.maxX - g.bounds.minX) * 0.06;
   g.bounds.minX -= side;
   g.bounds.maxX += side;
+}
+
+/** Where a web's brace goes, cut out of its bracing sentence: "4'-2 1/8" from joint C". */
+const BRACE_AT = / at mid-length, (.+?) from joint (\w+),/;
+
+/**
+ * The braced webs as the sheet states them: one sentence for the method when every web shares it,
+ * then each web with where its brace goes; else each web's own sentence.
+ */
+export function webBracing(webs: { id: string; piece: string; bracing: string }[]): string[] {
+  const own = webs.map((m) => `${m.id} (${m.piece}): ${m.bracing.replace(/\.$/, '')}.`);
+  if (webs.length < 2) return own;
+  const split = webs.map((m) => ({ m, at: BRACE_AT.exec(m.bracing) }));
+  if (split.some((x) => !x.at)) return own;
+  const methods = new Set(split.map((x) => x.m.bracing.replace(BRACE_AT, ' at mid-length,')));
+  if (methods.size !== 1) return own;
+  const where = split
+    .map((x) => `${x.m.id} (${x.m.piece}) ${x.at![1]} from joint ${x.at![2]}`)
+    .join('; ');
+  return [`Braced webs: ${where}. Each: ${[...methods][0].replace(/\.$/, '')}.`];
+}
+
+/** The chords' restraint as the design assumed it (sheathing or purlins, ceiling or bracing). */
+export function chordBracing(members: { role: string; bracing: string }[]): string[] {
+  const say = (role: string, name: string) => {
+    const text = members.find((m) => m.role === role)?.bracing;
+    return text
+      ? `${name}: ${text.charAt(0).toLowerCase()}${text.slice(1).replace(/\.$/, '')}.`
+      : null;
+  };
+  return [say('topChord', 'Top chord'), say('bottomChord', 'Bottom chord')].filter(
+    (v): v is string => v !== null,
+  );
 }
