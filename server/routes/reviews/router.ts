@@ -6,7 +6,7 @@ import { orderPolicy } from '../../policies/order';
 import { Customer, Job, Order, OrderLine, User } from '../../models';
 import { presentQueueItem } from '../../presenters/order';
 import { presentPage } from '../../presenters/page';
-import { handle } from '../load';
+import { handle, load } from '../load';
 import { reviewQueueQuerySchema, type ReviewQueueQuery } from './schema';
 
 /** Designed lines waiting for (or past) the design reviewer; passing designs first, oldest first. */
@@ -46,6 +46,34 @@ export function reviewsRouter() {
       });
       res.json(presentPage(rows.map(presentQueueItem), count, q));
     }),
+  );
+  // A review link without its order (typed, bookmarked, shared): which order the line is on.
+  router.get(
+    '/lines/:lineId',
+    requireUser,
+    authorize(orderPolicy.reviewQueue),
+    load(
+      'Truss line',
+      (id, actor) =>
+        OrderLine.findOne({
+          where: { id },
+          attributes: ['id', 'orderId'],
+          include: [
+            {
+              model: Order,
+              as: 'order',
+              required: true,
+              attributes: ['id'],
+              where: orderPolicy.scope(actor),
+            },
+          ],
+        }),
+      'lineId',
+    ),
+    (_req, res) => {
+      const line = res.locals.record as OrderLine;
+      res.json({ lineId: line.id, orderId: line.orderId });
+    },
   );
   return router;
 }

@@ -19,26 +19,38 @@ import {
 import { formatDateTime } from '../../../lib/format';
 import { reviewKeys } from '../../../lib/query-keys';
 import { useReviewLine } from '../api/get-line';
+import { useLineOrder } from '../api/find-line-order';
 import { useSubmitReview, type ReviewDecision } from '../api/submit-review';
 import { orderIdFromSearch } from '../review-link';
 import { designDrawingPath } from '../../../lib/design-drawing';
 import { DecisionOutcome, type Outcome } from './DecisionOutcome';
 import { SignOffSummary } from './SignOffSummary';
 
-/** The order of a line: from `?order=`, else from any cached page of the queue. */
-function useOrderIdOf(lineId: number): number | undefined {
+/**
+ * The order of a line: from `?order=`, else from any cached page of the queue, else asked of the
+ * server (a typed or shared link).
+ */
+function useOrderIdOf(lineId: number): {
+  orderId: number | undefined;
+  lookup: ReturnType<typeof useLineOrder>;
+} {
   const [search] = useSearchParams();
   const queryClient = useQueryClient();
-  const fromUrl = orderIdFromSearch(search);
-  if (fromUrl !== undefined) return fromUrl;
-  const pages = queryClient.getQueriesData<{ items: ReviewQueueItem[] }>({
-    queryKey: reviewKeys.lists(),
-  });
-  for (const [, page] of pages) {
-    const item = page?.items.find((i) => i.id === lineId);
-    if (item) return item.order.id;
+  let known = orderIdFromSearch(search);
+  if (known === undefined) {
+    const pages = queryClient.getQueriesData<{ items: ReviewQueueItem[] }>({
+      queryKey: reviewKeys.lists(),
+    });
+    for (const [, page] of pages) {
+      const item = page?.items.find((i) => i.id === lineId);
+      if (item) known = item.order.id;
+    }
   }
-  return undefined;
+  const lookup = useLineOrder(
+    lineId,
+    known === undefined && Number.isInteger(lineId) && lineId > 0,
+  );
+  return { orderId: known ?? lookup.data?.orderId, lookup };
 }
 
 function ReviewState({ line }: { line: LineDetail }) {
@@ -143,7 +155,7 @@ function Decision({
 /** `/reviews/:lineId`: the stored design drawn from the server's result, and the decision. */
 export function ReviewPage() {
   const lineId = Number(useParams().lineId);
-  const orderId = useOrderIdOf(lineId);
+  const { orderId, lookup } = useOrderIdOf(lineId);
   const [outcome, setOutcome] = useState<(Outcome & { lineId: number }) | null>(null);
   const decided = outcome?.lineId === lineId ? outcome : null;
   const line = useReviewLine(orderId, lineId);
@@ -165,7 +177,17 @@ export function ReviewPage() {
     return (
       <>
         <PageHeader title="Design review" actions={back} />
-        <Alert tone="warning">Open this design from the review queue.</Alert>
+        {lookup.error ? (
+          <ErrorMessage
+            title="Could not open the design"
+            error={lookup.error}
+            onRetry={() => void lookup.refetch()}
+          />
+        ) : lookup.isFetching ? (
+          <Spinner label="Finding the design…" />
+        ) : (
+          <Alert tone="warning">This link names no truss line. Open a design from the queue.</Alert>
+        )}
       </>
     );
   }

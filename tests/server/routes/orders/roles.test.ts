@@ -182,6 +182,16 @@ describe('sales desk role matrix', () => {
     await s.get(`/api/orders/${ours.order.id}/lines/${other.line.id}`).expect(404);
   });
 
+  it('a review link without its order finds the order; another plant’s line or a bad id is 404', async () => {
+    const s = await signedIn(app, users.engineer.email);
+    const res = await s.get(`/api/reviews/lines/${ours.line.id}`).expect(200);
+    expect(res.body).toEqual({ lineId: ours.line.id, orderId: ours.order.id });
+    await s.get(`/api/reviews/lines/${theirs.line.id}`).expect(404);
+    await s.get('/api/reviews/lines/abc').expect(404);
+    const sales = await signedIn(app, users.sales.email);
+    await sales.get(`/api/reviews/lines/${ours.line.id}`).expect(403);
+  });
+
   it('signed out, every route answers 401', async () => {
     for (const path of ['/api/orders', `/api/orders/${ours.order.id}`, '/api/reviews']) {
       expect((await request(app).get(path)).status).toBe(401);
