@@ -53,11 +53,8 @@ const plateAxis = (joint: PlateJoint, options: PlateDesignOptions): Point => {
   return x < -TOLERANCE || (Math.abs(x) <= TOLERANCE && y < 0) ? [-x, -y] : [x, y];
 };
 
-const check = (demand: number, capacity: number) => ({
-  demand,
-  capacity,
-  ratio: demand === 0 ? 0 : capacity > 0 ? demand / capacity : Infinity,
-});
+const ratioOf = (demand: number, capacity: number) =>
+  demand === 0 ? 0 : capacity > 0 ? demand / capacity : Infinity;
 
 // Slides are tried on a fixed ¼ in grid (common practice: plates are placed to the nearest
 // ¼ in). The grid does not depend on the plate, and a larger plate may slide at least as far,
@@ -177,13 +174,27 @@ const checksAt = (t: Trial, offset: number, spread: number): MemberPlateCheck[] 
   for (let k = 0; k < t.order.length; k++) {
     const i = t.order[k];
     const area = regionAreaInPlate(t.regions[i], t.halfLength, t.halfWidth + spread, offset);
-    const c = check(Math.abs(t.joint.members[i].force), capacityOf(t, i, area));
-    if (c.ratio > 1) {
-      if (spread === 0 && c.ratio < t.best.ratio) t.best = { i, ratio: c.ratio };
+    const demand = Math.abs(t.joint.members[i].force);
+    const capacity = capacityOf(t, i, area);
+    const ratio = ratioOf(demand, capacity);
+    if (ratio > 1) {
+      if (spread === 0 && ratio < t.best.ratio) t.best = { i, ratio };
       if (k > 0) t.order.unshift(...t.order.splice(k, 1));
       return undefined;
     }
-    checks.push({ member: t.joint.members[i].id, area, ...c, ...t.angles[i] });
+    // Every field written out: spreading the check and the angles in cost more than the rest.
+    const a = t.angles[i];
+    checks.push({
+      member: t.joint.members[i].id,
+      area,
+      demand,
+      capacity,
+      ratio,
+      plateToLoad: a.plateToLoad,
+      loadToGrain: a.loadToGrain,
+      lateralValue: a.lateralValue,
+      heelFactor: a.heelFactor,
+    });
   }
   return checks;
 };
