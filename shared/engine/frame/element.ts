@@ -108,6 +108,13 @@ export interface LocalPoint {
   py: number;
 }
 
+/** M(x) of `alongMember` (module level, not a closure: it runs for every member of every solve). */
+function momentAt(m0: number, v0: number, py: number, points: readonly LocalPoint[], x: number) {
+  let m = m0 + v0 * x + (py * x * x) / 2;
+  for (const p of points) if (x > p.a) m += p.py * (x - p.a);
+  return m;
+}
+
 /**
  * Moment and shear along a member from its local end forces and loads. M(x) = −M₁ + V₁x +
  * py·x²/2 + Σ Pᵢ·(x − aᵢ)⁺ is the moment sagging + about local y; V(x) = dM/dx. Returns the
@@ -122,11 +129,6 @@ export function alongMember(
 ): { spanMoment: number; maxMoment: number; maxShear: number } {
   const m0 = -q[at + 2];
   const v0 = q[at + 1];
-  const moment = (x: number) => {
-    let m = m0 + v0 * x + (py * x * x) / 2;
-    for (const p of points) if (x > p.a) m += p.py * (x - p.a);
-    return m;
-  };
   let spanMoment = 0;
   let maxShear = 0;
   let start = 0;
@@ -138,10 +140,12 @@ export function alongMember(
     maxShear = Math.max(maxShear, Math.abs(shear), Math.abs(shearEnd));
     if (py !== 0) {
       const x = start - shear / py;
-      if (x > start && x < end) spanMoment = Math.max(spanMoment, Math.abs(moment(x)));
+      if (x > start && x < end)
+        spanMoment = Math.max(spanMoment, Math.abs(momentAt(m0, v0, py, points, x)));
     }
     if (s < cuts.length) {
-      if (end > 0 && end < L) spanMoment = Math.max(spanMoment, Math.abs(moment(end)));
+      if (end > 0 && end < L)
+        spanMoment = Math.max(spanMoment, Math.abs(momentAt(m0, v0, py, points, end)));
       shear = shearEnd + cuts[s].py;
       start = end;
     }

@@ -1,9 +1,9 @@
 import { EngineError } from '../errors';
-import { MM_PER_INCH, N_PER_LBF, TOLERANCE } from '../units';
+import { MM_PER_INCH, TOLERANCE } from '../units';
 import { memberContactRegions, regionAreaInPlate, type LocalMember, type Region } from './contact';
 import type { Point } from './geometry';
-import { foldAngle, heelReduction, lateralValue } from './lateral';
 import { steelChecks, steelSections } from './steel';
+import { toothAngles, toothClasses, toothValue, type ToothValue } from './teeth';
 import type {
   Direction,
   JointPlateDesign,
@@ -11,7 +11,6 @@ import type {
   PlateCatalog,
   PlateDesignOptions,
   PlateJoint,
-  PlateJointMember,
   PlateSpec,
   SteelCheck,
 } from './types';
@@ -20,9 +19,7 @@ import type {
 // not verified, see references §4).
 const END_EXCLUSION_MM = 0.5 * MM_PER_INCH;
 const EDGE_EXCLUSION_MM = 0.25 * MM_PER_INCH;
-const MM2_PER_IN2 = MM_PER_INCH * MM_PER_INCH;
 const PLATES_PER_JOINT = 2;
-const PSI_TO_N_PER_MM2 = N_PER_LBF / MM2_PER_IN2;
 
 const unit = (d: Direction, what: string): Point => {
   const len = Math.hypot(d.x, d.y);
@@ -82,7 +79,11 @@ const chordHalfDepth = (local: LocalMember[]) => {
 };
 
 // Each catalog sorted once (catalogs are immutable values), with the reach its largest plate needs.
-const sortedCatalogs = new WeakMap<PlateCatalog, { plates: PlateSpec[]; reach: number }>();
+// Also each plate's class of equal tooth values (`toothClasses`).
+const sortedCatalogs = new WeakMap<
+  PlateCatalog,
+  { plates: PlateSpec[]; reach: number; classes: number[] }
+>();
 const sortedPlates = (catalog: PlateCatalog) => {
   let entry = sortedCatalogs.get(catalog);
   if (!entry) {
@@ -90,7 +91,7 @@ const sortedPlates = (catalog: PlateCatalog) => {
     // Far enough for the corner of any plate slid by up to its own half width.
     const reach =
       Math.max(...plates.map((p) => Math.hypot(2 * p.width, p.length))) * (MM_PER_INCH / 2) + 1;
-    entry = { plates, reach };
+    entry = { plates, reach, classes: toothClasses(plates) };
     sortedCatalogs.set(catalog, entry);
   }
   return entry;
@@ -149,7 +150,7 @@ interface Trial {
   halfLength: number;
   halfWidth: number;
   /** Per member: its angles, lateral value (MPa) and heel factor, for the report. */
-  angles: Omit<MemberPlateCheck, 'member' | 'area' | 'demand' | 'capacity' | 'ratio'>[];
+  angles: ToothValue[];
   /** The member failing by the least at an exact slide, for the message. */
   best: { i: number; ratio: number };
 }
@@ -248,57 +249,6 @@ const LINE_TEXT: Record<SteelCheck['line'], string> = {
   joint: 'across the joint line',
 };
 
-/** A member's tooth angles at a joint, independent of the plate size. */
-interface ToothAngles {
-  /** Plate-to-load angles to try (the load at ±θ to the member when θ ≠ 0). */
-  plateToLoad: number[];
-  loadToGrain: number;
-  heelFactor: number;
-}
-
-/**
- * The angles of a member's load at a joint: along its axis (grain) for an axial force, else at
- * `loadToGrain` to it, to either side (the lower value is used). The top chord at a heel takes
- * the heel reduction for its slope.
- */
-const toothAngles = (joint: PlateJoint, m: PlateJointMember, local: Point): ToothAngles => {
-  const loadToGrain = foldAngle(m.loadToGrain ?? 0);
-  const axisAngle = Math.atan2(local[1], local[0]);
-  const plateToLoad =
-    loadToGrain === 0
-      ? [foldAngle(axisAngle)]
-      : [foldAngle(axisAngle + loadToGrain), foldAngle(axisAngle - loadToGrain)];
-  return { plateToLoad, loadToGrain, heelFactor: heelFactorOf(joint, m) };
-};
-
-/**
- * HR for the top chord at a heel, from its slope above the bottom chord: the top chord's slope
- * where the bottom chord is level (the standard's case); for a scissor's sloped bottom chord the
- * angle between the chords (our reading, not the standard's words). 1 for every other member.
- */
-const heelFactorOf = (joint: PlateJoint, m: PlateJointMember): number => {
-  if (joint.kind !== 'heel' || m.role !== 'topChord') return 1;
-  const bc = joint.members.find((o) => o.role === 'bottomChord');
-  const slope = (d: { x: number; y: number }) => Math.atan2(d.y, d.x);
-  const relative = bc ? slope(m.direction) - slope(bc.direction) : slope(m.direction);
-  return heelReduction(relative);
-};
-
-/** A member's lateral value on one plate, MPa per face, at the lowest of its angles. */
-const toothValue = (plate: PlateSpec, t: ToothAngles): Trial['angles'][number] => {
-  let best = { plateToLoad: t.plateToLoad[0], value: Infinity };
-  for (const a of t.plateToLoad) {
-    const value = lateralValue(plate, a, t.loadToGrain);
-    if (value < best.value) best = { plateToLoad: a, value };
-  }
-  return {
-    plateToLoad: best.plateToLoad,
-    loadToGrain: t.loadToGrain,
-    lateralValue: best.value * PSI_TO_N_PER_MM2,
-    heelFactor: t.heelFactor,
-  };
-};
-
 /** The check with the largest ratio (teeth win a tie: they are listed first). */
 const governing = (
   checks: MemberPlateCheck[],
@@ -339,7 +289,7 @@ export const designJointPlate = (
       halfDepth: m.depth / 2,
     };
   });
-  const { plates, reach } = sortedPlates(catalog);
+  const { plates, reach, classes } = sortedPlates(catalog);
   const chordHalf = chordHalfDepth(local);
   const endExclusion = options.endExclusion ?? END_EXCLUSION_MM;
   const edgeExclusion = options.edgeExclusion ?? EDGE_EXCLUSION_MM;
@@ -352,7 +302,10 @@ export const designJointPlate = (
   const sections = steelSections(joint.kind, local, joint.members);
   const teeth = joint.members.map((m, i) => toothAngles(joint, m, local[i].direction));
 
-  for (const plate of plates) {
+  // Tooth values and capacities per class of plate values: the same for every plate of a class.
+  const toothOf: { angles: ToothValue[]; perArea: number[] }[] = [];
+  for (let p = 0; p < plates.length; p++) {
+    const plate = plates[p];
     const halfLength = (plate.length * MM_PER_INCH) / 2;
     const halfWidth = (plate.width * MM_PER_INCH) / 2;
     const steel = steelChecks(sections, plate, halfLength, halfWidth);
@@ -364,14 +317,19 @@ export const designJointPlate = (
       };
       continue;
     }
-    const angles = teeth.map((t) => toothValue(plate, t));
+    let tooth = toothOf[classes[p]];
+    if (!tooth) {
+      const angles = teeth.map((t) => toothValue(plate, t));
+      const perArea = angles.map((a) => PLATES_PER_JOINT * a.lateralValue * a.heelFactor * cd);
+      tooth = toothOf[classes[p]] = { angles, perArea };
+    }
     const trial: Trial = {
       joint,
       regions,
       order,
       plate,
-      perArea: angles.map((a) => PLATES_PER_JOINT * a.lateralValue * a.heelFactor * cd),
-      angles,
+      perArea: tooth.perArea,
+      angles: tooth.angles,
       halfLength,
       halfWidth,
       best: { i: order[0], ratio: Infinity },
