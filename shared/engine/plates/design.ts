@@ -159,9 +159,15 @@ interface Trial {
 
 const capacityOf = (t: Trial, i: number, area: number): number => area * t.perArea[i];
 
+/** Moves order[k] to the front (no spread: this runs for most plates tried). */
+const toFront = (order: number[], k: number) => {
+  const [i] = order.splice(k, 1);
+  order.unshift(i);
+};
+
 /** Moves member i to the front of the check order and reports it as the plate's failure. */
 const failing = (t: Trial, i: number, ratio: number): Placement => {
-  t.order.unshift(...t.order.splice(t.order.indexOf(i), 1));
+  toFront(t.order, t.order.indexOf(i));
   return { failure: { member: t.joint.members[i].id, ratio } };
 };
 
@@ -180,7 +186,7 @@ const checksAt = (t: Trial, offset: number, spread: number): MemberPlateCheck[] 
     const ratio = ratioOf(demand, capacity);
     if (ratio > 1) {
       if (spread === 0 && ratio < t.best.ratio) t.best = { i, ratio };
-      if (k > 0) t.order.unshift(...t.order.splice(k, 1));
+      if (k > 0) toFront(t.order, k);
       return undefined;
     }
     // Every field written out: spreading the check and the angles in cost more than the rest.
@@ -247,6 +253,14 @@ const LINE_TEXT: Record<SteelCheck['line'], string> = {
   splice: 'across the splice',
   chordFace: "across the chord's face",
   joint: 'across the joint line',
+};
+
+/** Largest ratio of the tooth and steel checks, at least 0 (as Math.max over all of them). */
+const largestRatio = (checks: MemberPlateCheck[], steel: SteelCheck[]) => {
+  let r = 0;
+  for (const c of checks) r = Math.max(r, c.ratio);
+  for (const s of steel) r = Math.max(r, s.ratio);
+  return r;
 };
 
 /** The check with the largest ratio (teeth win a tie: they are listed first). */
@@ -357,7 +371,7 @@ export const designJointPlate = (
       offset,
       members: checks,
       steel,
-      ratio: Math.max(0, ...checks.map((c) => c.ratio), ...steel.map((s) => s.ratio)),
+      ratio: largestRatio(checks, steel),
       governs: governing(checks, steel),
       demo: catalog.demo,
     };
