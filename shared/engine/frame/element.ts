@@ -30,7 +30,7 @@ export function elementStiffness(
   const b4 = (4 * e * i) / L;
   const b2 = (2 * e * i) / L;
   // prettier-ignore
-  const k = Float64Array.from([
+  const k = new Float64Array([
     ea, 0, 0, -ea, 0, 0,
     0, b12, b6, 0, -b12, b6,
     0, b6, b4, 0, -b6, b2,

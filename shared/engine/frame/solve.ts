@@ -105,6 +105,8 @@ export function solveFrame(p: PreparedFrame, loads: FrameLoads): FrameResult {
   const rhsFull = nodal.slice();
   for (let e = 0; e < nm; e++) {
     const at = 6 * e;
+    // A member without loads (q₀ = 0, most webs) has G·q₀ = 0 and adds nothing: skip it.
+    if (isZero(local.q0, at, 6)) continue;
     for (let r = 0; r < 6; r++) {
       let v = 0;
       for (let c = 0; c < 6; c++) v += p.g[36 * e + r * 6 + c] * local.q0[at + c];
@@ -197,6 +199,12 @@ export function solveFrame(p: PreparedFrame, loads: FrameLoads): FrameResult {
     })),
     residual,
   };
+}
+
+/** True when a[at … at + n − 1] are all 0. */
+function isZero(a: Float64Array, at: number, n: number) {
+  for (let d = at; d < at + n; d++) if (a[d] !== 0) return false;
+  return true;
 }
 
 /** Adds sign·Tᵀ·q (member end forces, global) of member e into the joint vector `into`. */
