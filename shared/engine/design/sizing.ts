@@ -227,7 +227,12 @@ export interface SizingGroup {
  */
 export function sizingGroups(profile: TrussProfile): SizingGroup[] {
   const index = new Map(profile.members.map((m, k) => [m.id, k]));
-  const of = (pieces: Piece[]) => pieces.flatMap((p) => p.members.map((id) => index.get(id)!));
+  // Plain loops, not flatMap: sizing builds its groups on every pass.
+  const of = (pieces: Piece[]) => {
+    const out: number[] = [];
+    for (const p of pieces) for (const id of p.members) out.push(index.get(id)!);
+    return out;
+  };
   const top = profile.pieces.filter((p) => p.role === 'topChord');
   const bottom = profile.pieces.filter((p) => p.role === 'bottomChord');
   const webs = profile.pieces.filter((p) => p.role === 'web');
