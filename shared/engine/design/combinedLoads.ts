@@ -179,5 +179,14 @@ function combine(
       overhangMoment[memberIndex.get(o.member)!] += factor * o.moment;
     for (const p of c.pointLoads ?? []) points.push({ ...p, fy: factor * p.fy });
   }
-  return { ...combo, jointLoads: [...joints.values()], transverse, overhangMoment, points };
+  // Fields written out, not spread from `combo`: the spread cost more than the sums above.
+  return {
+    name: combo.name,
+    cd: combo.cd,
+    terms: combo.terms,
+    jointLoads: [...joints.values()],
+    transverse,
+    overhangMoment,
+    points,
+  };
 }

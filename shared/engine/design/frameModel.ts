@@ -83,7 +83,9 @@ export function designFrame(
         id: m.id,
         from: m.from,
         to: m.to,
-        ...s,
+        e: s.e,
+        a: s.a,
+        i: s.i,
         releaseStart: releases.start[k],
         releaseEnd: releases.end[k],
       };
@@ -100,9 +102,9 @@ function downNormal(
   const a = joints.get(from)!;
   const b = joints.get(to)!;
   const len = Math.hypot(b.x - a.x, b.y - a.y);
-  const n = { x: -(b.y - a.y) / len, y: (b.x - a.x) / len };
-  const down = n.y < 0 || (n.y === 0 && n.x > 0) ? n : { x: -n.x, y: -n.y };
-  return { ...down, len };
+  const x = -(b.y - a.y) / len;
+  const y = (b.x - a.x) / len;
+  return y < 0 || (y === 0 && x > 0) ? { x, y, len } : { x: -x, y: -y, len };
 }
 
 /** What every load set of a profile reuses: member index by id, each member's down normal. */

@@ -14,7 +14,11 @@ export interface ElementStiffness {
   g: Float64Array;
 }
 
-/** Local stiffness of a member with E, A, I, length L, condensed for the released ends. */
+/**
+ * Local stiffness of a member with E, A, I, length L, condensed for the released ends. Written
+ * into `into` at offset `at` when given (a frame keeps all its members in one array: a new
+ * 36-number typed array per member costs more than computing it), else into new arrays.
+ */
 export function elementStiffness(
   e: number,
   a: number,
@@ -22,6 +26,8 @@ export function elementStiffness(
   length: number,
   releaseStart: boolean,
   releaseEnd: boolean,
+  into?: ElementStiffness,
+  at = 0,
 ): ElementStiffness {
   const L = length;
   const ea = (e * a) / L;
@@ -29,19 +35,21 @@ export function elementStiffness(
   const b6 = (6 * e * i) / L ** 2;
   const b4 = (4 * e * i) / L;
   const b2 = (2 * e * i) / L;
+  const k = into?.k ?? new Float64Array(36);
+  const g = into?.g ?? new Float64Array(36);
   // prettier-ignore
-  const k = Float64Array.from([
+  k.set([
     ea, 0, 0, -ea, 0, 0,
     0, b12, b6, 0, -b12, b6,
     0, b6, b4, 0, -b6, b2,
     -ea, 0, 0, ea, 0, 0,
     0, -b12, -b6, 0, b12, -b6,
     0, b6, b2, 0, -b6, b4,
-  ]);
-  const g = new Float64Array(36);
-  for (let d = 0; d < 6; d++) g[d * 6 + d] = 1;
-  if (releaseStart) condense(k, g, 2);
-  if (releaseEnd) condense(k, g, 5);
+  ], at);
+  g.fill(0, at, at + 36);
+  for (let d = 0; d < 6; d++) g[at + d * 6 + d] = 1;
+  if (releaseStart) condense(k, g, at, 2);
+  if (releaseEnd) condense(k, g, at, 5);
   return { k, g };
 }
 
@@ -50,21 +58,21 @@ export function elementStiffness(
  * operations on [k | g]: afterwards k is the condensed stiffness (row and column c zero) and g
  * the operator that carries fixed-end forces over to the released member.
  */
-function condense(k: Float64Array, g: Float64Array, c: number): void {
-  const pivot = k[c * 6 + c];
+function condense(k: Float64Array, g: Float64Array, at: number, c: number): void {
+  const pivot = k[at + c * 6 + c];
   for (let r = 0; r < 6; r++) {
     if (r === c) continue;
-    const f = k[r * 6 + c] / pivot;
+    const f = k[at + r * 6 + c] / pivot;
     if (f === 0) continue;
     for (let col = 0; col < 6; col++) {
-      k[r * 6 + col] -= f * k[c * 6 + col];
-      g[r * 6 + col] -= f * g[c * 6 + col];
+      k[at + r * 6 + col] -= f * k[at + c * 6 + col];
+      g[at + r * 6 + col] -= f * g[at + c * 6 + col];
     }
   }
   for (let col = 0; col < 6; col++) {
-    k[c * 6 + col] = 0;
-    k[col * 6 + c] = 0;
-    g[c * 6 + col] = 0;
+    k[at + c * 6 + col] = 0;
+    k[at + col * 6 + c] = 0;
+    g[at + c * 6 + col] = 0;
   }
 }
 
@@ -108,6 +116,13 @@ export interface LocalPoint {
   py: number;
 }
 
+/** M(x) of `alongMember` (module level, not a closure: it runs for every member of every solve). */
+function momentAt(m0: number, v0: number, py: number, points: readonly LocalPoint[], x: number) {
+  let m = m0 + v0 * x + (py * x * x) / 2;
+  for (const p of points) if (x > p.a) m += p.py * (x - p.a);
+  return m;
+}
+
 /**
  * Moment and shear along a member from its local end forces and loads. M(x) = −M₁ + V₁x +
  * py·x²/2 + Σ Pᵢ·(x − aᵢ)⁺ is the moment sagging + about local y; V(x) = dM/dx. Returns the
@@ -122,11 +137,6 @@ export function alongMember(
 ): { spanMoment: number; maxMoment: number; maxShear: number } {
   const m0 = -q[at + 2];
   const v0 = q[at + 1];
-  const moment = (x: number) => {
-    let m = m0 + v0 * x + (py * x * x) / 2;
-    for (const p of points) if (x > p.a) m += p.py * (x - p.a);
-    return m;
-  };
   let spanMoment = 0;
   let maxShear = 0;
   let start = 0;
@@ -138,10 +148,12 @@ export function alongMember(
     maxShear = Math.max(maxShear, Math.abs(shear), Math.abs(shearEnd));
     if (py !== 0) {
       const x = start - shear / py;
-      if (x > start && x < end) spanMoment = Math.max(spanMoment, Math.abs(moment(x)));
+      if (x > start && x < end)
+        spanMoment = Math.max(spanMoment, Math.abs(momentAt(m0, v0, py, points, x)));
     }
     if (s < cuts.length) {
-      if (end > 0 && end < L) spanMoment = Math.max(spanMoment, Math.abs(moment(end)));
+      if (end > 0 && end < L)
+        spanMoment = Math.max(spanMoment, Math.abs(momentAt(m0, v0, py, points, end)));
       shear = shearEnd + cuts[s].py;
       start = end;
     }

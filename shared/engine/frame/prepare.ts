@@ -78,9 +78,7 @@ export function prepareFrame(model: FrameModel): PreparedFrame {
     length[e] = L;
     cos[e] = dx / L;
     sin[e] = dy / L;
-    const s = elementStiffness(m.e, m.a, m.i, L, !!m.releaseStart, !!m.releaseEnd);
-    k.set(s.k, 36 * e);
-    g.set(s.g, 36 * e);
+    elementStiffness(m.e, m.a, m.i, L, !!m.releaseStart, !!m.releaseEnd, { k, g }, 36 * e);
     if (!m.releaseStart) turns[a] = 1;
     if (!m.releaseEnd) turns[b] = 1;
   });

@@ -22,14 +22,52 @@ const downSign = (c: number, s: number) => {
   return yDown ? 1 : -1;
 };
 
-function localLoads(p: PreparedFrame, loads: FrameLoads): Local {
-  const nm = p.from.length;
-  const out: Local = {
-    px: new Float64Array(nm),
-    py: new Float64Array(nm),
-    points: new Map(),
-    q0: new Float64Array(6 * nm),
-  };
+/**
+ * Scratch arrays of one prepared frame's solves, zeroed and reused by each: a design solves its
+ * frame ten times or more, and a typed array of these sizes costs microseconds to allocate (off
+ * the JavaScript heap). Nothing a solve returns refers to them.
+ */
+interface Workspace {
+  nodal: Float64Array;
+  rhsFull: Float64Array;
+  q: Float64Array;
+  rhs: Float64Array;
+  uFree: Float64Array;
+  u: Float64Array;
+  balance: Float64Array;
+  px: Float64Array;
+  py: Float64Array;
+  q0: Float64Array;
+}
+
+const workspaces = new WeakMap<PreparedFrame, Workspace>();
+
+function workspace(p: PreparedFrame): Workspace {
+  let w = workspaces.get(p);
+  if (!w) {
+    const dofs = 3 * p.model.joints.length;
+    const nm = p.from.length;
+    w = {
+      nodal: new Float64Array(dofs),
+      rhsFull: new Float64Array(dofs),
+      q: new Float64Array(6 * nm),
+      rhs: new Float64Array(p.factors.n),
+      uFree: new Float64Array(p.factors.n),
+      u: new Float64Array(dofs),
+      balance: new Float64Array(dofs),
+      px: new Float64Array(nm),
+      py: new Float64Array(nm),
+      q0: new Float64Array(6 * nm),
+    };
+    workspaces.set(p, w);
+  } else {
+    for (const a of Object.values(w)) a.fill(0);
+  }
+  return w;
+}
+
+function localLoads(p: PreparedFrame, loads: FrameLoads, w: Workspace): Local {
+  const out: Local = { px: w.px, py: w.py, points: new Map(), q0: w.q0 };
   for (const l of loads.members ?? []) {
     const e = p.memberIndex.get(l.member);
     if (e === undefined) {
@@ -83,9 +121,9 @@ function localLoads(p: PreparedFrame, loads: FrameLoads): Local {
  * `unstable` when the check fails.
  */
 export function solveFrame(p: PreparedFrame, loads: FrameLoads): FrameResult {
-  const nj = p.model.joints.length;
   const nm = p.from.length;
-  const nodal = new Float64Array(3 * nj);
+  const w = workspace(p);
+  const nodal = w.nodal;
   let largest = 0;
   for (const l of loads.joints ?? []) {
     const j = p.jointIndex.get(l.joint);
@@ -99,12 +137,15 @@ export function solveFrame(p: PreparedFrame, loads: FrameLoads): FrameResult {
     nodal[3 * j + 1] += fy;
     nodal[3 * j + 2] += m;
   }
-  const local = localLoads(p, loads);
+  const local = localLoads(p, loads, w);
   // Equivalent joint loads: −Tᵀ·G·q₀ of every loaded member.
-  const q = new Float64Array(6 * nm);
-  const rhsFull = Float64Array.from(nodal);
+  const q = w.q;
+  const rhsFull = w.rhsFull;
+  rhsFull.set(nodal);
   for (let e = 0; e < nm; e++) {
     const at = 6 * e;
+    // A member without loads (q₀ = 0, most webs) has G·q₀ = 0 and adds nothing: skip it.
+    if (isZero(local.q0, at, 6)) continue;
     for (let r = 0; r < 6; r++) {
       let v = 0;
       for (let c = 0; c < 6; c++) v += p.g[36 * e + r * 6 + c] * local.q0[at + c];
@@ -116,17 +157,18 @@ export function solveFrame(p: PreparedFrame, loads: FrameLoads): FrameResult {
     if (d % 3 === 2) largest = Math.max(largest, Math.abs(rhsFull[d]) / p.size);
     else largest = Math.max(largest, Math.abs(rhsFull[d]));
   }
-  const n = p.factors.n;
-  const rhs = new Float64Array(n);
+  const rhs = w.rhs;
   for (let d = 0; d < p.free.length; d++) if (p.free[d] >= 0) rhs[p.free[d]] = rhsFull[d];
-  const uFree = new Float64Array(n);
+  const uFree = w.uFree;
   choleskySolve(p.factors, rhs, uFree);
-  const u = new Float64Array(3 * nj);
+  const u = w.u;
   for (let d = 0; d < u.length; d++) if (p.free[d] >= 0) u[d] = uFree[p.free[d]];
 
   // q = k*·T·u + G·q₀ per member. Σ Tᵀ·q − loads is 0 at a free dof and the reaction at a
   // restrained one.
-  const balance = Float64Array.from(nodal, (v) => -v);
+  // A plain loop: Float64Array.from with a map function is several times slower.
+  const balance = w.balance;
+  for (let d = 0; d < nodal.length; d++) balance[d] = -nodal[d];
   const members: FrameMemberResult[] = new Array(nm);
   const ul = new Float64Array(6);
   for (let e = 0; e < nm; e++) {
@@ -195,6 +237,12 @@ export function solveFrame(p: PreparedFrame, loads: FrameLoads): FrameResult {
     })),
     residual,
   };
+}
+
+/** True when a[at … at + n − 1] are all 0. */
+function isZero(a: Float64Array, at: number, n: number) {
+  for (let d = at; d < at + n; d++) if (a[d] !== 0) return false;
+  return true;
 }
 
 /** Adds sign·Tᵀ·q (member end forces, global) of member e into the joint vector `into`. */

@@ -36,6 +36,9 @@ const CM = 1;
 const CT = 1;
 const CI = 1;
 
+// Module level, not a closure: this runs for every member check.
+const toMpa = (p: number) => mpa(p * MPA_PER_PSI);
+
 /** Adjusted design values for a lumber id (NDS 2018 Table 4.3.1, ASD column). */
 export function designValues(lumberId: string, options: DesignValueOptions): DesignValues {
   const { cd, repetitive } = options;
@@ -48,7 +51,6 @@ export function designValues(lumberId: string, options: DesignValueOptions): Des
   const ref = referenceValuesPsi(grade, size);
   const cf = sizeFactors(GRADE_DATA[grade].sizeFactor, dressedSize(size).nominalWidth);
   const cr = repetitive ? REPETITIVE_MEMBER_FACTOR : 1;
-  const toMpa = (p: number) => mpa(p * MPA_PER_PSI);
   return {
     fb: toMpa(ref.fb * cd * CM * CT * cf.fb * CI * cr),
     ft: toMpa(ref.ft * cd * CM * CT * cf.ft * CI),

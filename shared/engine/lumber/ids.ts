@@ -12,8 +12,14 @@ export function lumberIds(): LumberId[] {
   );
 }
 
+// A design parses the same few ids hundreds of times (every member check): canonical ids are
+// parsed once. Only "<size> <grade>" exactly is kept, so arbitrary input cannot grow the cache.
+const parsedIds = new Map<string, Readonly<{ size: LumberSize; grade: LumberGrade }>>();
+
 /** Splits a lumber id into size and grade; throws EngineError('invalid') for anything else. */
-export function parseLumberId(id: string): { size: LumberSize; grade: LumberGrade } {
+export function parseLumberId(id: string): Readonly<{ size: LumberSize; grade: LumberGrade }> {
+  const known = parsedIds.get(id);
+  if (known) return known;
   const [size, grade, ...rest] = id.trim().split(/\s+/);
   if (rest.length > 0 || !size || !grade || !isLumberSize(size) || !isLumberGrade(grade)) {
     throw new EngineError(
@@ -26,7 +32,9 @@ export function parseLumberId(id: string): { size: LumberSize; grade: LumberGrad
       },
     );
   }
-  return { size, grade };
+  const parsed = Object.freeze({ size, grade });
+  if (id === `${size} ${grade}`) parsedIds.set(id, parsed);
+  return parsed;
 }
 
 /** True when `id` parses as a lumber id. */

@@ -162,10 +162,12 @@ export function checkMember(input: MemberCheckInput): MemberCheckResult {
   // The largest ratio governs; on a tie the later (combined) check is reported.
   let governing: GoverningCheck = axial >= 0 ? (moment > 0 ? 'bending' : 'tension') : 'compression';
   let csi = 0;
-  for (const [key, value] of Object.entries(ratios) as [keyof MemberRatios, number][]) {
+  // for…in, not Object.entries: same (insertion) order without allocating pairs per check.
+  for (const key in ratios) {
+    const value = ratios[key as keyof MemberRatios]!;
     if (value >= csi) {
       csi = value;
-      governing = GOVERNING_OF[key];
+      governing = GOVERNING_OF[key as keyof MemberRatios];
     }
   }
   if (axial < 0 && column.governingAxis === 'weak' && leWeak > 0 && csi > 1) {

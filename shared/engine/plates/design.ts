@@ -1,9 +1,9 @@
 import { EngineError } from '../errors';
-import { MM_PER_INCH, N_PER_LBF, TOLERANCE } from '../units';
+import { MM_PER_INCH, TOLERANCE } from '../units';
 import { memberContactRegions, regionAreaInPlate, type LocalMember, type Region } from './contact';
 import type { Point } from './geometry';
-import { foldAngle, heelReduction, lateralValue } from './lateral';
 import { steelChecks, steelSections } from './steel';
+import { toothAngles, toothClasses, toothValue, type ToothValue } from './teeth';
 import type {
   Direction,
   JointPlateDesign,
@@ -11,7 +11,6 @@ import type {
   PlateCatalog,
   PlateDesignOptions,
   PlateJoint,
-  PlateJointMember,
   PlateSpec,
   SteelCheck,
 } from './types';
@@ -20,9 +19,7 @@ import type {
 // not verified, see references §4).
 const END_EXCLUSION_MM = 0.5 * MM_PER_INCH;
 const EDGE_EXCLUSION_MM = 0.25 * MM_PER_INCH;
-const MM2_PER_IN2 = MM_PER_INCH * MM_PER_INCH;
 const PLATES_PER_JOINT = 2;
-const PSI_TO_N_PER_MM2 = N_PER_LBF / MM2_PER_IN2;
 
 const unit = (d: Direction, what: string): Point => {
   const len = Math.hypot(d.x, d.y);
@@ -53,11 +50,8 @@ const plateAxis = (joint: PlateJoint, options: PlateDesignOptions): Point => {
   return x < -TOLERANCE || (Math.abs(x) <= TOLERANCE && y < 0) ? [-x, -y] : [x, y];
 };
 
-const check = (demand: number, capacity: number) => ({
-  demand,
-  capacity,
-  ratio: demand === 0 ? 0 : capacity > 0 ? demand / capacity : Infinity,
-});
+const ratioOf = (demand: number, capacity: number) =>
+  demand === 0 ? 0 : capacity > 0 ? demand / capacity : Infinity;
 
 // Slides are tried on a fixed ¼ in grid (common practice: plates are placed to the nearest
 // ¼ in). The grid does not depend on the plate, and a larger plate may slide at least as far,
@@ -85,7 +79,11 @@ const chordHalfDepth = (local: LocalMember[]) => {
 };
 
 // Each catalog sorted once (catalogs are immutable values), with the reach its largest plate needs.
-const sortedCatalogs = new WeakMap<PlateCatalog, { plates: PlateSpec[]; reach: number }>();
+// Also each plate's class of equal tooth values (`toothClasses`).
+const sortedCatalogs = new WeakMap<
+  PlateCatalog,
+  { plates: PlateSpec[]; reach: number; classes: number[] }
+>();
 const sortedPlates = (catalog: PlateCatalog) => {
   let entry = sortedCatalogs.get(catalog);
   if (!entry) {
@@ -93,7 +91,7 @@ const sortedPlates = (catalog: PlateCatalog) => {
     // Far enough for the corner of any plate slid by up to its own half width.
     const reach =
       Math.max(...plates.map((p) => Math.hypot(2 * p.width, p.length))) * (MM_PER_INCH / 2) + 1;
-    entry = { plates, reach };
+    entry = { plates, reach, classes: toothClasses(plates) };
     sortedCatalogs.set(catalog, entry);
   }
   return entry;
@@ -152,7 +150,7 @@ interface Trial {
   halfLength: number;
   halfWidth: number;
   /** Per member: its angles, lateral value (MPa) and heel factor, for the report. */
-  angles: Omit<MemberPlateCheck, 'member' | 'area' | 'demand' | 'capacity' | 'ratio'>[];
+  angles: ToothValue[];
   /** The member failing by the least at an exact slide, for the message. */
   best: { i: number; ratio: number };
 }
@@ -161,9 +159,15 @@ interface Trial {
 
 const capacityOf = (t: Trial, i: number, area: number): number => area * t.perArea[i];
 
+/** Moves order[k] to the front (no spread: this runs for most plates tried). */
+const toFront = (order: number[], k: number) => {
+  const [i] = order.splice(k, 1);
+  order.unshift(i);
+};
+
 /** Moves member i to the front of the check order and reports it as the plate's failure. */
 const failing = (t: Trial, i: number, ratio: number): Placement => {
-  t.order.unshift(...t.order.splice(t.order.indexOf(i), 1));
+  toFront(t.order, t.order.indexOf(i));
   return { failure: { member: t.joint.members[i].id, ratio } };
 };
 
@@ -177,13 +181,27 @@ const checksAt = (t: Trial, offset: number, spread: number): MemberPlateCheck[] 
   for (let k = 0; k < t.order.length; k++) {
     const i = t.order[k];
     const area = regionAreaInPlate(t.regions[i], t.halfLength, t.halfWidth + spread, offset);
-    const c = check(Math.abs(t.joint.members[i].force), capacityOf(t, i, area));
-    if (c.ratio > 1) {
-      if (spread === 0 && c.ratio < t.best.ratio) t.best = { i, ratio: c.ratio };
-      if (k > 0) t.order.unshift(...t.order.splice(k, 1));
+    const demand = Math.abs(t.joint.members[i].force);
+    const capacity = capacityOf(t, i, area);
+    const ratio = ratioOf(demand, capacity);
+    if (ratio > 1) {
+      if (spread === 0 && ratio < t.best.ratio) t.best = { i, ratio };
+      if (k > 0) toFront(t.order, k);
       return undefined;
     }
-    checks.push({ member: t.joint.members[i].id, area, ...c, ...t.angles[i] });
+    // Every field written out: spreading the check and the angles in cost more than the rest.
+    const a = t.angles[i];
+    checks.push({
+      member: t.joint.members[i].id,
+      area,
+      demand,
+      capacity,
+      ratio,
+      plateToLoad: a.plateToLoad,
+      loadToGrain: a.loadToGrain,
+      lateralValue: a.lateralValue,
+      heelFactor: a.heelFactor,
+    });
   }
   return checks;
 };
@@ -237,55 +255,12 @@ const LINE_TEXT: Record<SteelCheck['line'], string> = {
   joint: 'across the joint line',
 };
 
-/** A member's tooth angles at a joint, independent of the plate size. */
-interface ToothAngles {
-  /** Plate-to-load angles to try (the load at ±θ to the member when θ ≠ 0). */
-  plateToLoad: number[];
-  loadToGrain: number;
-  heelFactor: number;
-}
-
-/**
- * The angles of a member's load at a joint: along its axis (grain) for an axial force, else at
- * `loadToGrain` to it, to either side (the lower value is used). The top chord at a heel takes
- * the heel reduction for its slope.
- */
-const toothAngles = (joint: PlateJoint, m: PlateJointMember, local: Point): ToothAngles => {
-  const loadToGrain = foldAngle(m.loadToGrain ?? 0);
-  const axisAngle = Math.atan2(local[1], local[0]);
-  const plateToLoad =
-    loadToGrain === 0
-      ? [foldAngle(axisAngle)]
-      : [foldAngle(axisAngle + loadToGrain), foldAngle(axisAngle - loadToGrain)];
-  return { plateToLoad, loadToGrain, heelFactor: heelFactorOf(joint, m) };
-};
-
-/**
- * HR for the top chord at a heel, from its slope above the bottom chord: the top chord's slope
- * where the bottom chord is level (the standard's case); for a scissor's sloped bottom chord the
- * angle between the chords (our reading, not the standard's words). 1 for every other member.
- */
-const heelFactorOf = (joint: PlateJoint, m: PlateJointMember): number => {
-  if (joint.kind !== 'heel' || m.role !== 'topChord') return 1;
-  const bc = joint.members.find((o) => o.role === 'bottomChord');
-  const slope = (d: { x: number; y: number }) => Math.atan2(d.y, d.x);
-  const relative = bc ? slope(m.direction) - slope(bc.direction) : slope(m.direction);
-  return heelReduction(relative);
-};
-
-/** A member's lateral value on one plate, MPa per face, at the lowest of its angles. */
-const toothValue = (plate: PlateSpec, t: ToothAngles): Trial['angles'][number] => {
-  let best = { plateToLoad: t.plateToLoad[0], value: Infinity };
-  for (const a of t.plateToLoad) {
-    const value = lateralValue(plate, a, t.loadToGrain);
-    if (value < best.value) best = { plateToLoad: a, value };
-  }
-  return {
-    plateToLoad: best.plateToLoad,
-    loadToGrain: t.loadToGrain,
-    lateralValue: best.value * PSI_TO_N_PER_MM2,
-    heelFactor: t.heelFactor,
-  };
+/** Largest ratio of the tooth and steel checks, at least 0 (as Math.max over all of them). */
+const largestRatio = (checks: MemberPlateCheck[], steel: SteelCheck[]) => {
+  let r = 0;
+  for (const c of checks) r = Math.max(r, c.ratio);
+  for (const s of steel) r = Math.max(r, s.ratio);
+  return r;
 };
 
 /** The check with the largest ratio (teeth win a tie: they are listed first). */
@@ -328,7 +303,7 @@ export const designJointPlate = (
       halfDepth: m.depth / 2,
     };
   });
-  const { plates, reach } = sortedPlates(catalog);
+  const { plates, reach, classes } = sortedPlates(catalog);
   const chordHalf = chordHalfDepth(local);
   const endExclusion = options.endExclusion ?? END_EXCLUSION_MM;
   const edgeExclusion = options.edgeExclusion ?? EDGE_EXCLUSION_MM;
@@ -341,7 +316,10 @@ export const designJointPlate = (
   const sections = steelSections(joint.kind, local, joint.members);
   const teeth = joint.members.map((m, i) => toothAngles(joint, m, local[i].direction));
 
-  for (const plate of plates) {
+  // Tooth values and capacities per class of plate values: the same for every plate of a class.
+  const toothOf: { angles: ToothValue[]; perArea: number[] }[] = [];
+  for (let p = 0; p < plates.length; p++) {
+    const plate = plates[p];
     const halfLength = (plate.length * MM_PER_INCH) / 2;
     const halfWidth = (plate.width * MM_PER_INCH) / 2;
     const steel = steelChecks(sections, plate, halfLength, halfWidth);
@@ -353,14 +331,19 @@ export const designJointPlate = (
       };
       continue;
     }
-    const angles = teeth.map((t) => toothValue(plate, t));
+    let tooth = toothOf[classes[p]];
+    if (!tooth) {
+      const angles = teeth.map((t) => toothValue(plate, t));
+      const perArea = angles.map((a) => PLATES_PER_JOINT * a.lateralValue * a.heelFactor * cd);
+      tooth = toothOf[classes[p]] = { angles, perArea };
+    }
     const trial: Trial = {
       joint,
       regions,
       order,
       plate,
-      perArea: angles.map((a) => PLATES_PER_JOINT * a.lateralValue * a.heelFactor * cd),
-      angles,
+      perArea: tooth.perArea,
+      angles: tooth.angles,
       halfLength,
       halfWidth,
       best: { i: order[0], ratio: Infinity },
@@ -388,7 +371,7 @@ export const designJointPlate = (
       offset,
       members: checks,
       steel,
-      ratio: Math.max(0, ...checks.map((c) => c.ratio), ...steel.map((s) => s.ratio)),
+      ratio: largestRatio(checks, steel),
       governs: governing(checks, steel),
       demo: catalog.demo,
     };
