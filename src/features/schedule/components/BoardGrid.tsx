@@ -48,9 +48,10 @@ const blockClass = (late: boolean) =>
 function BlockFace({ block }: { block: ScheduleBlock }) {
   return (
     <>
-      <div className="truncate font-semibold">
-        {block.number}
-        {block.pinned ? ' ·  moved' : ''}
+      {/* One line each, so every block has the same height: the number gives way to "moved". */}
+      <div className="flex items-baseline gap-1">
+        <span className="truncate font-semibold">{block.number}</span>
+        {block.pinned ? <span className="shrink-0 text-[10px] text-sand-600">· moved</span> : null}
       </div>
       <div className="truncate">{block.customer}</div>
       <div className="truncate">

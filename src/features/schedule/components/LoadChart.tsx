@@ -22,6 +22,8 @@ const tick =
     </text>
   );
 const WEEK_TICK = tick('middle', '0.71em');
+/** A week by its Monday ("30 Nov"), short enough for every week's tick on a tablet. */
+const WEEK = new Intl.DateTimeFormat('en-GB', { day: 'numeric', month: 'short', timeZone: 'UTC' });
 const HOURS_TICK = tick('end', '0.32em', ' h');
 
 /**
@@ -35,14 +37,14 @@ export default function LoadChart({ board }: { board: Load }) {
   for (const l of board.load) {
     const d = new Date(`${l.date}T00:00:00Z`);
     const monday = new Date(d.getTime() - ((d.getUTCDay() + 6) % 7) * 86_400_000);
-    const week = monday.toISOString().slice(5, 10);
-    const w = weeks.get(week) ?? { week, planned: 0, capacity: 0 };
+    const key = monday.toISOString().slice(0, 10);
+    const w = weeks.get(key) ?? { week: WEEK.format(monday), planned: 0, capacity: 0 };
     w.planned += l.used / 60;
     w.capacity += l.capacity / 60;
-    weeks.set(week, w);
+    weeks.set(key, w);
   }
   const data = [...weeks.values()].map((w) => ({
-    week: `Week of ${w.week}`,
+    week: w.week,
     planned: Math.round(w.planned),
     free: Math.max(0, Math.round(w.capacity - w.planned)),
   }));
@@ -51,7 +53,7 @@ export default function LoadChart({ board }: { board: Load }) {
       <BarChart data={data} responsive style={{ width: '100%', height: 232 }}>
         <XAxis dataKey="week" tick={WEEK_TICK} interval={0} />
         <YAxis tick={HOURS_TICK} interval={0} />
-        <Tooltip />
+        <Tooltip labelFormatter={(week) => `Week of ${String(week)}`} />
         <Bar
           dataKey="planned"
           name="Planned hours"
@@ -71,6 +73,7 @@ export default function LoadChart({ board }: { board: Load }) {
             {name}
           </li>
         ))}
+        <li>weeks by their Monday</li>
       </ul>
     </div>
   );
