@@ -95,6 +95,27 @@ describe('production in a browser', () => {
     await page.screenshot({ path: `${SCREENSHOTS}/schedule-board.png`, fullPage: true });
   });
 
+  it('the foreman moves an order a day back with the keyboard alone', async () => {
+    const page = await browser.newPage();
+    await page.setViewportSize({ width: 1024, height: 768 });
+    await signIn(page, foreman);
+    await page.goto(`${base}/schedule`);
+    // Where the drag above left it: South, two days on.
+    const from = addCalendarDays(today, 2);
+    const block = page.getByTestId(`block-${moves.id}-${from}`);
+    await block.focus();
+    await page.keyboard.press('Space');
+    // The keyboard moves the block 25 px a press; a day's column is 136 px wide.
+    for (let i = 0; i < 6; i++) await page.keyboard.press('ArrowLeft');
+    await page.screenshot({ path: `${SCREENSHOTS}/schedule-board-keyboard.png` });
+    await page.keyboard.press('Space');
+    const target = addCalendarDays(today, 1);
+    await page.getByTestId(`block-${moves.id}-${target}`).waitFor();
+    await expect
+      .poll(async () => (await Order.findByPk(moves.id))!.schedulePin)
+      .toEqual({ tableId: 2, date: target });
+  });
+
   it('records progress on the tablet page, also while the network is away', async () => {
     const page = await browser.newPage();
     await page.setViewportSize({ width: 1024, height: 768 });

@@ -1,5 +1,6 @@
 import {
   DndContext,
+  DragOverlay,
   KeyboardSensor,
   PointerSensor,
   useDraggable,
@@ -7,6 +8,7 @@ import {
   useSensor,
   useSensors,
   type DragEndEvent,
+  type DragStartEvent,
 } from '@dnd-kit/core';
 import clsx from 'clsx';
 import { memo, startTransition, useEffect, useState } from 'react';
@@ -18,8 +20,46 @@ import { hours } from './board-warnings';
 const STEP = 5;
 const TABLE_COLUMN = 112;
 const DAY_COLUMN = 136;
+/** A block's height (three 16 px lines, padding, border) and the gap below it, in px. */
+const BLOCK = 58;
+const BLOCK_GAP = 4;
+/** The load bar's line above a day's blocks, and the least height of a table's row. */
+const LOAD_LINE = 20;
+const MIN_ROW = 104;
+
+/**
+ * The height of a table's cells: the fullest of its days, the same for every day. Fixed heights
+ * let each cell skip its contents' style, layout and paint while off screen
+ * (`content-visibility: auto`) without its row changing height when it scrolls into view.
+ */
+const rowHeight = (most: number) => Math.max(MIN_ROW, LOAD_LINE + most * (BLOCK + BLOCK_GAP));
 
 type Select = (block: ScheduleBlock) => void;
+
+/** How a block looks, on the grid and under the pointer while dragged. */
+const blockClass = (late: boolean) =>
+  clsx(
+    'overflow-hidden rounded border px-2 py-1 text-xs leading-4 shadow-sm',
+    late
+      ? 'border-danger-200 bg-danger-50 text-danger-800'
+      : 'border-timber-200 bg-timber-50 text-sand-900',
+  );
+
+function BlockFace({ block }: { block: ScheduleBlock }) {
+  return (
+    <>
+      {/* One line each, so every block has the same height: the number gives way to "moved". */}
+      <div className="flex items-baseline gap-1">
+        <span className="truncate font-semibold">{block.number}</span>
+        {block.pinned ? <span className="shrink-0 text-[10px] text-sand-600">· moved</span> : null}
+      </div>
+      <div className="truncate">{block.customer}</div>
+      <div className="truncate">
+        {block.marks.join(', ')} · {block.trusses} · {hours(block.minutes)}
+      </div>
+    </>
+  );
+}
 
 const Block = memo(function Block({
   block,
@@ -34,7 +74,9 @@ const Block = memo(function Block({
   selected: boolean;
   onSelect: Select;
 }) {
-  const { attributes, listeners, setNodeRef, transform, isDragging } = useDraggable({
+  // While dragged the block stays in place, faded; a copy follows the pointer (DragOverlay), as
+  // the cell's containment clips anything drawn outside it.
+  const { attributes, listeners, setNodeRef, isDragging } = useDraggable({
     id: `${block.orderId}|${block.tableId}|${block.date}`,
     data: block,
     disabled: !canMove,
@@ -47,26 +89,17 @@ const Block = memo(function Block({
       // A tap without a drag (the pointer sensor waits for 6 px) opens the order's panel.
       onClick={() => onSelect(block)}
       data-testid={`block-${block.orderId}-${block.date}`}
-      style={transform ? { transform: `translate(${transform.x}px, ${transform.y}px)` } : undefined}
+      style={{ height: BLOCK, marginBottom: BLOCK_GAP }}
       className={clsx(
-        'mb-1 cursor-pointer rounded border px-2 py-1 text-xs shadow-sm',
-        late
-          ? 'border-danger-200 bg-danger-50 text-danger-800'
-          : 'border-timber-200 bg-timber-50 text-sand-900',
+        blockClass(late),
+        'cursor-pointer',
         canMove && 'cursor-grab touch-none',
         selected && 'ring-2 ring-focus',
-        isDragging && 'relative z-10 opacity-80',
+        isDragging && 'opacity-40',
       )}
       aria-label={`Order ${block.number}, ${block.trusses} trusses, ${hours(block.minutes)}${late ? ', late' : ''}`}
     >
-      <div className="font-semibold">
-        {block.number}
-        {block.pinned ? ' ·  moved' : ''}
-      </div>
-      <div className="truncate">{block.customer}</div>
-      <div className="truncate">
-        {block.marks.join(', ')} · {block.trusses} · {hours(block.minutes)}
-      </div>
+      <BlockFace block={block} />
     </div>
   );
 });
@@ -76,6 +109,7 @@ const NO_BLOCKS: ScheduleBlock[] = [];
 const Cell = memo(function Cell({
   tableId,
   date,
+  height,
   load,
   blocks,
   late,
@@ -85,6 +119,7 @@ const Cell = memo(function Cell({
 }: {
   tableId: number;
   date: string;
+  height: number;
   load: Schedule['load'][number] | undefined;
   blocks: ScheduleBlock[];
   late: Set<number>;
@@ -101,27 +136,29 @@ const Cell = memo(function Cell({
     <td
       ref={setNodeRef}
       data-testid={`cell-${tableId}-${date}`}
-      className={clsx('h-28 border border-sand-200 p-1 align-top', isOver && 'bg-info-50')}
+      className={clsx('border border-sand-200 p-1 align-top', isOver && 'bg-info-50')}
     >
-      <div className="mb-1 flex items-center gap-1 text-[11px] text-sand-600">
-        <div className="h-1.5 flex-1 rounded bg-sand-100">
-          <div
-            className={clsx('h-1.5 rounded', share > 0.999 ? 'bg-warning-700' : 'bg-success-700')}
-            style={{ width: `${Math.min(100, share * 100)}%` }}
-          />
+      <div style={{ height, contentVisibility: 'auto' }}>
+        <div className="mb-1 flex h-4 items-center gap-1 text-[11px] leading-4 text-sand-600">
+          <div className="h-1.5 flex-1 rounded bg-sand-100">
+            <div
+              className={clsx('h-1.5 rounded', share > 0.999 ? 'bg-warning-700' : 'bg-success-700')}
+              style={{ width: `${Math.min(100, share * 100)}%` }}
+            />
+          </div>
+          {load ? `${hours(load.used)} / ${hours(load.capacity)}` : null}
         </div>
-        {load ? `${hours(load.used)} / ${hours(load.capacity)}` : null}
+        {blocks.map((b) => (
+          <Block
+            key={`${b.orderId}-${b.date}`}
+            block={b}
+            late={late.has(b.orderId)}
+            canMove={canMove}
+            selected={b.orderId === selectedOrder}
+            onSelect={onSelect}
+          />
+        ))}
       </div>
-      {blocks.map((b) => (
-        <Block
-          key={`${b.orderId}-${b.date}`}
-          block={b}
-          late={late.has(b.orderId)}
-          canMove={canMove}
-          selected={b.orderId === selectedOrder}
-          onSelect={onSelect}
-        />
-      ))}
     </td>
   );
 });
@@ -172,7 +209,11 @@ export function BoardGrid({
   useEffect(() => {
     if (complete) onComplete?.();
   }, [complete, onComplete]);
+  const [dragged, setDragged] = useState<ScheduleBlock | null>(null);
+  const onDragStart = (e: DragStartEvent) =>
+    setDragged((e.active.data.current as ScheduleBlock | undefined) ?? null);
   const onDragEnd = (e: DragEndEvent) => {
+    setDragged(null);
     const block = e.active.data.current as ScheduleBlock | undefined;
     const target = e.over?.data.current as { tableId: number; date: string } | undefined;
     if (!block || !target) return;
@@ -180,7 +221,12 @@ export function BoardGrid({
     onDrop(block, target);
   };
   return (
-    <DndContext sensors={sensors} onDragEnd={onDragEnd}>
+    <DndContext
+      sensors={sensors}
+      onDragStart={onDragStart}
+      onDragEnd={onDragEnd}
+      onDragCancel={() => setDragged(null)}
+    >
       <table
         className="table-fixed border-collapse text-sm"
         style={{ width: `max(100%, ${TABLE_COLUMN + DAY_COLUMN * board.days.length}px)` }}
@@ -217,6 +263,7 @@ export function BoardGrid({
                     key={d}
                     tableId={t.id}
                     date={d}
+                    height={rowHeight(index.most.get(t.id) ?? 0)}
                     load={index.load.get(k)}
                     blocks={index.blocks.get(k) ?? NO_BLOCKS}
                     late={index.late}
@@ -230,6 +277,18 @@ export function BoardGrid({
           ))}
         </tbody>
       </table>
+      <DragOverlay dropAnimation={null}>
+        {dragged ? (
+          <div
+            className={clsx(
+              blockClass(index.late.has(dragged.orderId)),
+              'cursor-grabbing shadow-lg',
+            )}
+          >
+            <BlockFace block={dragged} />
+          </div>
+        ) : null}
+      </DragOverlay>
     </DndContext>
   );
 }

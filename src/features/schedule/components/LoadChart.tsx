@@ -1,59 +1,80 @@
-import {
-  Bar,
-  BarChart,
-  CartesianGrid,
-  Legend,
-  ResponsiveContainer,
-  Tooltip,
-  XAxis,
-  YAxis,
-} from 'recharts';
+import { Bar, BarChart, Tooltip, XAxis, YAxis } from 'recharts';
 import type { Schedule } from '../../../../shared/api/production';
 
 type Load = Pick<Schedule, 'load'>;
 
-/** Weekly planned hours against capacity, all tables together (lazy-loaded with recharts). */
+const PLANNED = '#744b2b';
+const FREE = '#dfc4a8';
+
+interface TickProps {
+  x: string | number;
+  y: string | number;
+  payload: { value: string | number };
+}
+
+/** An axis label as plain SVG text: recharts' own measures each word in the DOM to wrap it. */
+const tick =
+  (anchor: 'middle' | 'end', dy: string, unit = '') =>
+  ({ x, y, payload }: TickProps) => (
+    <text x={x} y={y} dy={dy} textAnchor={anchor} fontSize={12} fill="#6b6259">
+      {payload.value}
+      {unit}
+    </text>
+  );
+const WEEK_TICK = tick('middle', '0.71em');
+/** A week by its Monday ("30 Nov"), short enough for every week's tick on a tablet. */
+const WEEK = new Intl.DateTimeFormat('en-GB', { day: 'numeric', month: 'short', timeZone: 'UTC' });
+const HOURS_TICK = tick('end', '0.32em', ' h');
+
+/**
+ * Weekly planned hours against capacity, all tables together (lazy-loaded with recharts). Kept
+ * lean, as it is drawn beside a full board: every axis tick shown (`interval={0}`), ticks as plain
+ * text and no grid lines, so recharts measures no label in the DOM (each a forced layout of the
+ * whole page); the legend is plain HTML; the chart sizes itself to its box (`responsive`).
+ */
 export default function LoadChart({ board }: { board: Load }) {
   const weeks = new Map<string, { week: string; planned: number; capacity: number }>();
   for (const l of board.load) {
     const d = new Date(`${l.date}T00:00:00Z`);
     const monday = new Date(d.getTime() - ((d.getUTCDay() + 6) % 7) * 86_400_000);
-    const week = monday.toISOString().slice(5, 10);
-    const w = weeks.get(week) ?? { week, planned: 0, capacity: 0 };
+    const key = monday.toISOString().slice(0, 10);
+    const w = weeks.get(key) ?? { week: WEEK.format(monday), planned: 0, capacity: 0 };
     w.planned += l.used / 60;
     w.capacity += l.capacity / 60;
-    weeks.set(week, w);
+    weeks.set(key, w);
   }
   const data = [...weeks.values()].map((w) => ({
-    week: `Week of ${w.week}`,
+    week: w.week,
     planned: Math.round(w.planned),
     free: Math.max(0, Math.round(w.capacity - w.planned)),
   }));
   return (
-    <div className="h-64" aria-label="Planned hours against capacity by week">
-      <ResponsiveContainer width="100%" height="100%">
-        <BarChart data={data}>
-          <CartesianGrid strokeDasharray="3 3" stroke="#e7e0d5" />
-          <XAxis dataKey="week" tick={{ fontSize: 12 }} />
-          <YAxis unit=" h" tick={{ fontSize: 12 }} />
-          <Tooltip />
-          <Legend />
-          <Bar
-            dataKey="planned"
-            name="Planned hours"
-            stackId="a"
-            fill="#744b2b"
-            isAnimationActive={false}
-          />
-          <Bar
-            dataKey="free"
-            name="Free hours"
-            stackId="a"
-            fill="#dfc4a8"
-            isAnimationActive={false}
-          />
-        </BarChart>
-      </ResponsiveContainer>
+    <div data-testid="load-chart" aria-label="Planned hours against capacity by week">
+      <BarChart data={data} responsive style={{ width: '100%', height: 232 }}>
+        <XAxis dataKey="week" tick={WEEK_TICK} interval={0} />
+        <YAxis tick={HOURS_TICK} interval={0} />
+        <Tooltip labelFormatter={(week) => `Week of ${String(week)}`} />
+        <Bar
+          dataKey="planned"
+          name="Planned hours"
+          stackId="a"
+          fill={PLANNED}
+          isAnimationActive={false}
+        />
+        <Bar dataKey="free" name="Free hours" stackId="a" fill={FREE} isAnimationActive={false} />
+      </BarChart>
+      <ul className="flex justify-center gap-4 text-sm text-sand-700">
+        {[
+          ['Planned hours', PLANNED],
+          ['Free hours', FREE],
+        ].map(([name, colour]) => (
+          <li key={name} className="flex items-center gap-1.5">
+            <span className="inline-block size-3" style={{ background: colour }} aria-hidden />
+            {name}
+          </li>
+        ))}
+        <li>weeks by their Monday</li>
+      </ul>
     </div>
   );
 }

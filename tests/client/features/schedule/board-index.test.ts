@@ -47,6 +47,10 @@ describe('the board index', () => {
     expect([...index.late]).toEqual([2]);
   });
 
+  it('counts the most blocks on one day per table (the height of its row)', () => {
+    expect(indexBoard(board).most).toEqual(new Map([[1, 2]]));
+  });
+
   it('heads each day with its weekday, day and month (UTC, whatever the device’s zone)', () => {
     const index = indexBoard(board);
     expect(index.dayLabels.get('2026-12-07')).toBe('Mon 7 Dec');
