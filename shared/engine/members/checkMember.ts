@@ -159,16 +159,14 @@ export function checkMember(input: MemberCheckInput): MemberCheckResult {
   }
   if (input.shear) ratios.shear = shearStress(input.shear, section.area) / dv.fv;
 
-  // The largest ratio governs; on a tie the later (combined) check is reported.
-  let governing: GoverningCheck = axial >= 0 ? (moment > 0 ? 'bending' : 'tension') : 'compression';
-  let csi = 0;
-  for (const [key, value] of Object.entries(ratios) as [keyof MemberRatios, number][]) {
-    if (value >= csi) {
-      csi = value;
-      governing = GOVERNING_OF[key];
-    }
-  }
-  if (axial < 0 && column.governingAxis === 'weak' && leWeak > 0 && csi > 1) {
+  // The largest ratio governs; on a tie the later (combined) check is reported. Every branch
+  // above sets at least one ratio, so the first entry seeds the search.
+  const [governingKey, csi] = (Object.entries(ratios) as [keyof MemberRatios, number][]).reduce(
+    (best, entry) => (entry[1] >= best[1] ? entry : best),
+  );
+  const governing = GOVERNING_OF[governingKey];
+  // Weak-axis governing implies leWeak > 0 (a braced axis has Cp = 1 and never governs).
+  if (axial < 0 && column.governingAxis === 'weak' && csi > 1) {
     notes.push('Weak-axis buckling governs Fc′: a lateral brace would shorten le (weak).');
   }
 
