@@ -43,6 +43,14 @@ describe('wind case loads on the truss, by hand (N, mm; + up, + right)', () => {
     // Cantilever moments (+ = gravity): −w·s²/2 with s² = 600² + 200², plus the soffit −w·a²/2.
     expect(moment(c, 'left').moment).toBeWithin(-0.192 * 200_000 - 0.42 * 180_000);
     expect(moment(c, 'right').moment).toBeWithin(-0.072 * 200_000);
+    // Across each top-chord member: the net pressure × spacing, outward (− along the downward
+    // normal); the overhang and soffit add no line load inside the span.
+    expect(c.memberLoads.map((l) => [l.member, l.transverse])).toEqual([
+      ['AB', expect.closeTo(-0.3, 12)],
+      ['BC', expect.closeTo(-0.3, 12)],
+      ['CD', expect.closeTo(-0.18, 12)],
+      ['DE', expect.closeTo(-0.18, 12)],
+    ]);
     const heel = c.jointLoads.find((j) => j.joint === 'A')!;
     // A: half of AB's normal force, the overhang top and the soffit.
     expect(heel.fy).toBeWithin(0.3 * 750 + 115.2 + 252);
