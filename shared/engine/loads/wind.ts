@@ -166,13 +166,14 @@ export function windCaseLoads(profile: TrussProfile, spacing: Mm, wind: WindCase
       windUplift: kpa(1),
     }).W;
   };
+  // The overhang alone: its top chord stays (the overhang takes its direction from the member
+  // it continues) but as an unloaded member, so only the overhang carries the pressure.
   const overhangOnly = (side: RoofSide) => {
     const p = sideProfile(profile, side);
-    return areaLoadCases(
-      { ...p, members: p.members.filter((m) => m.role !== 'topChord') },
-      spacing,
-      { windUplift: kpa(1) },
-    ).W;
+    const members = p.members.map((m) =>
+      m.role === 'topChord' ? { ...m, role: 'web' as const } : m,
+    );
+    return areaLoadCases({ ...p, members }, spacing, { windUplift: kpa(1) }).W;
   };
   const external = (side: RoofSide) => (side === wind.windFrom ? wind.windward : wind.leeward);
   const parts: CaseLoads[] = [];

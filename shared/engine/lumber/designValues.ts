@@ -30,11 +30,9 @@ export interface DesignValues {
   factors: { cd: number; cfB: number; cfT: number; cfC: number; cr: number };
 }
 
-// CM, Ct and Ci are 1.0 for the dry, enclosed, non-incised truss lumber Spanwise designs; they
-// are kept as named constants so a wet-service option has one place to go.
-const CM = 1;
-const CT = 1;
-const CI = 1;
+// CM, Ct and Ci (NDS 2018 Table 4.3.1) are 1.0 for the dry, enclosed, non-incised truss lumber
+// Spanwise designs, so they are not multiplied in (a factor of 1 would only add equivalent
+// mutants); a wet-service or temperature option would add them to each line below.
 
 // Module level, not a closure: this runs for every member check.
 const toMpa = (p: number) => mpa(p * MPA_PER_PSI);
@@ -52,13 +50,13 @@ export function designValues(lumberId: string, options: DesignValueOptions): Des
   const cf = sizeFactors(GRADE_DATA[grade].sizeFactor, dressedSize(size).nominalWidth);
   const cr = repetitive ? REPETITIVE_MEMBER_FACTOR : 1;
   return {
-    fb: toMpa(ref.fb * cd * CM * CT * cf.fb * CI * cr),
-    ft: toMpa(ref.ft * cd * CM * CT * cf.ft * CI),
-    fv: toMpa(ref.fv * cd * CM * CT * CI),
-    fcStar: toMpa(ref.fc * cd * CM * CT * cf.fc * CI),
-    fcPerp: toMpa(ref.fcPerp * CM * CT * CI),
-    e: toMpa(ref.e * CM * CT * CI),
-    emin: toMpa(ref.emin * CM * CT * CI),
+    fb: toMpa(ref.fb * cd * cf.fb * cr),
+    ft: toMpa(ref.ft * cd * cf.ft),
+    fv: toMpa(ref.fv * cd),
+    fcStar: toMpa(ref.fc * cd * cf.fc),
+    fcPerp: toMpa(ref.fcPerp),
+    e: toMpa(ref.e),
+    emin: toMpa(ref.emin),
     factors: { cd, cfB: cf.fb, cfT: cf.ft, cfC: cf.fc, cr },
   };
 }

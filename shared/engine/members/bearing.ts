@@ -33,6 +33,7 @@ export function checkBearing(input: BearingInput): BearingResult {
   const { size } = parseLumberId(lumberId);
   const cb = bearingAreaFactor(bearingLength, distanceFromEnd);
   // Fc⊥ takes no CD (NDS 2018 Table 4.3.1), so any CD gives the same value here.
+  // Stryker disable next-line BooleanLiteral: Cr multiplies Fb only (NDS 2018 4.3.9), never Fc⊥.
   const fcPerpPrime = designValues(lumberId, { cd: 1, repetitive: false }).fcPerp * cb;
   const stress = Math.abs(reaction) / (plies * dressedSize(size).thickness * bearingLength);
   return { ratio: stress / fcPerpPrime, stress, fcPerpPrime, cb };

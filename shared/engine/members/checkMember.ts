@@ -159,10 +159,11 @@ export function checkMember(input: MemberCheckInput): MemberCheckResult {
   }
   if (input.shear) ratios.shear = shearStress(input.shear, section.area) / dv.fv;
 
-  // The largest ratio governs; on a tie the later (combined) check is reported.
-  let governing: GoverningCheck = axial >= 0 ? (moment > 0 ? 'bending' : 'tension') : 'compression';
-  let csi = 0;
-  // for…in, not Object.entries: same (insertion) order without allocating pairs per check.
+  // The largest ratio governs; on a tie the later (combined) check is reported. Every branch
+  // above sets at least one ratio, so the first one seeds the search. for…in, not
+  // Object.entries: the same (insertion) order without allocating pairs per check.
+  let governing: GoverningCheck = 'tension';
+  let csi = -Infinity;
   for (const key in ratios) {
     const value = ratios[key as keyof MemberRatios]!;
     if (value >= csi) {
@@ -170,7 +171,8 @@ export function checkMember(input: MemberCheckInput): MemberCheckResult {
       governing = GOVERNING_OF[key as keyof MemberRatios];
     }
   }
-  if (axial < 0 && column.governingAxis === 'weak' && leWeak > 0 && csi > 1) {
+  // Weak-axis governing implies leWeak > 0 (a braced axis has Cp = 1 and never governs).
+  if (axial < 0 && column.governingAxis === 'weak' && csi > 1) {
     notes.push('Weak-axis buckling governs Fc′: a lateral brace would shorten le (weak).');
   }
 

@@ -37,6 +37,7 @@ export function checkShear(input: ShearCheckInput): ShearCheckResult {
   }
   const area = sectionProperties(parseLumberId(lumberId).size, plies).area;
   const fv = shearStress(shear, area);
+  // Stryker disable next-line BooleanLiteral: Cr multiplies Fb only (NDS 2018 4.3.9), never Fv.
   const fvPrime = designValues(lumberId, { cd, repetitive: false }).fv;
   return { fv, fvPrime, ratio: fv / fvPrime };
 }

@@ -15,10 +15,13 @@ import { generateProfile } from '../../../../shared/engine/profiles';
 import { engineInput, lightFink, TYPICAL_LOADS } from './support/inputs';
 
 describe('deflection', () => {
-  const input = engineInput(lightFink({ loads: { ...TYPICAL_LOADS, snow: { pg: 30 } } }));
-  const d = designTruss(input);
-  const profile = generateProfile({ ...input.profile, heelHeight: d.heelHeight.analysed });
-  const cases = designLoads(input, profile, '7-16').cases;
+  // Built inside each test: the mutation run (README) only sees engine code a test itself runs.
+  const setup = () => {
+    const input = engineInput(lightFink({ loads: { ...TYPICAL_LOADS, snow: { pg: 30 } } }));
+    const d = designTruss(input);
+    const profile = generateProfile({ ...input.profile, heelHeight: d.heelHeight.analysed });
+    return { input, d, profile, cases: designLoads(input, profile, '7-16').cases };
+  };
 
   it('EA is E × A × plies of the chosen lumber (NDS 2018 Supplement Table 1B section)', () => {
     const e = designValues('2x4 SPF-1/2', { cd: 1, repetitive: false }).e;
@@ -28,6 +31,7 @@ describe('deflection', () => {
   });
 
   it('uses the live case that deflects most and D plus that case for total', () => {
+    const { d } = setup();
     // pg = 30 psf gives ps = 21 psf on a 4/12 warm roof (ASCE 7-16, references §3), above the
     // 20 psf roof live load: snow governs.
     expect(d.deflection.liveCase).toBe('S');
@@ -37,6 +41,7 @@ describe('deflection', () => {
   });
 
   it('reports the frame Δ of D + S with the designed lumber at every bottom-chord joint', () => {
+    const { input, d, profile, cases } = setup();
     const frame = designFrame(
       profile,
       d.members.map((m) => m.lumber),
@@ -58,6 +63,7 @@ describe('deflection', () => {
   });
 
   it('with every moment released the frame Δ is the unit-load (virtual work) Δ of the truss', () => {
+    const { input, d, profile, cases } = setup();
     const lumber = d.members.map((m) => m.lumber);
     const frame = prepareFrame({
       joints: profile.joints,
@@ -91,6 +97,7 @@ describe('deflection', () => {
   });
 
   it('reports the largest drop, where, span/Δ and the pass against span/n', () => {
+    const { d, profile } = setup();
     const total = d.deflection.total;
     const drops = d.deflection.bottomChord.map((b) => b.total);
     expect(total.max).toBe(Math.max(...drops));

@@ -8,15 +8,19 @@ import { generateProfile } from '../../../../shared/engine/profiles';
 import { engineInput, lightFink } from './support/inputs';
 
 // The light Fink of common practice: 24 ft 4/12, 20/10/0/10 psf, 24 in o.c., 12 in overhangs.
-const input = engineInput(lightFink());
-const profile = generateProfile({ ...input.profile, heelHeight: 0 });
-const loads = designLoads(input, profile, '7-16');
-const m = profile.members.length;
-const frame = designFrame(profile, new Array<string>(m).fill('2x4 SPF-1/2'), input.plies);
-const demands = memberDemands(profile, loads.combinations, frame);
+// Built inside each test: the mutation run (README) only sees engine code a test itself runs.
+function setup() {
+  const input = engineInput(lightFink());
+  const profile = generateProfile({ ...input.profile, heelHeight: 0 });
+  const loads = designLoads(input, profile, '7-16');
+  const m = profile.members.length;
+  const frame = designFrame(profile, new Array<string>(m).fill('2x4 SPF-1/2'), input.plies);
+  return { profile, loads, m, frame, demands: memberDemands(profile, loads.combinations, frame) };
+}
 
 describe('member demands with continuous chords', () => {
   it('uses the larger of the span and support moments, and no bending on webs', () => {
+    const { profile, m, demands } = setup();
     for (let i = 0; i < demands.combinations; i++) {
       profile.members.forEach((mb, k) => {
         const at = i * m + k;
@@ -32,6 +36,7 @@ describe('member demands with continuous chords', () => {
   it('combines the cases linearly with the combination factors, like the axial forces', () => {
     // End moments and axial forces are linear in the loads; the reported panel-point moment is
     // the larger end of the combined signed end moments.
+    const { profile, loads, m, frame, demands } = setup();
     const perCase = new Map(
       (['D', 'Lr'] as const).map((id) => [
         id,

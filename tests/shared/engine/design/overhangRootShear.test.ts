@@ -46,10 +46,12 @@ describe('overhang root shear', () => {
     transverse: new Float64Array(m),
     overhangMoment,
   };
-  const frame = designFrame(profile, Array(m).fill('2x4 SPF-1/2'), 1);
-  const demands = memberDemands(profile, [combo], frame);
+  // Computed inside each test: the mutation run (README) only sees engine code a test runs.
+  const demandsOf = () =>
+    memberDemands(profile, [combo], designFrame(profile, Array(m).fill('2x4 SPF-1/2'), 1));
 
   it('the panel carries M/L, the root w⊥s; the member is checked with the root shear', () => {
+    const demands = demandsOf();
     expect(V).toBeWithin(111.8, { abs: 0.05 });
     expect(left.slopeLength / MM_PER_IN).toBeWithin(s, { rel: 1e-9 });
     expect(M / L).toBeLessThan(V);
@@ -60,6 +62,7 @@ describe('overhang root shear', () => {
   });
 
   it('fv = 3V/(2bd) = 31.9 psi against Fv′ = 135 psi × CD 1.6', () => {
+    const demands = demandsOf();
     const fv = (3 * V) / (2 * 1.5 * 3.5);
     expect(fv).toBeWithin(31.94, { abs: 0.01 });
     const r = checkShear({ lumberId: '2x4 SPF-1/2', plies: 1, shear: demands.shear[k], cd: 1.6 });

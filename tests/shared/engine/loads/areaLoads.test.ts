@@ -1,62 +1,7 @@
 import { describe, expect, it } from 'vitest';
 import { areaLoadCases, type CaseLoads } from '../../../../shared/engine/loads';
-import type { TrussProfile } from '../../../../shared/engine/profiles/types';
+import { cos, overhangSlope, profile } from './support/finkProfile';
 import { kpa, mm } from '../../../../shared/engine/units';
-
-// A small Fink-style profile built by hand (demo geometry): span 6000 mm, rise 1000 mm
-// (4:12), pointed heels at A and E, 600 mm horizontal overhang each side.
-const cos = 3 / Math.sqrt(10); // 4:12 slope
-const overhangSlope = 600 / cos;
-const profile: TrussProfile = {
-  params: {
-    kind: 'fink',
-    span: 6000,
-    pitch: 4,
-    heelHeight: 0,
-    overhangLeft: 600,
-    overhangRight: 600,
-  },
-  joints: [
-    { id: 'A', x: 0, y: 0 },
-    { id: 'B', x: 1500, y: 500 },
-    { id: 'C', x: 3000, y: 1000 },
-    { id: 'D', x: 4500, y: 500 },
-    { id: 'E', x: 6000, y: 0 },
-    { id: 'F', x: 2000, y: 0 },
-    { id: 'G', x: 4000, y: 0 },
-  ],
-  members: [
-    ['A', 'B', 'topChord'],
-    ['B', 'C', 'topChord'],
-    ['C', 'D', 'topChord'],
-    ['D', 'E', 'topChord'],
-    ['A', 'F', 'bottomChord'],
-    ['F', 'G', 'bottomChord'],
-    ['G', 'E', 'bottomChord'],
-    ['B', 'F', 'web'],
-    ['C', 'F', 'web'],
-    ['C', 'G', 'web'],
-    ['D', 'G', 'web'],
-  ].map(([from, to, role]) => ({
-    id: from + to,
-    from,
-    to,
-    role: role as 'topChord' | 'bottomChord' | 'web',
-    length: 0,
-  })),
-  supports: [
-    { joint: 'A', type: 'pin' },
-    { joint: 'E', type: 'roller', normal: 'y' },
-  ],
-  pieces: [],
-  overhangs: [
-    { side: 'left', heelJoint: 'A', horizontal: 600, slopeLength: overhangSlope, member: 'AB' },
-    { side: 'right', heelJoint: 'E', horizontal: 600, slopeLength: overhangSlope, member: 'DE' },
-  ],
-  topChordJoints: ['A', 'B', 'C', 'D', 'E'],
-  bottomChordJoints: ['A', 'F', 'G', 'E'],
-  rise: 1000,
-};
 
 const spacing = mm(600);
 const at = (c: CaseLoads | undefined, joint: string) =>
@@ -70,68 +15,69 @@ const line = (c: CaseLoads | undefined, member: string) =>
   c!.memberLoads.find((m) => m.member === member)!.transverse;
 
 describe('area loads to panel points (hand calcs, common practice tributary lumping)', () => {
-  // 1 kPa × 600 mm = 0.6 N/mm.
-  const cases = areaLoadCases(profile, spacing, {
-    tcll: kpa(1),
-    tcdl: kpa(0.5),
-    bcdl: kpa(0.5),
-    windUplift: kpa(0.4),
-  });
+  // 1 kPa × 600 mm = 0.6 N/mm. Built inside each test: the mutation run only sees code a test runs.
+  const cases = () =>
+    areaLoadCases(profile, spacing, {
+      tcll: kpa(1),
+      tcdl: kpa(0.5),
+      bcdl: kpa(0.5),
+      windUplift: kpa(0.4),
+    });
 
   it('creates only the cases that have load', () => {
-    expect(Object.keys(cases).sort()).toEqual(['D', 'Lr', 'W']);
+    expect(Object.keys(cases()).sort()).toEqual(['D', 'Lr', 'W']);
   });
 
   it('TCLL on horizontal projection: B gets 0.6 × 1500 = 900 N; heel A gets 0.6 × (750 + 600) = 810 N', () => {
-    expect(at(cases.Lr, 'B').fy).toBeWithin(-900);
-    expect(at(cases.Lr, 'C').fy).toBeWithin(-900);
-    expect(at(cases.Lr, 'A').fy).toBeWithin(-810);
-    expect(at(cases.Lr, 'A').fx).toBeWithin(0);
+    expect(at(cases().Lr, 'B').fy).toBeWithin(-900);
+    expect(at(cases().Lr, 'C').fy).toBeWithin(-900);
+    expect(at(cases().Lr, 'A').fy).toBeWithin(-810);
+    expect(at(cases().Lr, 'A').fx).toBeWithin(0);
   });
 
   it('total applied = area × tributary: TCLL over 7200 mm run, dead over slope and bottom chord', () => {
-    expect(total(cases.Lr).fy).toBeWithin(-0.6 * 7200);
+    expect(total(cases().Lr).fy).toBeWithin(-0.6 * 7200);
     const slope = 4 * Math.hypot(1500, 500) + 2 * overhangSlope;
-    expect(total(cases.D).fy).toBeWithin(-(0.3 * slope + 0.3 * 6000));
+    expect(total(cases().D).fy).toBeWithin(-(0.3 * slope + 0.3 * 6000));
     // Uplift normal to the slope: the vertical resultant is w × horizontal run, horizontal cancels.
-    expect(total(cases.W).fy).toBeWithin(0.24 * 7200);
-    expect(total(cases.W).fx).toBeWithin(0, { abs: 1e-9 });
+    expect(total(cases().W).fy).toBeWithin(0.24 * 7200);
+    expect(total(cases().W).fx).toBeWithin(0, { abs: 1e-9 });
   });
 
   it('is symmetric about the ridge', () => {
-    for (const c of [cases.Lr, cases.D, cases.W]) {
+    for (const c of [cases().Lr, cases().D, cases().W]) {
       expect(at(c, 'A').fy).toBeWithin(at(c, 'E').fy!);
       expect(at(c, 'B').fy).toBeWithin(at(c, 'D').fy!);
       expect(at(c, 'B').fx).toBeWithin(-at(c, 'D').fx!, { abs: 1e-9 });
     }
-    expect(at(cases.D, 'F').fy).toBeWithin(at(cases.D, 'G').fy!);
+    expect(at(cases().D, 'F').fy).toBeWithin(at(cases().D, 'G').fy!);
   });
 
   it('wind uplift on B is normal to the chord and outward: 0.24 × 1581.1 N along (−sinθ, cosθ)', () => {
     const sin = 1 / Math.sqrt(10);
     const f = 0.24 * Math.hypot(1500, 500);
-    expect(at(cases.W, 'B').fx).toBeWithin(-f * sin);
-    expect(at(cases.W, 'B').fy).toBeWithin(f * cos);
+    expect(at(cases().W, 'B').fx).toBeWithin(-f * sin);
+    expect(at(cases().W, 'B').fy).toBeWithin(f * cos);
   });
 
   it('BCDL lumps to bottom-chord joints: F gets 0.3 × 2000 = 600 N', () => {
-    expect(at(cases.D, 'F').fy).toBeWithin(-600);
+    expect(at(cases().D, 'F').fy).toBeWithin(-600);
   });
 
   it('line loads across chord members: w cos²θ (horizontal), w cosθ (slope), −w (uplift)', () => {
-    expect(line(cases.Lr, 'AB')).toBeWithin(0.6 * cos * cos);
-    expect(line(cases.D, 'AB')).toBeWithin(0.3 * cos);
-    expect(line(cases.D, 'FG')).toBeWithin(0.3);
-    expect(line(cases.W, 'CD')).toBeWithin(-0.24);
-    expect(cases.Lr!.memberLoads.map((m) => m.member)).not.toContain('BF');
+    expect(line(cases().Lr, 'AB')).toBeWithin(0.6 * cos * cos);
+    expect(line(cases().D, 'AB')).toBeWithin(0.3 * cos);
+    expect(line(cases().D, 'FG')).toBeWithin(0.3);
+    expect(line(cases().W, 'CD')).toBeWithin(-0.24);
+    expect(cases().Lr!.memberLoads.map((m) => m.member)).not.toContain('BF');
   });
 
   it('overhang cantilever moments: w·a²/2 (horizontal), w·s·a/2 (slope), −w·s²/2 (uplift)', () => {
     const m = (c: CaseLoads | undefined, side: string) =>
       c!.overhangMoments.find((o) => o.side === side)!.moment;
-    expect(m(cases.Lr, 'left')).toBeWithin((0.6 * 600 ** 2) / 2);
-    expect(m(cases.D, 'right')).toBeWithin((0.3 * overhangSlope * 600) / 2);
-    expect(m(cases.W, 'left')).toBeWithin((-0.24 * overhangSlope ** 2) / 2);
+    expect(m(cases().Lr, 'left')).toBeWithin((0.6 * 600 ** 2) / 2);
+    expect(m(cases().D, 'right')).toBeWithin((0.3 * overhangSlope * 600) / 2);
+    expect(m(cases().W, 'left')).toBeWithin((-0.24 * overhangSlope ** 2) / 2);
   });
 
   it('snow and BCLL land in S and L', () => {
