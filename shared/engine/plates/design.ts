@@ -147,8 +147,10 @@ interface Trial {
   /** Member indices in the order to check them; the member that fails moves to the front. */
   order: number[];
   plate: PlateSpec;
-  /** Tooth capacity per mm² of contact, both faces, N/mm², per member. */
+  /** Tooth capacity per mm² of contact, both faces, N/mm², per member (its governing case). */
   perArea: number[];
+  /** Tooth demand per member, N: the force of its governing case on this plate. */
+  demand: number[];
   halfLength: number;
   halfWidth: number;
   /** Per member: its angles, lateral value (MPa) and heel factor, for the report. */
@@ -177,7 +179,7 @@ const checksAt = (t: Trial, offset: number, spread: number): MemberPlateCheck[] 
   for (let k = 0; k < t.order.length; k++) {
     const i = t.order[k];
     const area = regionAreaInPlate(t.regions[i], t.halfLength, t.halfWidth + spread, offset);
-    const c = check(Math.abs(t.joint.members[i].force), capacityOf(t, i, area));
+    const c = check(t.demand[i], capacityOf(t, i, area));
     if (c.ratio > 1) {
       if (spread === 0 && c.ratio < t.best.ratio) t.best = { i, ratio: c.ratio };
       if (k > 0) t.order.unshift(...t.order.splice(k, 1));
@@ -218,7 +220,7 @@ const placePlate = (t: Trial, local: LocalMember[], frame: PlateFrame): Placemen
   for (const i of t.order) {
     const band = 2 * Math.max(0, local[i].halfDepth - frame.edgeExclusion) * reachInPlate;
     const area = Math.min(4 * t.halfLength * t.halfWidth, Math.max(0, band));
-    if (Math.abs(t.joint.members[i].force) > capacityOf(t, i, area)) {
+    if (t.demand[i] > capacityOf(t, i, area)) {
       return failing(t, i, Infinity);
     }
   }
@@ -250,8 +252,13 @@ interface ToothAngles {
  * `loadToGrain` to it, to either side (the lower value is used). The top chord at a heel takes
  * the heel reduction for its slope.
  */
-const toothAngles = (joint: PlateJoint, m: PlateJointMember, local: Point): ToothAngles => {
-  const loadToGrain = foldAngle(m.loadToGrain ?? 0);
+const toothAngles = (
+  joint: PlateJoint,
+  m: PlateJointMember,
+  local: Point,
+  toGrain: number,
+): ToothAngles => {
+  const loadToGrain = foldAngle(toGrain);
   const axisAngle = Math.atan2(local[1], local[0]);
   const plateToLoad =
     loadToGrain === 0
@@ -271,6 +278,44 @@ const heelFactorOf = (joint: PlateJoint, m: PlateJointMember): number => {
   const slope = (d: { x: number; y: number }) => Math.atan2(d.y, d.x);
   const relative = bc ? slope(m.direction) - slope(bc.direction) : slope(m.direction);
   return heelReduction(relative);
+};
+
+/** One tooth load of a member: its magnitude (N, over CD) and angles. */
+interface ToothCase {
+  force: number;
+  angles: ToothAngles;
+}
+
+/**
+ * A member's tooth loads: its `toothCases` (axial force and end shear as one vector, per load
+ * case), or its axial envelope along the grain. Cases at the same angle keep only the largest.
+ */
+const toothCasesOf = (joint: PlateJoint, m: PlateJointMember, local: Point): ToothCase[] => {
+  const raw = m.toothCases ?? [{ force: Math.abs(m.force), loadToGrain: m.loadToGrain ?? 0 }];
+  const byAngle = new Map<number, number>();
+  for (const c of raw) {
+    const a = foldAngle(c.loadToGrain);
+    if (Math.abs(c.force) >= (byAngle.get(a) ?? -1)) byAngle.set(a, Math.abs(c.force));
+  }
+  return [...byAngle].map(([a, force]) => ({ force, angles: toothAngles(joint, m, local, a) }));
+};
+
+/**
+ * The case that governs a member on one plate: the largest demand over tooth value (the contact
+ * area is the same for every case, so this is the largest ratio wherever the plate sits).
+ */
+const governingTooth = (plate: PlateSpec, cases: ToothCase[]) => {
+  let best = { demand: 0, angles: toothValue(plate, cases[0].angles) };
+  let worst = -1;
+  for (const c of cases) {
+    const angles = toothValue(plate, c.angles);
+    const score = c.force / angles.lateralValue;
+    if (score > worst) {
+      worst = score;
+      best = { demand: c.force, angles };
+    }
+  }
+  return best;
 };
 
 /** A member's lateral value on one plate, MPa per face, at the lowest of its angles. */
@@ -334,12 +379,11 @@ export const designJointPlate = (
   const edgeExclusion = options.edgeExclusion ?? EDGE_EXCLUSION_MM;
   const regions = memberContactRegions(local, { endExclusion, edgeExclusion, reach });
   // Most loaded members first: they fail soonest, so a too-small plate is dropped early.
-  const order: number[] = joint.members
-    .map((_, i) => i)
-    .sort((a, b) => Math.abs(joint.members[b].force) - Math.abs(joint.members[a].force));
+  const teeth = joint.members.map((m, i) => toothCasesOf(joint, m, local[i].direction));
+  const largest = teeth.map((cases) => Math.max(...cases.map((c) => c.force)));
+  const order: number[] = joint.members.map((_, i) => i).sort((a, b) => largest[b] - largest[a]);
   let failure = { member: '', ratio: 0 };
   const sections = steelSections(joint.kind, local, joint.members);
-  const teeth = joint.members.map((m, i) => toothAngles(joint, m, local[i].direction));
 
   for (const plate of plates) {
     const halfLength = (plate.length * MM_PER_INCH) / 2;
@@ -353,13 +397,15 @@ export const designJointPlate = (
       };
       continue;
     }
-    const angles = teeth.map((t) => toothValue(plate, t));
+    const governs = teeth.map((cases) => governingTooth(plate, cases));
+    const angles = governs.map((g) => g.angles);
     const trial: Trial = {
       joint,
       regions,
       order,
       plate,
       perArea: angles.map((a) => PLATES_PER_JOINT * a.lateralValue * a.heelFactor * cd),
+      demand: governs.map((g) => g.demand),
       angles,
       halfLength,
       halfWidth,

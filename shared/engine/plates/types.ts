@@ -76,6 +76,13 @@ export interface PlateJointMember {
    * the axial force of a member, which runs along its grain.
    */
   loadToGrain?: number;
+  /**
+   * The member's tooth loads case by case, when its load is not along its grain: each the
+   * magnitude (N, already over the case's CD like `force`) and direction to the grain of the
+   * vector sum of its axial force and its end shear at this joint. The check takes the case
+   * with the largest demand over tooth value; `force` and `loadToGrain` are then unused.
+   */
+  toothCases?: readonly { force: number; loadToGrain: number }[];
 }
 
 /** `heel` and `splice` joints also check the steel across the joint line. */
