@@ -115,6 +115,24 @@ export function designPlates(
     meeting.get(b.id)!.push(member(a.x - b.x, a.y - b.y, demands.endShear));
   });
   const kinds = jointKinds(profile);
+  // The top chord's board runs on past a heel into its overhang: the plate's teeth there hold
+  // the top chord too (common practice: the top chord is the through board at a pointed heel).
+  for (const o of profile.overhangs) {
+    const k = profile.members.findIndex((mb) => mb.id === o.member);
+    const tc = meeting
+      .get(o.heelJoint)
+      ?.find((pm) => pm.id === o.member && pm.partOf === undefined);
+    if (k < 0 || !tc || !(o.slopeLength > 0)) continue;
+    meeting.get(o.heelJoint)!.push({
+      id: `${o.member} overhang`,
+      role: 'topChord',
+      direction: { x: -tc.direction.x, y: -tc.direction.y },
+      depth: tc.depth,
+      force: newton(0),
+      partOf: o.member,
+      length: mm(o.slopeLength),
+    });
+  }
   return profile.joints.map((j): DesignPlate => {
     const kind = kinds.get(j.id)!;
     try {

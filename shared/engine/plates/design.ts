@@ -358,26 +358,40 @@ const governing = (
  * largest plate.
  */
 export const designJointPlate = (
-  joint: PlateJoint,
+  given: PlateJoint,
   catalog: PlateCatalog,
   options: PlateDesignOptions = {},
 ): JointPlateDesign => {
-  checkJointInput(joint, catalog);
+  checkJointInput(given, catalog);
   const cd = options.cd ?? 1;
+  // Board parts (an overhang beyond a heel) lend their wood to the member they continue and
+  // leave the checks; everything but the contact regions sees the members proper only.
+  const kept = given.members.flatMap((m, i) => (m.partOf === undefined ? [i] : []));
+  const joint =
+    kept.length < given.members.length
+      ? { ...given, members: kept.map((i) => given.members[i]) }
+      : given;
   const axis = plateAxis(joint, options);
-  const local: LocalMember[] = joint.members.map((m) => {
+  const allLocal: LocalMember[] = given.members.map((m) => {
     const [x, y] = unit(m.direction, `Member ${m.id}`);
     return {
       role: m.role,
       direction: [x * axis[0] + y * axis[1], -x * axis[1] + y * axis[0]],
       halfDepth: m.depth / 2,
+      ...(m.length !== undefined && { length: m.length }),
     };
   });
   const { plates, reach } = sortedPlates(catalog);
-  const chordHalf = chordHalfDepth(local);
+  const chordHalf = chordHalfDepth(allLocal);
   const endExclusion = options.endExclusion ?? END_EXCLUSION_MM;
   const edgeExclusion = options.edgeExclusion ?? EDGE_EXCLUSION_MM;
-  const regions = memberContactRegions(local, { endExclusion, edgeExclusion, reach });
+  const allRegions = memberContactRegions(allLocal, { endExclusion, edgeExclusion, reach });
+  const regions = kept.map((i) =>
+    allRegions[i].concat(
+      ...given.members.flatMap((p, j) => (p.partOf === given.members[i].id ? [allRegions[j]] : [])),
+    ),
+  );
+  const local = kept.map((i) => allLocal[i]);
   // Most loaded members first: they fail soonest, so a too-small plate is dropped early.
   const teeth = joint.members.map((m, i) => toothCasesOf(joint, m, local[i].direction));
   const largest = teeth.map((cases) => Math.max(...cases.map((c) => c.force)));

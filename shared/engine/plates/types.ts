@@ -83,6 +83,15 @@ export interface PlateJointMember {
    * with the largest demand over tooth value; `force` and `loadToGrain` are then unused.
    */
   toothCases?: readonly { force: number; loadToGrain: number }[];
+  /**
+   * The id of the member whose board this is the far side of: the top chord's overhang beyond a
+   * heel is the same board as the top chord, so the teeth it takes hold the top chord's force.
+   * Such a part has no check or steel section of its own; its wood (up to `length`) joins that
+   * member's contact area.
+   */
+  partOf?: string;
+  /** How far this lumber runs from the joint, mm, when it ends within the plate (default: beyond). */
+  length?: Mm;
 }
 
 /** `heel` and `splice` joints also check the steel across the joint line. */

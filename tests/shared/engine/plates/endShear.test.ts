@@ -1,24 +1,15 @@
 import { describe, expect, it } from 'vitest';
 import { designTruss } from '../../../../shared/engine/design';
 import { designJointPlate } from '../../../../shared/engine/plates/design';
-import type { PlateJoint, PlateSpec } from '../../../../shared/engine/plates/types';
+import type { PlateJoint } from '../../../../shared/engine/plates/types';
 import { lbf, lbfToN, mm, psi, psiToMpa } from '../../../../shared/engine/units';
 import { engineInput, lightFink } from '../design/support/inputs';
+import { catalogOf, roundPlate } from './support/roundPlate';
 
-// Test-only plate values, round numbers (not from any evaluation report). 2x4 depth 3½ in
-// (NDS 2018 Supplement Table 1A).
+// 2x4 depth 3½ in (NDS 2018 Supplement Table 1A).
 const IN = 25.4;
 const DEG = Math.PI / 180;
-const plate: PlateSpec = {
-  id: '6x10',
-  gauge: 20,
-  width: 6,
-  length: 10,
-  lateralValue: { aa: 120, ea: 100, ae: 80, ee: 60 },
-  tensionValue: 1000,
-  shearValue: 500,
-};
-const catalog = { id: 't', label: 'test values', demo: false, plates: [plate] };
+const catalog = catalogOf(roundPlate(6, 10));
 
 /** A straight bottom chord through a panel point with a vertical web; BC1 carries `cases`. */
 const joint = (cases: { force: number; loadToGrain: number }[]): PlateJoint => ({
