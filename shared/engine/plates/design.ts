@@ -1,8 +1,8 @@
 import { EngineError } from '../errors';
-import { MM_PER_INCH, N_PER_LBF, TOLERANCE } from '../units';
+import { MM_PER_INCH, TOLERANCE } from '../units';
 import { memberContactRegions, regionAreaInPlate, type LocalMember, type Region } from './contact';
 import type { Point } from './geometry';
-import { foldAngle, heelReduction, lateralValue } from './lateral';
+import { governingTooth, toothCasesOf } from './teeth';
 import { steelChecks, steelSections } from './steel';
 import type {
   Direction,
@@ -11,7 +11,6 @@ import type {
   PlateCatalog,
   PlateDesignOptions,
   PlateJoint,
-  PlateJointMember,
   PlateSpec,
   SteelCheck,
 } from './types';
@@ -20,9 +19,7 @@ import type {
 // not verified, see references §4).
 const END_EXCLUSION_MM = 0.5 * MM_PER_INCH;
 const EDGE_EXCLUSION_MM = 0.25 * MM_PER_INCH;
-const MM2_PER_IN2 = MM_PER_INCH * MM_PER_INCH;
 const PLATES_PER_JOINT = 2;
-const PSI_TO_N_PER_MM2 = N_PER_LBF / MM2_PER_IN2;
 
 const unit = (d: Direction, what: string): Point => {
   const len = Math.hypot(d.x, d.y);
@@ -239,100 +236,6 @@ const LINE_TEXT: Record<SteelCheck['line'], string> = {
   joint: 'across the joint line',
 };
 
-/** A member's tooth angles at a joint, independent of the plate size. */
-interface ToothAngles {
-  /** Plate-to-load angles to try (the load at ±θ to the member when θ ≠ 0). */
-  plateToLoad: number[];
-  loadToGrain: number;
-  heelFactor: number;
-}
-
-/**
- * The angles of a member's load at a joint: along its axis (grain) for an axial force, else at
- * `loadToGrain` to it, to either side (the lower value is used). The top chord at a heel takes
- * the heel reduction for its slope.
- */
-const toothAngles = (
-  joint: PlateJoint,
-  m: PlateJointMember,
-  local: Point,
-  toGrain: number,
-): ToothAngles => {
-  const loadToGrain = foldAngle(toGrain);
-  const axisAngle = Math.atan2(local[1], local[0]);
-  const plateToLoad =
-    loadToGrain === 0
-      ? [foldAngle(axisAngle)]
-      : [foldAngle(axisAngle + loadToGrain), foldAngle(axisAngle - loadToGrain)];
-  return { plateToLoad, loadToGrain, heelFactor: heelFactorOf(joint, m) };
-};
-
-/**
- * HR for the top chord at a heel, from its slope above the bottom chord: the top chord's slope
- * where the bottom chord is level (the standard's case); for a scissor's sloped bottom chord the
- * angle between the chords (our reading, not the standard's words). 1 for every other member.
- */
-const heelFactorOf = (joint: PlateJoint, m: PlateJointMember): number => {
-  if (joint.kind !== 'heel' || m.role !== 'topChord') return 1;
-  const bc = joint.members.find((o) => o.role === 'bottomChord');
-  const slope = (d: { x: number; y: number }) => Math.atan2(d.y, d.x);
-  const relative = bc ? slope(m.direction) - slope(bc.direction) : slope(m.direction);
-  return heelReduction(relative);
-};
-
-/** One tooth load of a member: its magnitude (N, over CD) and angles. */
-interface ToothCase {
-  force: number;
-  angles: ToothAngles;
-}
-
-/**
- * A member's tooth loads: its `toothCases` (axial force and end shear as one vector, per load
- * case), or its axial envelope along the grain. Cases at the same angle keep only the largest.
- */
-const toothCasesOf = (joint: PlateJoint, m: PlateJointMember, local: Point): ToothCase[] => {
-  const raw = m.toothCases ?? [{ force: Math.abs(m.force), loadToGrain: m.loadToGrain ?? 0 }];
-  const byAngle = new Map<number, number>();
-  for (const c of raw) {
-    const a = foldAngle(c.loadToGrain);
-    if (Math.abs(c.force) >= (byAngle.get(a) ?? -1)) byAngle.set(a, Math.abs(c.force));
-  }
-  return [...byAngle].map(([a, force]) => ({ force, angles: toothAngles(joint, m, local, a) }));
-};
-
-/**
- * The case that governs a member on one plate: the largest demand over tooth value (the contact
- * area is the same for every case, so this is the largest ratio wherever the plate sits).
- */
-const governingTooth = (plate: PlateSpec, cases: ToothCase[]) => {
-  let best = { demand: 0, angles: toothValue(plate, cases[0].angles) };
-  let worst = -1;
-  for (const c of cases) {
-    const angles = toothValue(plate, c.angles);
-    const score = c.force / angles.lateralValue;
-    if (score > worst) {
-      worst = score;
-      best = { demand: c.force, angles };
-    }
-  }
-  return best;
-};
-
-/** A member's lateral value on one plate, MPa per face, at the lowest of its angles. */
-const toothValue = (plate: PlateSpec, t: ToothAngles): Trial['angles'][number] => {
-  let best = { plateToLoad: t.plateToLoad[0], value: Infinity };
-  for (const a of t.plateToLoad) {
-    const value = lateralValue(plate, a, t.loadToGrain);
-    if (value < best.value) best = { plateToLoad: a, value };
-  }
-  return {
-    plateToLoad: best.plateToLoad,
-    loadToGrain: t.loadToGrain,
-    lateralValue: best.value * PSI_TO_N_PER_MM2,
-    heelFactor: t.heelFactor,
-  };
-};
-
 /** The check with the largest ratio (teeth win a tie: they are listed first). */
 const governing = (
   checks: MemberPlateCheck[],
@@ -399,6 +302,7 @@ export const designJointPlate = (
   let failure = { member: '', ratio: 0 };
   const sections = steelSections(joint.kind, local, joint.members);
 
+  const toothOf = new Map<string, ReturnType<typeof governingTooth>[]>();
   for (const plate of plates) {
     const halfLength = (plate.length * MM_PER_INCH) / 2;
     const halfWidth = (plate.width * MM_PER_INCH) / 2;
@@ -411,7 +315,12 @@ export const designJointPlate = (
       };
       continue;
     }
-    const governs = teeth.map((cases) => governingTooth(plate, cases));
+    // Tooth values depend on the plate only through its four lateral values (a catalog has a
+    // few sets, one per gauge): each set is evaluated once per joint.
+    const lv = plate.lateralValue;
+    const key = `${lv.aa}/${lv.ea}/${lv.ae}/${lv.ee}`;
+    let governs = toothOf.get(key);
+    if (!governs) toothOf.set(key, (governs = teeth.map((cases) => governingTooth(plate, cases))));
     const angles = governs.map((g) => g.angles);
     const trial: Trial = {
       joint,
