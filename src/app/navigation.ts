@@ -37,6 +37,7 @@ export const SECTION_ROLES = {
   floor: ['admin', 'foreman'],
   quality: ['admin', 'foreman'],
   'production-settings': ['admin'],
+  'design-rules': ['admin'],
 } as const satisfies Record<string, readonly Role[]>;
 
 const may = (section: keyof typeof SECTION_ROLES, role: Role) =>
@@ -63,5 +64,7 @@ export function navForRole(role: Role): NavItem[] {
     items.push({ to: '/production-settings', label: 'Production', group: 'plant' });
   if (may('inbox', role)) items.push({ to: '/inbox', label: 'Demo inbox', group: 'plant' });
   if (may('stock', role)) items.push({ to: '/stock', label: 'Lumber stock', group: 'plant' });
+  if (may('design-rules', role))
+    items.push({ to: '/design-rules', label: 'Design rules', group: 'plant' });
   return items;
 }

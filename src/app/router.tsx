@@ -28,6 +28,7 @@ import { shopPaperRoutes } from '../features/shop-paper/routes';
 import { scheduleRoutes } from '../features/schedule/routes';
 import { floorRoutes } from '../features/floor/routes';
 import { productionSettingsRoutes } from '../features/production-settings/routes';
+import { designRulesRoutes } from '../features/design-rules/routes';
 import { usersQueryOptions } from '../features/users/api/list-users';
 import { listParamsFromSearch } from '../lib/list-params';
 import { requireRole } from './guards';
@@ -178,5 +179,6 @@ export function deskRoutes(queryClient: QueryClient): RouteObject[] {
     ...scheduleRoutes(queryClient),
     ...floorRoutes(queryClient),
     ...productionSettingsRoutes(queryClient),
+    ...designRulesRoutes(queryClient),
   ];
 }

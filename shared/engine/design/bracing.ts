@@ -24,13 +24,15 @@ export function chordBracingNote(input: EngineDesignInput): string {
   const { top, bottom } = chordBracing(input);
   const tc =
     top > 0
-      ? `Top chord braced out of plane by purlins at ${formatFeetInches(top)} o.c. (le = purlin spacing)`
+      ? `Top chord braced out of plane by purlins at ${formatFeetInches(top)} o.c. (le and lu for CL = purlin spacing)`
       : 'Top chord braced out of plane by the sheathing';
   const bc =
     bottom > 0
-      ? `bottom chord (no ceiling) by lateral bracing at ${formatFeetInches(bottom)} o.c. (le = bracing spacing)`
+      ? `bottom chord (no ceiling) by lateral bracing at ${formatFeetInches(bottom)} o.c. (le and lu for CL = bracing spacing)`
       : 'bottom chord by the ceiling';
-  return `${tc}; ${bc}; webs over their length unless braced.`;
+  // A sheathed or ceiled chord is taken as held on both edges (CL = 1) even where uplift or a
+  // panel-point moment puts its free edge in compression (common practice).
+  return `${tc}; ${bc}; webs over their length unless braced.${top > 0 || bottom > 0 ? ' A chord held only at points is checked for lateral-torsional buckling with that spacing as lu (NDS 2018 §3.3.3, Table 3.3.3 le, and Eq. 3.9-4).' : ''}`;
 }
 
 /**

@@ -24,6 +24,9 @@ export interface MemberDemands {
    * overhang's root shear at the heel (see `overhangRootLevers`).
    */
   shear: Float64Array;
+  /** |V| at the member's start (`from` joint) and end (`to` joint), N: what a plate there carries across the grain. */
+  startShear: Float64Array;
+  endShear: Float64Array;
   /** Reactions per support per combination: [combination][support] rx and ry, N. */
   rx: Float64Array;
   ry: Float64Array;
@@ -71,6 +74,8 @@ export function memberDemands(
   const spanMoment = new Float64Array(n * m);
   const supportMoment = new Float64Array(n * m);
   const shear = new Float64Array(n * m);
+  const startShear = new Float64Array(n * m);
+  const endShear = new Float64Array(n * m);
   const rx = new Float64Array(n * s);
   const ry = new Float64Array(n * s);
   const lever = overhangRootLevers(profile);
@@ -89,6 +94,8 @@ export function memberDemands(
       // NDS 2018 §3.4.2 at the overhang's root (the bearing): V = 2|M|/s.
       const root = lever[k] > 0 ? (2 * Math.abs(c.overhangMoment[k])) / lever[k] : 0;
       shear[at] = Math.max(r.maxShear, root);
+      startShear[at] = r.startShear;
+      endShear[at] = r.endShear;
     }
     result.reactions.forEach((r, j) => {
       rx[i * s + j] = r.rx;
@@ -103,6 +110,8 @@ export function memberDemands(
     spanMoment,
     supportMoment,
     shear,
+    startShear,
+    endShear,
     rx,
     ry,
     supports: profile.supports.map((sp) => sp.joint),

@@ -33,6 +33,27 @@ export function jointKinds(profile: TrussProfile): Map<string, PlateJointKind> {
 }
 
 /**
+ * A chord's tooth loads at one of its ends, per combination: its axial force N and its end shear
+ * V there act on the plate together, so the teeth carry √(N² + V²)/CD at atan(|V|/|N|) to the
+ * grain (the vector sum; Hankinson's formula then gives the tooth value, `lateralValue`). Webs
+ * are pinned: their load runs along the grain.
+ */
+function toothCases(
+  demands: MemberDemands,
+  endShear: Float64Array,
+  cds: readonly number[],
+  k: number,
+  plies: number,
+): { force: number; loadToGrain: number }[] {
+  const m = demands.members;
+  return cds.map((cd, i) => {
+    const n = Math.abs(demands.axial[i * m + k]) / plies;
+    const v = endShear[i * m + k] / plies;
+    return { force: Math.hypot(n, v) / cd, loadToGrain: Math.atan2(v, n) };
+  });
+}
+
+/**
  * Plates (both faces) at every joint. Each member's tooth demand is its envelope max over the
  * combinations of |F|/CD with the plate's CD = 1: tooth holding scales with CD, so this is the
  * same check as one per combination, done in one call per joint. The steel (tension, shear and
@@ -40,7 +61,8 @@ export function jointKinds(profile: TrussProfile): Map<string, PlateJointKind> {
  * at a panel point, the joint line at a peak) takes each combination's full signed forces:
  * steel capacities are not adjusted for load duration (common practice; ANSI/TPI 1-2014 Ch. 5
  * tests the steel without a duration factor, from memory). Tooth values follow each member's
- * angle to the plate (`lateralValue`) and the top chord at a heel takes `heelReduction`.
+ * angle to the plate (`lateralValue`) and, for a chord, the direction of its axial force and end
+ * shear together (`toothCases`); the top chord at a heel takes `heelReduction`.
  * A joint with no fitting plate
  * is reported (`ok: false`, with the reason), never thrown.
  */
@@ -79,7 +101,7 @@ export function designPlates(
     const steelForces: number[] = [];
     for (let i = 0; i < cds.length; i++) steelForces.push(demands.axial[i * m + k] / plies);
     const d = mm(depth(lumberOf[k]));
-    const end = (dx: number, dy: number): PlateJointMember => ({
+    const member = (dx: number, dy: number, endShear: Float64Array): PlateJointMember => ({
       id: mb.id,
       role: mb.role,
       direction: { x: dx, y: dy },
@@ -87,11 +109,30 @@ export function designPlates(
       force: newton(envelope[k]),
       steelForce: newton(steelEnvelope[k]),
       steelForces,
+      ...(mb.role !== 'web' && { toothCases: toothCases(demands, endShear, cds, k, plies) }),
     });
-    meeting.get(a.id)!.push(end(b.x - a.x, b.y - a.y));
-    meeting.get(b.id)!.push(end(a.x - b.x, a.y - b.y));
+    meeting.get(a.id)!.push(member(b.x - a.x, b.y - a.y, demands.startShear));
+    meeting.get(b.id)!.push(member(a.x - b.x, a.y - b.y, demands.endShear));
   });
   const kinds = jointKinds(profile);
+  // The top chord's board runs on past a heel into its overhang: the plate's teeth there hold
+  // the top chord too (common practice: the top chord is the through board at a pointed heel).
+  for (const o of profile.overhangs) {
+    const k = profile.members.findIndex((mb) => mb.id === o.member);
+    const tc = meeting
+      .get(o.heelJoint)
+      ?.find((pm) => pm.id === o.member && pm.partOf === undefined);
+    if (k < 0 || !tc || !(o.slopeLength > 0)) continue;
+    meeting.get(o.heelJoint)!.push({
+      id: `${o.member} overhang`,
+      role: 'topChord',
+      direction: { x: -tc.direction.x, y: -tc.direction.y },
+      depth: tc.depth,
+      force: newton(0),
+      partOf: o.member,
+      length: mm(o.slopeLength),
+    });
+  }
   return profile.joints.map((j): DesignPlate => {
     const kind = kinds.get(j.id)!;
     try {

@@ -133,6 +133,9 @@ export function checkOverCombinations(
       repetitive,
       shear: shear[i * m + k],
       ...(ctx.amplifyPanelPoint && { amplifyPanelPoint: true }),
+      // A chord held out of plane only at purlins or bracing is held at the same points against
+      // lateral-torsional buckling, whichever edge its moment puts in compression (CL, §3.3.3).
+      ...(member.role !== 'web' && leWeak > 0 && { luBending: leWeak }),
     });
     if (perCombination) perCombination[i] = result.csi;
     if (result.csi > worst.csi) {

@@ -15,7 +15,7 @@ export interface DesignValueOptions {
 
 /**
  * Adjusted (ASD) design values in MPa. Dry service (CM = 1), normal temperature (Ct = 1), not
- * incised (Ci = 1), chords braced by sheathing/ceiling (CL = 1). `fcStar` is Fc* (all factors
+ * incised (Ci = 1), CL applied per member (`checkMember`, NDS 2018 §3.3.3). `fcStar` is Fc* (all factors
  * but Cp); `fcPerp` excludes Cb (apply it per bearing); `e`/`emin` take no CD.
  */
 export interface DesignValues {

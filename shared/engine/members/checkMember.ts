@@ -1,5 +1,6 @@
 import { EngineError } from '../errors';
 import { designValues, parseLumberId, sectionProperties, dressedSize } from '../lumber';
+import { beamStability, MAX_BEAM_SLENDERNESS } from './beamStability';
 import { columnDesignValue, MAX_SLENDERNESS } from './columnStability';
 import { compressionBendingIndex, tensionBendingIndex } from './interaction';
 import { shearStress } from './shear';
@@ -35,6 +36,13 @@ export interface MemberCheckInput {
    * reads literally (stricter than the common-practice check; a plant setting).
    */
   amplifyPanelPoint?: boolean;
+  /**
+   * Laterally unbraced length of the compression edge in bending, mm (NDS 2018 §3.3.3): 0 or
+   * absent when sheathing or a ceiling holds it throughout (CL = 1); for a chord held only by
+   * purlins or bracing at a spacing, that spacing (either edge may be the compression edge,
+   * whichever way the chord bends).
+   */
+  luBending?: number;
 }
 
 /** The check that sets the CSI. */
@@ -52,6 +60,10 @@ export interface MemberRatios {
   slenderness?: number;
   /** fv/Fv′ (NDS 2018 §3.4.2), when a shear is given. */
   shear?: number;
+  /** RB/50 for a bending member with an unbraced compression edge (NDS 2018 §3.3.3.7). */
+  beamSlenderness?: number;
+  /** fc/FcE2 + (fb1/FbE)² (NDS 2018 Eq. 3.9-4), when the compression edge is unbraced. */
+  lateralTorsional?: number;
 }
 
 /** Result of a member check. Stresses and design values in MPa. */
@@ -62,7 +74,15 @@ export interface MemberCheckResult {
   ratios: MemberRatios;
   slenderness: { strong: number; weak: number };
   stresses: { axial: number; bending: number };
-  capacities: { ftPrime: number; fcPrime: number; fbPrime: number; cp: number; fcEStrong: number };
+  /** fbPrime includes CL (1 unless `luBending` is given). */
+  capacities: {
+    ftPrime: number;
+    fcPrime: number;
+    fbPrime: number;
+    cp: number;
+    fcEStrong: number;
+    cl: number;
+  };
   note?: string;
 }
 
@@ -74,6 +94,8 @@ const GOVERNING_OF: Record<keyof MemberRatios, GoverningCheck> = {
   compressionBending: 'compression+bending',
   slenderness: 'compression',
   shear: 'shear',
+  beamSlenderness: 'bending',
+  lateralTorsional: 'compression+bending',
 };
 
 function validate(input: MemberCheckInput): void {
@@ -91,8 +113,8 @@ function validate(input: MemberCheckInput): void {
 
 /**
  * Checks a sawn-lumber truss member for one load combination: tension (ft/Ft′), compression
- * (fc/Fc′ with Cp about each axis), bending (fb/Fb′, CL = 1) and the NDS 2018 3.9.1 / 3.9.2
- * interactions. Weak-axis slenderness uses one ply's thickness: nailed plies are not credited
+ * (fc/Fc′ with Cp about each axis), bending (fb/Fb′ with CL from `luBending`, NDS 2018 §3.3.3) and
+ * the NDS 2018 3.9.1 / 3.9.2 interactions (with Eq. 3.9-4 when the compression edge is unbraced). Weak-axis slenderness uses one ply's thickness: nailed plies are not credited
  * as a solid column (conservative; NDS 15.3 built-up column rules are not applied).
  */
 export function checkMember(input: MemberCheckInput): MemberCheckResult {
@@ -116,12 +138,28 @@ export function checkMember(input: MemberCheckInput): MemberCheckResult {
   const fb = moment / section.sx;
   const ratios: MemberRatios = {};
   const notes: string[] = [];
+  // Fb* = dv.fb (every factor but CL); Fb′ = Fb** = CL·Fb* for sawn lumber (no CV).
+  const beam = beamStability({
+    lu: moment > 0 ? (input.luBending ?? 0) : 0,
+    d: section.d,
+    b: plyThickness,
+    fbStar: dv.fb,
+    eminPrime: dv.emin,
+  });
+  const fbPrime = dv.fb * beam.cl;
+  if (beam.rb > MAX_BEAM_SLENDERNESS) {
+    ratios.beamSlenderness = beam.rb / MAX_BEAM_SLENDERNESS;
+    notes.push(
+      `RB = ${beam.rb.toFixed(1)} exceeds ${MAX_BEAM_SLENDERNESS} (NDS 2018 §3.3.3.7): brace the chord closer.`,
+    );
+  }
 
   if (axial > 0) {
     ratios.tension = fa / dv.ft;
     if (moment > 0) {
-      ratios.bending = fb / dv.fb;
-      ratios.tensionBending = tensionBendingIndex(fa, dv.ft, fb, dv.fb);
+      ratios.bending = fb / fbPrime;
+      // NDS 2018 3.9.1: Fb* excludes CL, Fb** includes it.
+      ratios.tensionBending = tensionBendingIndex(fa, dv.ft, fb, dv.fb, fbPrime);
     }
   } else if (axial < 0) {
     ratios.compression = fa / column.fcPrime;
@@ -135,27 +173,30 @@ export function checkMember(input: MemberCheckInput): MemberCheckResult {
       );
     }
     if (moment > 0) {
-      ratios.bending = fb / dv.fb;
+      ratios.bending = fb / fbPrime;
       // NDS 2018 3.9.2's amplifier 1/(1 − fc/FcE1) stands for the chord bowing between its
       // supports. At a panel point the chord is held in plane, so the support moment enters
       // unamplified: (fc/Fc′)² + fb/Fb′ (common practice for continuous truss chords).
       const split = input.supportMoment !== undefined;
       const fbSpan = split ? Math.abs(input.spanMoment ?? input.moment) / section.sx : fb;
-      const cb = compressionBendingIndex(fa, column.fcPrime, fbSpan, dv.fb, column.fcEStrong);
+      const cb = compressionBendingIndex(fa, column.fcPrime, fbSpan, fbPrime, column.fcEStrong);
       const fbSupport = split ? Math.abs(input.supportMoment!) / section.sx : 0;
       const atPanelPoint = !split
         ? 0
         : input.amplifyPanelPoint
-          ? compressionBendingIndex(fa, column.fcPrime, fbSupport, dv.fb, column.fcEStrong).index
-          : (fa / column.fcPrime) ** 2 + fbSupport / dv.fb;
+          ? compressionBendingIndex(fa, column.fcPrime, fbSupport, fbPrime, column.fcEStrong).index
+          : (fa / column.fcPrime) ** 2 + fbSupport / fbPrime;
       ratios.compressionBending = Math.max(cb.index, atPanelPoint);
+      // NDS 2018 Eq. 3.9-4 (from memory): fc/FcE2 + (fb1/FbE)² ≤ 1, lateral-torsional buckling of
+      // a chord whose compression edge is held only at points; FbE is infinite when it is braced.
+      if (beam.le > 0) ratios.lateralTorsional = fa / column.fcEWeak + (fb / beam.fbE) ** 2;
       if (cb.buckles)
         notes.push(
           'fc ≥ FcE about the bending axis (NDS 2018 3.9.2): the member buckles in plane.',
         );
     }
   } else {
-    ratios.bending = fb / dv.fb;
+    ratios.bending = fb / fbPrime;
   }
   if (input.shear) ratios.shear = shearStress(input.shear, section.area) / dv.fv;
 
@@ -185,9 +226,10 @@ export function checkMember(input: MemberCheckInput): MemberCheckResult {
     capacities: {
       ftPrime: dv.ft,
       fcPrime: column.fcPrime,
-      fbPrime: dv.fb,
+      fbPrime,
       cp: column.cp,
       fcEStrong: column.fcEStrong,
+      cl: beam.cl,
     },
     ...(notes.length > 0 ? { note: notes.join(' ') } : {}),
   };

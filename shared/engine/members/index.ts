@@ -3,3 +3,4 @@ export * from './interaction';
 export * from './checkMember';
 export * from './bearing';
 export * from './shear';
+export * from './beamStability';

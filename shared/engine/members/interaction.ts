@@ -1,6 +1,6 @@
 /**
  * NDS 2018 3.9.1, bending + axial tension: the larger of ft/Ft′ + fb/Fb* and (fb − ft)/Fb**.
- * With CL = 1 (chords braced by sheathing/ceiling) Fb* = Fb** = Fb′ for sawn lumber.
+ * Fb* excludes CL, Fb** includes it (sawn lumber has no CV); they are equal when CL = 1.
  */
 export function tensionBendingIndex(
   ft: number,

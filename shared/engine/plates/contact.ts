@@ -19,6 +19,8 @@ export interface LocalMember {
   role: MemberRole;
   direction: Point;
   halfDepth: number;
+  /** How far the lumber runs from the joint, mm, when it ends within the plate (an overhang). */
+  length?: number;
 }
 
 /** Tooth-free margins and how far from the joint the lumber bands need to reach (all mm). */
@@ -83,8 +85,11 @@ const contactRegion = (
 ): Region => {
   const m = members[i];
   const half = m.halfDepth - rules.edgeExclusion;
-  if (half <= 0 || rules.reach <= rules.endExclusion) return [];
-  let ring: Ring = stripRing(m.direction, rules.endExclusion, rules.reach, half);
+  // A board that ends within reach loses the end exclusion at its far end too.
+  const reach =
+    m.length === undefined ? rules.reach : Math.min(rules.reach, m.length - rules.endExclusion);
+  if (half <= 0 || reach <= rules.endExclusion) return [];
+  let ring: Ring = stripRing(m.direction, rules.endExclusion, reach, half);
   const cutters: Ring[] = [];
   for (let j = 0; j < members.length; j++) {
     if (j === i) continue;

@@ -2,8 +2,8 @@ import { EngineError } from '../errors';
 import { MM_PER_INCH, TOLERANCE } from '../units';
 import { memberContactRegions, regionAreaInPlate, type LocalMember, type Region } from './contact';
 import type { Point } from './geometry';
+import { governingTooth, toothCasesOf, type ToothCheck } from './teeth';
 import { steelChecks, steelSections } from './steel';
-import { toothAngles, toothClasses, toothValue, type ToothValue } from './teeth';
 import type {
   Direction,
   JointPlateDesign,
@@ -79,11 +79,7 @@ const chordHalfDepth = (local: LocalMember[]) => {
 };
 
 // Each catalog sorted once (catalogs are immutable values), with the reach its largest plate needs.
-// Also each plate's class of equal tooth values (`toothClasses`).
-const sortedCatalogs = new WeakMap<
-  PlateCatalog,
-  { plates: PlateSpec[]; reach: number; classes: number[] }
->();
+const sortedCatalogs = new WeakMap<PlateCatalog, { plates: PlateSpec[]; reach: number }>();
 const sortedPlates = (catalog: PlateCatalog) => {
   let entry = sortedCatalogs.get(catalog);
   if (!entry) {
@@ -91,7 +87,7 @@ const sortedPlates = (catalog: PlateCatalog) => {
     // Far enough for the corner of any plate slid by up to its own half width.
     const reach =
       Math.max(...plates.map((p) => Math.hypot(2 * p.width, p.length))) * (MM_PER_INCH / 2) + 1;
-    entry = { plates, reach, classes: toothClasses(plates) };
+    entry = { plates, reach };
     sortedCatalogs.set(catalog, entry);
   }
   return entry;
@@ -145,12 +141,14 @@ interface Trial {
   /** Member indices in the order to check them; the member that fails moves to the front. */
   order: number[];
   plate: PlateSpec;
-  /** Tooth capacity per mm² of contact, both faces, N/mm², per member. */
+  /** Tooth capacity per mm² of contact, both faces, N/mm², per member (its governing case). */
   perArea: number[];
+  /** Tooth demand per member, N: the force of its governing case on this plate. */
+  demand: number[];
   halfLength: number;
   halfWidth: number;
   /** Per member: its angles, lateral value (MPa) and heel factor, for the report. */
-  angles: ToothValue[];
+  angles: Omit<MemberPlateCheck, 'member' | 'area' | 'demand' | 'capacity' | 'ratio'>[];
   /** The member failing by the least at an exact slide, for the message. */
   best: { i: number; ratio: number };
 }
@@ -181,7 +179,7 @@ const checksAt = (t: Trial, offset: number, spread: number): MemberPlateCheck[] 
   for (let k = 0; k < t.order.length; k++) {
     const i = t.order[k];
     const area = regionAreaInPlate(t.regions[i], t.halfLength, t.halfWidth + spread, offset);
-    const demand = Math.abs(t.joint.members[i].force);
+    const demand = t.demand[i];
     const capacity = capacityOf(t, i, area);
     const ratio = ratioOf(demand, capacity);
     if (ratio > 1) {
@@ -236,7 +234,7 @@ const placePlate = (t: Trial, local: LocalMember[], frame: PlateFrame): Placemen
   for (const i of t.order) {
     const band = 2 * Math.max(0, local[i].halfDepth - frame.edgeExclusion) * reachInPlate;
     const area = Math.min(4 * t.halfLength * t.halfWidth, Math.max(0, band));
-    if (Math.abs(t.joint.members[i].force) > capacityOf(t, i, area)) {
+    if (t.demand[i] > capacityOf(t, i, area)) {
       return failing(t, i, Infinity);
     }
   }
@@ -288,38 +286,50 @@ const governing = (
  * largest plate.
  */
 export const designJointPlate = (
-  joint: PlateJoint,
+  given: PlateJoint,
   catalog: PlateCatalog,
   options: PlateDesignOptions = {},
 ): JointPlateDesign => {
-  checkJointInput(joint, catalog);
+  checkJointInput(given, catalog);
   const cd = options.cd ?? 1;
+  // Board parts (an overhang beyond a heel) lend their wood to the member they continue and
+  // leave the checks; everything but the contact regions sees the members proper only.
+  const kept = given.members.flatMap((m, i) => (m.partOf === undefined ? [i] : []));
+  const joint =
+    kept.length < given.members.length
+      ? { ...given, members: kept.map((i) => given.members[i]) }
+      : given;
   const axis = plateAxis(joint, options);
-  const local: LocalMember[] = joint.members.map((m) => {
+  const allLocal: LocalMember[] = given.members.map((m) => {
     const [x, y] = unit(m.direction, `Member ${m.id}`);
     return {
       role: m.role,
       direction: [x * axis[0] + y * axis[1], -x * axis[1] + y * axis[0]],
       halfDepth: m.depth / 2,
+      ...(m.length !== undefined && { length: m.length }),
     };
   });
-  const { plates, reach, classes } = sortedPlates(catalog);
-  const chordHalf = chordHalfDepth(local);
+  const { plates, reach } = sortedPlates(catalog);
+  const chordHalf = chordHalfDepth(allLocal);
   const endExclusion = options.endExclusion ?? END_EXCLUSION_MM;
   const edgeExclusion = options.edgeExclusion ?? EDGE_EXCLUSION_MM;
-  const regions = memberContactRegions(local, { endExclusion, edgeExclusion, reach });
+  const allRegions = memberContactRegions(allLocal, { endExclusion, edgeExclusion, reach });
+  const regions = kept.map((i) =>
+    allRegions[i].concat(
+      ...given.members.flatMap((p, j) => (p.partOf === given.members[i].id ? [allRegions[j]] : [])),
+    ),
+  );
+  const local = kept.map((i) => allLocal[i]);
   // Most loaded members first: they fail soonest, so a too-small plate is dropped early.
-  const order: number[] = joint.members
-    .map((_, i) => i)
-    .sort((a, b) => Math.abs(joint.members[b].force) - Math.abs(joint.members[a].force));
+  const teeth = joint.members.map((m, i) => toothCasesOf(joint, m, local[i].direction));
+  const largest = teeth.map((cases) => Math.max(...cases.map((c) => c.force)));
+  const order: number[] = joint.members.map((_, i) => i).sort((a, b) => largest[b] - largest[a]);
   let failure = { member: '', ratio: 0 };
   const sections = steelSections(joint.kind, local, joint.members);
-  const teeth = joint.members.map((m, i) => toothAngles(joint, m, local[i].direction));
 
-  // Tooth values and capacities per class of plate values: the same for every plate of a class.
-  const toothOf: { angles: ToothValue[]; perArea: number[] }[] = [];
-  for (let p = 0; p < plates.length; p++) {
-    const plate = plates[p];
+  // Per set of lateral values: each member's governing tooth case, its demand and capacity per area.
+  const toothOf = new Map<string, { angles: ToothCheck[]; demand: number[]; perArea: number[] }>();
+  for (const plate of plates) {
     const halfLength = (plate.length * MM_PER_INCH) / 2;
     const halfWidth = (plate.width * MM_PER_INCH) / 2;
     const steel = steelChecks(sections, plate, halfLength, halfWidth);
@@ -331,11 +341,20 @@ export const designJointPlate = (
       };
       continue;
     }
-    let tooth = toothOf[classes[p]];
+    // Tooth values depend on the plate only through its four lateral values (a catalog has a
+    // few sets, one per gauge): each set is evaluated once per joint.
+    const lv = plate.lateralValue;
+    const key = `${lv.aa}/${lv.ea}/${lv.ae}/${lv.ee}`;
+    let tooth = toothOf.get(key);
     if (!tooth) {
-      const angles = teeth.map((t) => toothValue(plate, t));
-      const perArea = angles.map((a) => PLATES_PER_JOINT * a.lateralValue * a.heelFactor * cd);
-      tooth = toothOf[classes[p]] = { angles, perArea };
+      const governs = teeth.map((cases) => governingTooth(plate, cases));
+      const angles = governs.map((g) => g.angles);
+      tooth = {
+        angles,
+        demand: governs.map((g) => g.demand),
+        perArea: angles.map((v) => PLATES_PER_JOINT * v.lateralValue * v.heelFactor * cd),
+      };
+      toothOf.set(key, tooth);
     }
     const trial: Trial = {
       joint,
@@ -343,6 +362,7 @@ export const designJointPlate = (
       order,
       plate,
       perArea: tooth.perArea,
+      demand: tooth.demand,
       angles: tooth.angles,
       halfLength,
       halfWidth,

@@ -1,21 +1,18 @@
-import { MM_PER_INCH, N_PER_LBF } from '../units';
+import { N_PER_LBF, MM_PER_INCH } from '../units';
 import type { Point } from './geometry';
 import { foldAngle, heelReduction, lateralValue } from './lateral';
 import type { MemberPlateCheck, PlateJoint, PlateJointMember, PlateSpec } from './types';
 
-// A member's tooth values at a joint: its angles once per joint, its lateral value once per
-// distinct set of plate values (a catalog has a few gauges, many sizes).
-
 const PSI_TO_N_PER_MM2 = N_PER_LBF / (MM_PER_INCH * MM_PER_INCH);
 
-/** A member's lateral value on one plate, for the report and the tooth capacity. */
-export type ToothValue = Omit<
+/** A member's tooth angles, value (MPa per face) and heel factor, as a plate check reports them. */
+export type ToothCheck = Omit<
   MemberPlateCheck,
   'member' | 'area' | 'demand' | 'capacity' | 'ratio'
 >;
 
 /** A member's tooth angles at a joint, independent of the plate size. */
-export interface ToothAngles {
+interface ToothAngles {
   /** Plate-to-load angles to try (the load at ±θ to the member when θ ≠ 0). */
   plateToLoad: number[];
   loadToGrain: number;
@@ -27,8 +24,13 @@ export interface ToothAngles {
  * `loadToGrain` to it, to either side (the lower value is used). The top chord at a heel takes
  * the heel reduction for its slope.
  */
-export const toothAngles = (joint: PlateJoint, m: PlateJointMember, local: Point): ToothAngles => {
-  const loadToGrain = foldAngle(m.loadToGrain ?? 0);
+const toothAngles = (
+  joint: PlateJoint,
+  m: PlateJointMember,
+  local: Point,
+  toGrain: number,
+): ToothAngles => {
+  const loadToGrain = foldAngle(toGrain);
   const axisAngle = Math.atan2(local[1], local[0]);
   const plateToLoad =
     loadToGrain === 0
@@ -36,8 +38,6 @@ export const toothAngles = (joint: PlateJoint, m: PlateJointMember, local: Point
       : [foldAngle(axisAngle + loadToGrain), foldAngle(axisAngle - loadToGrain)];
   return { plateToLoad, loadToGrain, heelFactor: heelFactorOf(joint, m) };
 };
-
-const slope = (d: { x: number; y: number }) => Math.atan2(d.y, d.x);
 
 /**
  * HR for the top chord at a heel, from its slope above the bottom chord: the top chord's slope
@@ -47,12 +47,51 @@ const slope = (d: { x: number; y: number }) => Math.atan2(d.y, d.x);
 const heelFactorOf = (joint: PlateJoint, m: PlateJointMember): number => {
   if (joint.kind !== 'heel' || m.role !== 'topChord') return 1;
   const bc = joint.members.find((o) => o.role === 'bottomChord');
+  const slope = (d: { x: number; y: number }) => Math.atan2(d.y, d.x);
   const relative = bc ? slope(m.direction) - slope(bc.direction) : slope(m.direction);
   return heelReduction(relative);
 };
 
+/** One tooth load of a member: its magnitude (N, over CD) and angles. */
+export interface ToothCase {
+  force: number;
+  angles: ToothAngles;
+}
+
+/**
+ * A member's tooth loads: its `toothCases` (axial force and end shear as one vector, per load
+ * case), or its axial envelope along the grain. Cases at the same angle keep only the largest.
+ */
+export const toothCasesOf = (joint: PlateJoint, m: PlateJointMember, local: Point): ToothCase[] => {
+  const raw = m.toothCases ?? [{ force: Math.abs(m.force), loadToGrain: m.loadToGrain ?? 0 }];
+  const byAngle = new Map<number, number>();
+  for (const c of raw) {
+    const a = foldAngle(c.loadToGrain);
+    if (Math.abs(c.force) >= (byAngle.get(a) ?? -1)) byAngle.set(a, Math.abs(c.force));
+  }
+  return [...byAngle].map(([a, force]) => ({ force, angles: toothAngles(joint, m, local, a) }));
+};
+
+/**
+ * The case that governs a member on one plate: the largest demand over tooth value (the contact
+ * area is the same for every case, so this is the largest ratio wherever the plate sits).
+ */
+export const governingTooth = (plate: PlateSpec, cases: ToothCase[]) => {
+  let best = { demand: 0, angles: toothValue(plate, cases[0].angles) };
+  let worst = -1;
+  for (const c of cases) {
+    const angles = toothValue(plate, c.angles);
+    const score = c.force / angles.lateralValue;
+    if (score > worst) {
+      worst = score;
+      best = { demand: c.force, angles };
+    }
+  }
+  return best;
+};
+
 /** A member's lateral value on one plate, MPa per face, at the lowest of its angles. */
-export const toothValue = (plate: PlateSpec, t: ToothAngles): ToothValue => {
+const toothValue = (plate: PlateSpec, t: ToothAngles): ToothCheck => {
   let best = { plateToLoad: t.plateToLoad[0], value: Infinity };
   for (const a of t.plateToLoad) {
     const value = lateralValue(plate, a, t.loadToGrain);
@@ -64,18 +103,4 @@ export const toothValue = (plate: PlateSpec, t: ToothAngles): ToothValue => {
     lateralValue: best.value * PSI_TO_N_PER_MM2,
     heelFactor: t.heelFactor,
   };
-};
-
-/**
- * Per plate (in the given order), the index of its class of equal lateral values: plates of one
- * class give every member the same tooth values, so they are computed once per class.
- */
-export const toothClasses = (plates: readonly PlateSpec[]): number[] => {
-  const keys: string[] = [];
-  return plates.map((p) => {
-    const { aa, ea, ae, ee } = p.lateralValue;
-    const key = `${aa} ${ea} ${ae} ${ee}`;
-    const known = keys.indexOf(key);
-    return known >= 0 ? known : keys.push(key) - 1;
-  });
 };

@@ -76,6 +76,22 @@ export interface PlateJointMember {
    * the axial force of a member, which runs along its grain.
    */
   loadToGrain?: number;
+  /**
+   * The member's tooth loads case by case, when its load is not along its grain: each the
+   * magnitude (N, already over the case's CD like `force`) and direction to the grain of the
+   * vector sum of its axial force and its end shear at this joint. The check takes the case
+   * with the largest demand over tooth value; `force` and `loadToGrain` are then unused.
+   */
+  toothCases?: readonly { force: number; loadToGrain: number }[];
+  /**
+   * The id of the member whose board this is the far side of: the top chord's overhang beyond a
+   * heel is the same board as the top chord, so the teeth it takes hold the top chord's force.
+   * Such a part has no check or steel section of its own; its wood (up to `length`) joins that
+   * member's contact area.
+   */
+  partOf?: string;
+  /** How far this lumber runs from the joint, mm, when it ends within the plate (default: beyond). */
+  length?: Mm;
 }
 
 /** `heel` and `splice` joints also check the steel across the joint line. */

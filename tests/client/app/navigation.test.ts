@@ -20,6 +20,7 @@ describe('role navigation (product brief for the client shell and the sales desk
       'Production',
       'Demo inbox',
       'Lumber stock',
+      'Design rules',
     ]);
     expect(labels('sales')).toEqual([
       'Sales desk',
@@ -54,6 +55,7 @@ describe('role navigation (product brief for the client shell and the sales desk
       'Production',
       'Demo inbox',
       'Lumber stock',
+      'Design rules',
     ]);
     // The desk works from the price book every day: it stays on the bar.
     expect(grouped('sales')).toEqual([]);

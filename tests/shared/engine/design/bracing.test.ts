@@ -97,3 +97,54 @@ describe('the web brace the line asks for', () => {
     expect(braced('tBrace')).not.toMatch(/lateral brace/);
   });
 });
+
+/**
+ * A top chord held by purlins at 48 in (no sheathing) takes CL with lu = 48 in and Cp (weak)
+ * with le = 48 in; with sheathing both are braced. Hand arithmetic of NDS 2018 §3.3.3 / §3.7.1 /
+ * Eq. 3.9-3 on the engine's forces (the king-post top chord is one simple span hinged at heel and
+ * peak, so its span moment is its largest). 2x4 SPF No.1/No.2, D + Lr (CD = 1.25): Fc* = 1150 ×
+ * 1.25 × 1.15 = 1,653.1 psi, Fb* = 875 × 1.25 × 1.5 × 1.15 = 1,886.7 psi, Emin = 510,000 psi
+ * (Supplement Table 4A). lu/d = 48/3.5 = 13.7 → le = 1.63 × 48 + 3 × 3.5 = 88.74 in (Table 3.3.3);
+ * RB² = 88.74 × 3.5/1.5² = 138.04; FbE = 1.2 × 510,000/138.04 = 4,433.5 psi; CL = 0.96626.
+ */
+describe('top chord on purlins: CL and Cp with the purlin spacing', () => {
+  const loads = { tcll: 20, tcdl: 10, bcll: 0, bcdl: 10 };
+  const csiByHand = (purlins: number) => {
+    const d = designTruss(
+      engineInput({
+        ...kingPost16(loads),
+        ...(purlins > 0 && { bracing: { purlinSpacing: purlins } }),
+      }),
+    );
+    const tc = d.members.find((m) => m.id === 'AD')!;
+    const i = d.combinations.findIndex((c) => c.name === 'D + Lr');
+    const fc = -tc.forces[i] / N_PER_LB / 5.25;
+    const fb = tc.maxMoment / (N_PER_LB * 25.4) / 3.0625;
+    const cpOf = (fcE: number) => {
+      const a = fcE / 1653.125;
+      const h = (1 + a) / 1.6;
+      return h - Math.sqrt(h * h - a / 0.8);
+    };
+    const fcE1 = (0.822 * 510000) / (tc.length / 25.4 / 3.5) ** 2;
+    const cp =
+      purlins > 0
+        ? Math.min(cpOf(fcE1), cpOf((0.822 * 510000) / (purlins / 1.5) ** 2))
+        : cpOf(fcE1);
+    const cl = purlins > 0 ? 0.96626 : 1;
+    const index = (fc / (cp * 1653.125)) ** 2 + fb / (cl * 1886.72 * (1 - fc / fcE1));
+    return { tc, index };
+  };
+
+  it('sheathed: Eq. 3.9-3 with CL = 1', () => {
+    const { tc, index } = csiByHand(0);
+    expect(tc.governingCombination).toBe('D + Lr');
+    expect(tc.csi).toBeWithin(index, { rel: 2e-5 });
+  });
+
+  it('purlins at 48 in: Eq. 3.9-3 with CL = 0.96626 and Cp about the weak axis (le = 48 in)', () => {
+    const { tc, index } = csiByHand(48);
+    expect(tc.governingCheck).toBe('compression+bending');
+    expect(tc.csi).toBeWithin(index, { rel: 2e-5 });
+    expect(tc.csi).toBeGreaterThan(csiByHand(0).tc.csi * 1.07);
+  });
+});

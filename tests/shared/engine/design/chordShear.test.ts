@@ -80,8 +80,14 @@ describe('heel plate steel with the full force (king post, method of joints)', (
     expect(tension.demand / N_PER_LB).toBeWithin(c * sin, { rel: 0.01 });
     const ad = design.members.find((m) => m.id === 'AD')!;
     expect(shear.demand).toBeWithin(ad.maxCompression * cos, { rel: 1e-9 });
-    // Tooth holding is checked with C/CD: 772.6/1.25 = 618.1 lb.
+    // Tooth holding is checked with the chord's end force over CD: its axial force C and its end
+    // shear V = (W/2)·cosθ (a simple span hinged at heel and peak carries half its load square to
+    // it at each end) as one vector, √(772.6² + 231.8²)/1.25 = 806.6/1.25 = 645.3 lb at
+    // atan(231.8/772.6) = 16.7° to the grain.
+    const v = (w / 2) * cos;
+    expect(v).toBeWithin(231.8, { abs: 0.05 });
     const tooth = heel.design!.members.find((m) => m.member === 'AD')!;
-    expect(tooth.demand / N_PER_LB).toBeWithin(c / 1.25, { rel: 0.01 });
+    expect(tooth.demand / N_PER_LB).toBeWithin(Math.hypot(c, v) / 1.25, { rel: 0.01 });
+    expect(tooth.loadToGrain).toBeWithin(Math.atan2(v, c), { rel: 0.02 });
   });
 });

@@ -35,6 +35,8 @@ function context(axial: number[][], moment: number[][], cds: number[]): SizingCo
     spanMoment: Float64Array.from(moment.flat()),
     supportMoment: new Float64Array(moment.flat().length),
     shear: new Float64Array(moment.flat().length),
+    startShear: new Float64Array(moment.flat().length),
+    endShear: new Float64Array(moment.flat().length),
     rx: new Float64Array(2 * cds.length),
     ry: new Float64Array(2 * cds.length),
     supports: ['A', 'D'],
