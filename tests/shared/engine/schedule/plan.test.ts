@@ -330,8 +330,9 @@ describe('planSchedule against an LP feasibility check (HiGHS), one table', () =
       ),
       { numRuns: 200 },
     );
-    // Both kinds of case were exercised.
-    expect(feasibleSeen).toBeGreaterThan(20);
-    expect(infeasibleSeen).toBeGreaterThan(20);
+    // Both kinds of case were exercised (the cases are random: one run saw 19 feasible of 200,
+    // so the floor is 10, which still rules out a generator that makes only one kind).
+    expect(feasibleSeen).toBeGreaterThan(10);
+    expect(infeasibleSeen).toBeGreaterThan(10);
   }, 60_000);
 });
