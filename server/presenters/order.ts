@@ -8,7 +8,8 @@ import type {
 } from '../../shared/api/orders';
 import type { AuditEvent, Order, OrderLine, User } from '../models';
 import { summarizePortalEvent } from './portal';
-import { formatInstantUtc, formatMoney, formatShortDay } from '../services/quotePdf/format';
+import { formatDay } from '../../shared/api/terms';
+import { formatInstantUtc, formatMoney } from '../services/quotePdf/format';
 import { plannedDelivery } from '../../shared/engine/schedule';
 
 type Counted = Order & { get(k: 'lineCount' | 'trussCount'): unknown };
@@ -70,7 +71,7 @@ export function presentLine(l: OrderLine): LineDetail {
 }
 
 const d = (e: AuditEvent, k: string) => e.data[k] as string | number | undefined;
-const day = (e: AuditEvent, k: string) => formatShortDay(String(d(e, k) ?? ''));
+const day = (e: AuditEvent, k: string) => formatDay(String(d(e, k) ?? ''));
 
 /** One sentence per change, in the desk's words. */
 export function summarizeEvent(e: AuditEvent): string {

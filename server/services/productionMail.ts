@@ -3,6 +3,7 @@
  * the mail outbox inside the transaction of the change that causes them, so the PostgreSQL job
  * queue sends each exactly when that change commits (`server/services/mailQueue.ts`).
  */
+import { formatDay as formatCalendarDay } from '../../shared/api/terms';
 import type { Transaction } from 'sequelize';
 import { queueMail } from './mailQueue';
 
@@ -31,12 +32,4 @@ export async function queueBuilderMail(t: Transaction, mails: readonly BuilderMa
 }
 
 /** "2027-03-04" → "Thu 4 Mar 2027" (the day, never shifted by time zones). */
-export function formatDay(iso: string): string {
-  return new Date(`${iso}T00:00:00Z`).toLocaleDateString('en-GB', {
-    weekday: 'short',
-    day: 'numeric',
-    month: 'short',
-    year: 'numeric',
-    timeZone: 'UTC',
-  });
-}
+export const formatDay = (iso: string): string => formatCalendarDay(iso, 'weekday');

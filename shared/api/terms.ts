@@ -28,20 +28,42 @@ export const depositSentence = (amount: number, money: (v: number) => string): s
     ? `${TERMS.depositDue} ${TERMS.onAcceptance}: ${money(amount)}.`
     : `${TERMS.noDeposit}: your account terms apply.`;
 
-/**
- * A calendar date of the terms ("1 January 2027": day first, as every date the app prints), read as
- * a UTC day, never shifted by zone.
- */
-export function formatTermsDate(isoDate: string): string {
-  const d = new Date(`${isoDate.slice(0, 10)}T00:00:00Z`);
-  if (Number.isNaN(d.getTime())) return isoDate;
-  return d.toLocaleDateString('en-GB', {
+/** How a calendar day is spelled: "1 January 2027", "9 Dec 2026" or "Wed 9 Dec 2026". */
+export type DayStyle = 'long' | 'short' | 'weekday';
+
+const DAY_FORMATS: Record<DayStyle, Intl.DateTimeFormat> = {
+  long: new Intl.DateTimeFormat('en-GB', {
     day: 'numeric',
     month: 'long',
     year: 'numeric',
     timeZone: 'UTC',
-  });
+  }),
+  short: new Intl.DateTimeFormat('en-GB', {
+    day: 'numeric',
+    month: 'short',
+    year: 'numeric',
+    timeZone: 'UTC',
+  }),
+  weekday: new Intl.DateTimeFormat('en-GB', {
+    weekday: 'short',
+    day: 'numeric',
+    month: 'short',
+    year: 'numeric',
+    timeZone: 'UTC',
+  }),
+};
+
+/**
+ * A calendar day ("2027-01-01", or the day of an ISO timestamp), day first as every date the app
+ * prints, read as a UTC day so no reader's zone shifts it; the input itself when unreadable.
+ */
+export function formatDay(isoDate: string, style: DayStyle = 'short'): string {
+  const d = new Date(`${isoDate.slice(0, 10)}T00:00:00Z`);
+  return Number.isNaN(d.getTime()) ? isoDate : DAY_FORMATS[style].format(d);
 }
+
+/** A calendar date of the terms ("1 January 2027"). */
+export const formatTermsDate = (isoDate: string): string => formatDay(isoDate, 'long');
 
 /** "Valid until 1 January 2027". */
 export const validUntilText = (isoDate: string): string =>

@@ -1,3 +1,5 @@
+import { formatDay } from '../../shared/api/terms';
+
 /** Formats an ISO timestamp as a short local date and time ("12 Mar 2025, 14:05"); '—' when null. */
 export function formatDateTime(iso: string | null | undefined): string {
   if (!iso) return '—';
@@ -18,13 +20,8 @@ export function formatDateTime(iso: string | null | undefined): string {
  */
 export function formatDate(iso: string | null | undefined): string {
   if (!iso) return '—';
-  const day = /^\d{4}-\d{2}-\d{2}$/.test(iso);
-  const date = new Date(day ? `${iso}T00:00:00Z` : iso);
+  if (/^\d{4}-\d{2}-\d{2}$/.test(iso)) return formatDay(iso);
+  const date = new Date(iso);
   if (Number.isNaN(date.getTime())) return '—';
-  return date.toLocaleDateString('en-GB', {
-    day: 'numeric',
-    month: 'short',
-    year: 'numeric',
-    ...(day ? { timeZone: 'UTC' } : {}),
-  });
+  return date.toLocaleDateString('en-GB', { day: 'numeric', month: 'short', year: 'numeric' });
 }

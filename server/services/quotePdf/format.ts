@@ -1,5 +1,5 @@
 /** Money, dates and numbers as the printed quote and its e-mail show them. */
-import { formatTermsDate } from '../../../shared/api/terms';
+import { formatDay, formatTermsDate } from '../../../shared/api/terms';
 
 /** "$1,234.50" in the quote's currency (en-US grouping; any ISO code). */
 export function formatMoney(amount: number, currency: string): string {
@@ -16,23 +16,11 @@ export function formatDate(date: string | Date): string {
   return formatTermsDate(typeof date === 'string' ? date : date.toISOString());
 }
 
-/** "9 Dec 2026": a calendar day in a line of history, never shifted by time zones. */
-export function formatShortDay(iso: string): string {
-  const d = new Date(`${iso.slice(0, 10)}T00:00:00Z`);
-  if (Number.isNaN(d.getTime())) return iso;
-  return d.toLocaleDateString('en-GB', {
-    day: 'numeric',
-    month: 'short',
-    year: 'numeric',
-    timeZone: 'UTC',
-  });
-}
-
 /** "30 Nov 2026, 14:05 UTC": an instant in a line of history (the server knows no plant zone). */
 export function formatInstantUtc(iso: string): string {
   const d = new Date(iso);
   if (Number.isNaN(d.getTime())) return iso;
-  return `${formatShortDay(d.toISOString())}, ${d.toISOString().slice(11, 16)} UTC`;
+  return `${formatDay(d.toISOString())}, ${d.toISOString().slice(11, 16)} UTC`;
 }
 
 /** A plain number with grouping and at most (`fixed`: exactly) `digits` decimals, e.g. "1,234.5". */
