@@ -1,16 +1,11 @@
-import { afterAll, beforeAll, describe, expect, it } from 'vitest';
-import type { BrowserContext } from 'playwright-core';
-import type { Server } from 'node:http';
-import { testApp } from '../support/db';
+import { beforeAll, describe, expect, it } from 'vitest';
 import { createPlant, createUser } from '../support/factories';
-import { launchBrowser, listen, SCREENSHOTS, signInAs } from '../support/browser';
+import { SCREENSHOTS, signInAs } from '../support/browser';
+import { servedBrowser } from '../support/servedBrowser';
 import { Plant, type User } from '../../server/models';
 import { saveDesignRules } from '../../server/commands/designRules';
 
-let browser: BrowserContext;
-let closeBrowser: () => Promise<void>;
-let server: Server;
-let base: string;
+const web = servedBrowser();
 let admin: User;
 let otherAdmin: User;
 let plant: Plant;
@@ -19,26 +14,18 @@ beforeAll(async () => {
   plant = await createPlant({ name: 'Design Rules Plant' });
   admin = await createUser({ role: 'admin', plant });
   otherAdmin = await createUser({ role: 'admin', plant });
-  const app = testApp({ demo: true }, 'dist/client');
-  ({ server, url: base } = await listen(app));
-  ({ browser, close: closeBrowser } = await launchBrowser());
-});
-
-afterAll(async () => {
-  await closeBrowser?.();
-  server?.close();
 });
 
 const storedRules = async () => (await Plant.findByPk(plant.id))!.settings?.designRules;
 
 describe('design rules in a browser', () => {
   it('the plant manager turns on the stricter §3.9.2 check from the Plant menu, and a stale save says so', async () => {
-    const page = await browser.newPage();
+    const page = await web.browser.newPage();
     await page.setViewportSize({ width: 1280, height: 800 });
-    await signInAs(browser, page, base, admin.email);
+    await signInAs(web.browser, page, web.base, admin.email);
     await page.getByRole('button', { name: 'Plant' }).click();
     await page.getByRole('link', { name: 'Design rules' }).click();
-    await page.waitForURL(`${base}/design-rules`);
+    await page.waitForURL(`${web.base}/design-rules`);
     await page.getByRole('heading', { name: 'Design rules', level: 1 }).waitFor();
 
     const common = page.getByRole('radio', { name: /Common practice/ });

@@ -1,7 +1,5 @@
-import { afterAll, beforeAll, describe, expect, it } from 'vitest';
-import type { BrowserContext, Page } from 'playwright-core';
-import type { Server } from 'node:http';
-import { testApp } from '../support/db';
+import { beforeAll, describe, expect, it } from 'vitest';
+import type { Page } from 'playwright-core';
 import {
   createCustomer,
   createJob,
@@ -10,19 +8,17 @@ import {
   createPlant,
   createUser,
 } from '../support/factories';
-import { launchBrowser, listen, SCREENSHOTS, signInAs } from '../support/browser';
+import { SCREENSHOTS, signInAs } from '../support/browser';
+import { servedBrowser } from '../support/servedBrowser';
 import { AuditEvent, MailMessage, Order, OrderLine, type User } from '../../server/models';
 
-let browser: BrowserContext;
-let closeBrowser: () => Promise<void>;
-let server: Server;
-let base: string;
+const web = servedBrowser();
 let admin: User;
 let foreman: User;
 let accepted: Order;
 let ready: Order;
 
-const signIn = (page: Page, user: User) => signInAs(browser, page, base, user.email);
+const signIn = (page: Page, user: User) => signInAs(web.browser, page, web.base, user.email);
 /** A card of the page by its title. */
 const cardOf = (page: Page, title: string) =>
   page.locator('section', { has: page.getByRole('heading', { name: title, exact: true }) });
@@ -43,22 +39,14 @@ beforeAll(async () => {
   foreman = await createUser({ role: 'foreman', plant });
   accepted = await orderOf(plant.id, 'Cedar Point Homes', 'accepted');
   ready = await orderOf(plant.id, 'Dunmore Framing', 'ready');
-  const app = testApp({ demo: true }, 'dist/client');
-  ({ server, url: base } = await listen(app));
-  ({ browser, close: closeBrowser } = await launchBrowser());
-});
-
-afterAll(async () => {
-  await closeBrowser?.();
-  server?.close();
 });
 
 describe('production changes from the order page and the board', () => {
   it('the plant manager promises a date, changes it with a reason, holds and releases', async () => {
-    const page = await browser.newPage();
+    const page = await web.browser.newPage();
     await page.setViewportSize({ width: 1440, height: 900 });
     await signIn(page, admin);
-    await page.goto(`${base}/orders/${accepted.id}`);
+    await page.goto(`${web.base}/orders/${accepted.id}`);
     const card = cardOf(page, 'Production');
     await card.getByText('Not promised yet').waitFor();
 
@@ -101,10 +89,10 @@ describe('production changes from the order page and the board', () => {
   });
 
   it('the foreman signs off a delivery from the board on the tablet', async () => {
-    const page = await browser.newPage();
+    const page = await web.browser.newPage();
     await page.setViewportSize({ width: 1024, height: 768 });
     await signIn(page, foreman);
-    await page.goto(`${base}/schedule`);
+    await page.goto(`${web.base}/schedule`);
     const card = cardOf(page, 'Ready to deliver');
     await card.getByText(ready.number).waitFor();
     await card.getByRole('button', { name: 'Sign off delivery' }).click();

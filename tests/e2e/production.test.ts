@@ -1,7 +1,5 @@
-import { afterAll, beforeAll, describe, expect, it } from 'vitest';
-import type { BrowserContext, Page } from 'playwright-core';
-import type { Server } from 'node:http';
-import { testApp } from '../support/db';
+import { beforeAll, describe, expect, it } from 'vitest';
+import type { Page } from 'playwright-core';
 import {
   createCustomer,
   createJob,
@@ -10,21 +8,19 @@ import {
   createPlant,
   createUser,
 } from '../support/factories';
-import { launchBrowser, listen, SCREENSHOTS, signInAs } from '../support/browser';
+import { SCREENSHOTS, signInAs } from '../support/browser';
+import { servedBrowser } from '../support/servedBrowser';
 import { Order, OrderLine, ProductionSettings, type User } from '../../server/models';
 import { releaseIfReady } from '../../server/commands/release';
 import { addCalendarDays } from '../../shared/engine/schedule';
 
-let browser: BrowserContext;
-let closeBrowser: () => Promise<void>;
-let server: Server;
-let base: string;
+const web = servedBrowser();
 let foreman: User;
 let stays: Order;
 let moves: Order;
 const today = new Date().toISOString().slice(0, 10);
 
-const signIn = (page: Page, user: User) => signInAs(browser, page, base, user.email);
+const signIn = (page: Page, user: User) => signInAs(web.browser, page, web.base, user.email);
 
 /** A paid order with approved lines, released by the gate itself. */
 async function releasedOrder(plantId: number, builder: string, marks: string[]) {
@@ -57,22 +53,14 @@ beforeAll(async () => {
   });
   stays = await releasedOrder(plant.id, 'Alder Ridge Homes', ['T1', 'T2']);
   moves = await releasedOrder(plant.id, 'Birchwood Builders', ['A1']);
-  const app = testApp({ demo: true }, 'dist/client');
-  ({ server, url: base } = await listen(app));
-  ({ browser, close: closeBrowser } = await launchBrowser());
-});
-
-afterAll(async () => {
-  await closeBrowser?.();
-  server?.close();
 });
 
 describe('production in a browser', () => {
   it('the foreman drags an order to another table and day on the board', async () => {
-    const page = await browser.newPage();
+    const page = await web.browser.newPage();
     await page.setViewportSize({ width: 1440, height: 900 });
     await signIn(page, foreman);
-    await page.goto(`${base}/schedule`);
+    await page.goto(`${web.base}/schedule`);
     const block = page.getByTestId(`block-${moves.id}-${today}`);
     await block.waitFor();
     const target = addCalendarDays(today, 2);
@@ -96,10 +84,10 @@ describe('production in a browser', () => {
   });
 
   it('the foreman moves an order a day back with the keyboard alone', async () => {
-    const page = await browser.newPage();
+    const page = await web.browser.newPage();
     await page.setViewportSize({ width: 1024, height: 768 });
     await signIn(page, foreman);
-    await page.goto(`${base}/schedule`);
+    await page.goto(`${web.base}/schedule`);
     // Where the drag above left it: South, two days on.
     const from = addCalendarDays(today, 2);
     const block = page.getByTestId(`block-${moves.id}-${from}`);
@@ -117,10 +105,10 @@ describe('production in a browser', () => {
   });
 
   it('records progress on the tablet page, also while the network is away', async () => {
-    const page = await browser.newPage();
+    const page = await web.browser.newPage();
     await page.setViewportSize({ width: 1024, height: 768 });
     await signIn(page, foreman);
-    await page.goto(`${base}/floor`);
+    await page.goto(`${web.base}/floor`);
     const card = page.getByRole('region', { name: `${stays.number} T1` });
     await card.getByRole('button', { name: /0 of 4\s*cut/ }).click();
     await card.getByRole('button', { name: /1 of 4\s*cut/ }).waitFor();
@@ -128,13 +116,13 @@ describe('production in a browser', () => {
     await expect.poll(async () => (await line!.reload()).cutCount).toBe(1);
     expect((await Order.findByPk(stays.id))!.status).toBe('in_production');
 
-    await browser.setOffline(true);
+    await web.browser.setOffline(true);
     await card.getByRole('button', { name: /1 of 4\s*cut/ }).click();
     await page.getByText('1 change waiting for the network').waitFor();
     await card.getByRole('button', { name: /2 of 4\s*cut/ }).waitFor();
     await page.screenshot({ path: `${SCREENSHOTS}/floor-offline.png` });
     expect((await line!.reload()).cutCount).toBe(1);
-    await browser.setOffline(false);
+    await web.browser.setOffline(false);
     await page.evaluate(() => window.dispatchEvent(new Event('online')));
     await expect.poll(async () => (await line!.reload()).cutCount).toBe(2);
     await page.getByText(/waiting/).waitFor({ state: 'detached' });

@@ -1,7 +1,5 @@
-import { afterAll, beforeAll, describe, expect, it } from 'vitest';
-import type { BrowserContext, Page } from 'playwright-core';
-import type { Server } from 'node:http';
-import { testApp } from '../support/db';
+import { beforeAll, describe, expect, it } from 'vitest';
+import type { Page } from 'playwright-core';
 import {
   createCustomer,
   createJob,
@@ -10,30 +8,28 @@ import {
   createPlant,
   createUser,
 } from '../support/factories';
-import { launchBrowser, listen, SCREENSHOTS, signInAs } from '../support/browser';
+import { SCREENSHOTS, signInAs } from '../support/browser';
+import { servedBrowser } from '../support/servedBrowser';
 import { Order, ProductionSettings, SchedulePlacement, type User } from '../../server/models';
 import { releaseIfReady } from '../../server/commands/release';
 import { addCalendarDays } from '../../shared/engine/schedule';
 
-let browser: BrowserContext;
-let closeBrowser: () => Promise<void>;
-let server: Server;
-let base: string;
+const web = servedBrowser();
 let admin: User;
 let foreman: User;
 let order: Order;
 const today = new Date().toISOString().slice(0, 10);
 
-const signIn = (page: Page, user: User) => signInAs(browser, page, base, user.email);
+const signIn = (page: Page, user: User) => signInAs(web.browser, page, web.base, user.email);
 const cardOf = (page: Page, title: string) =>
   page.locator('section', { has: page.getByRole('heading', { name: title, exact: true }) });
 
 /** The board on the foreman's tablet, with the order's first block tapped. */
 async function boardWithPanel(user: User) {
-  const page = await browser.newPage();
+  const page = await web.browser.newPage();
   await page.setViewportSize({ width: 1024, height: 768 });
   await signIn(page, user);
-  await page.goto(`${base}/schedule`);
+  await page.goto(`${web.base}/schedule`);
   await page.getByTestId(`block-${order.id}-${today}`).click();
   await cardOf(page, `Order ${order.number}`).getByText('Planned to finish').waitFor();
   return page;
@@ -60,14 +56,6 @@ beforeAll(async () => {
   await createLine({ order, mark: 'T1', reviewState: 'approved' });
   await order.update({ status: 'deposit_paid', promisedOn: addCalendarDays(today, 6) });
   expect(await releaseIfReady(null, order.id)).toBe(true);
-  const app = testApp({ demo: true }, 'dist/client');
-  ({ server, url: base } = await listen(app));
-  ({ browser, close: closeBrowser } = await launchBrowser());
-});
-
-afterAll(async () => {
-  await closeBrowser?.();
-  server?.close();
 });
 
 describe('hold and release from the schedule board', () => {
