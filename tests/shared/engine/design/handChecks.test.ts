@@ -224,27 +224,38 @@ describe('minimum and unbalanced snow on the design (ASCE 7-16 §7.3.4, §7.6.1)
   });
 });
 
+/** The 24 ft 4/12 Fink at 115 mph, exposure C, h = 15 ft, with the given overhangs (in.). */
+const windFink = (overhang: number) =>
+  designTruss(
+    engineInput(
+      lightFink({
+        overhang,
+        loads: {
+          tcll: 20,
+          tcdl: 10,
+          bcll: 0,
+          bcdl: 10,
+          wind: { speed: 115, exposure: 'C', meanRoofHeight: 15 * 12 },
+        },
+      }),
+    ),
+  );
+
+/**
+ * Its pressures by hand: qh = 0.00256·Kz·Kd·V² (ASCE 7-16 Eq. 26.10-1, Kz 2.01(15/900)^(2/9.5),
+ * Kd 0.85), roof zones 2/3 of Fig. 28.3-1 (from memory) at θ = 18.4°, net of +GCpi = 0.18;
+ * pw windward, pl leeward, psf, + toward the roof.
+ */
+const windByHand = () => {
+  const qh = 0.00256 * 2.01 * (15 / 900) ** (2 / 9.5) * 0.85 * 115 ** 2;
+  const zone3 = -0.37 - (0.11 * (deg(4) - 5)) / 15;
+  return { qh, zone3, pw: qh * (-0.69 - 0.18), pl: qh * (zone3 - 0.18) };
+};
+
 describe('wind on the design (ASCE 7-16 Ch. 28 envelope), by hand', () => {
   it('24 ft 4/12 Fink, no overhang, 115 mph, exposure C, h = 15 ft: case A from the left, +GCpi', () => {
-    const d = designTruss(
-      engineInput(
-        lightFink({
-          overhang: 0,
-          loads: {
-            tcll: 20,
-            tcdl: 10,
-            bcll: 0,
-            bcdl: 10,
-            wind: { speed: 115, exposure: 'C', meanRoofHeight: 15 * 12 },
-          },
-        }),
-      ),
-    );
-    const qh = 0.00256 * 2.01 * (15 / 900) ** (2 / 9.5) * 0.85 * 115 ** 2; // psf
-    const theta = (Math.atan(4 / 12) * 180) / Math.PI;
-    const zone3 = -0.37 - (0.11 * (theta - 5)) / 15;
-    const pw = qh * (-0.69 - 0.18); // net, + toward the roof
-    const pl = qh * (zone3 - 0.18);
+    const d = windFink(0);
+    const { pw, pl } = windByHand();
     // Normal pressure on a slope: its vertical part per unit horizontal run is p; its horizontal
     // part per unit rise is p. Run 12 ft each side, rise 4 ft, spacing 2 ft.
     const up = -(pw + pl) * 12 * SPACING_FT;
@@ -259,5 +270,20 @@ describe('wind on the design (ASCE 7-16 Ch. 28 envelope), by hand', () => {
     expect(h).toBeWithin(-0.6 * fx, { rel: 1e-6 });
     expect(d.notes.join(' ')).toMatch(/Ch\. 28 envelope/);
     expect(d.combinations.filter((c) => /W\[/.test(c.name)).length).toBeGreaterThanOrEqual(16);
+  });
+
+  // A truss with overhangs under wind (engine 1.4.1: the overhang-only wind loads used to drop the
+  // member the overhang continues, and every design with an overhang and a wind site was refused).
+  // 12 in. overhangs: the overhang top takes qh·GCpf only and the windward soffit qh·0.7 upward
+  // (§28.3.3, from memory). Vertical per unit horizontal run: p.
+  it('with 12 in. overhangs: the uplift includes the overhangs and the windward soffit', () => {
+    const d = windFink(12);
+    const { qh, zone3, pw, pl } = windByHand();
+    // 12 ft of roof and 1 ft of overhang each side, 2 ft spacing (lb, + up).
+    const up = (-(pw + pl) * 12 - qh * (-0.69 + zone3) * 1 + 0.7 * qh * 1) * SPACING_FT;
+    const sumV = (k: number) => lb(d.reactions[0].vertical[k] + d.reactions[1].vertical[k]);
+    expect(sumV(combo(d, 'D')) - sumV(combo(d, 'D + 0.6W[AL+]'))).toBeWithin(0.6 * up, {
+      rel: 1e-6,
+    });
   });
 });
