@@ -59,6 +59,10 @@ const ratioOf = (demand: number, capacity: number) =>
 // larger plate never gives a member less area.
 const SLIDE_STEP_MM = 0.25 * MM_PER_INCH;
 
+// Relative slack before the summed-area bound drops a plate: a plate that holds its members
+// with areas summing to its own (to rounding) must still be tried.
+const AREA_SLACK = 1e-9;
+
 /**
  * How many grid steps the plate may slide across its length axis to either side: as far as it
  * still covers the chord's depth (its edge at the chord's far face), so it reaches further onto
@@ -78,15 +82,37 @@ const chordHalfDepth = (local: LocalMember[]) => {
   return half;
 };
 
+/** A catalog plate with the numbers every trial needs, worked out once per catalog. */
+interface CatalogPlate {
+  spec: PlateSpec;
+  halfLength: number;
+  halfWidth: number;
+  /** Index of its set of four lateral values (tooth values depend on the plate only through it). */
+  lateralSet: number;
+}
+
 // Each catalog sorted once (catalogs are immutable values), with the reach its largest plate needs.
-const sortedCatalogs = new WeakMap<PlateCatalog, { plates: PlateSpec[]; reach: number }>();
+const sortedCatalogs = new WeakMap<PlateCatalog, { plates: CatalogPlate[]; reach: number }>();
 const sortedPlates = (catalog: PlateCatalog) => {
   let entry = sortedCatalogs.get(catalog);
   if (!entry) {
-    const plates = [...catalog.plates].sort(byAreaThenGauge);
+    const specs = [...catalog.plates].sort(byAreaThenGauge);
     // Far enough for the corner of any plate slid by up to its own half width.
     const reach =
-      Math.max(...plates.map((p) => Math.hypot(2 * p.width, p.length))) * (MM_PER_INCH / 2) + 1;
+      Math.max(...specs.map((p) => Math.hypot(2 * p.width, p.length))) * (MM_PER_INCH / 2) + 1;
+    const sets = new Map<string, number>();
+    const plates = specs.map((spec) => {
+      const lv = spec.lateralValue;
+      const key = `${lv.aa}/${lv.ea}/${lv.ae}/${lv.ee}`;
+      let lateralSet = sets.get(key);
+      if (lateralSet === undefined) sets.set(key, (lateralSet = sets.size));
+      return {
+        spec,
+        halfLength: (spec.length * MM_PER_INCH) / 2,
+        halfWidth: (spec.width * MM_PER_INCH) / 2,
+        lateralSet,
+      };
+    });
     entry = { plates, reach };
     sortedCatalogs.set(catalog, entry);
   }
@@ -159,8 +185,9 @@ const capacityOf = (t: Trial, i: number, area: number): number => area * t.perAr
 
 /** Moves order[k] to the front (no spread: this runs for most plates tried). */
 const toFront = (order: number[], k: number) => {
-  const [i] = order.splice(k, 1);
-  order.unshift(i);
+  const i = order[k];
+  for (let j = k; j > 0; j--) order[j] = order[j - 1];
+  order[0] = i;
 };
 
 /** Moves member i to the front of the check order and reports it as the plate's failure. */
@@ -223,20 +250,36 @@ const nearestSlide = (t: Trial, side: number, k1: number, k2: number): Fit | und
 /**
  * Tooth holding of every member for one plate, centred or at the slide nearest the centre
  * that holds them all, or the member that fails at the best slide tried (for the message when
- * no plate fits).
+ * no plate fits). `exact` (the catalog's last plate, whose failure is reported) skips the
+ * bounds that only tell that some member fails, not which fails by the least.
  */
-const placePlate = (t: Trial, local: LocalMember[], frame: PlateFrame): Placement => {
+const placePlate = (
+  t: Trial,
+  local: LocalMember[],
+  frame: PlateFrame,
+  exact: boolean,
+): Placement => {
   const { steps } = frame;
+  const plateArea = 4 * t.halfLength * t.halfWidth;
   // Cheap bound, for every slide at once: a member's band (its depth less the edge margins)
   // holds no more than out to the far corner of the plate slid furthest, nor the whole plate.
   const reachInPlate =
     Math.hypot(t.halfLength, t.halfWidth + steps * SLIDE_STEP_MM) - frame.endExclusion;
+  let needed = 0;
   for (const i of t.order) {
     const band = 2 * Math.max(0, local[i].halfDepth - frame.edgeExclusion) * reachInPlate;
-    const area = Math.min(4 * t.halfLength * t.halfWidth, Math.max(0, band));
+    const area = Math.min(plateArea, Math.max(0, band));
     if (t.demand[i] > capacityOf(t, i, area)) {
       return failing(t, i, Infinity);
     }
+    if (t.demand[i] > 0) needed += t.demand[i] / t.perArea[i];
+  }
+  if (!exact) {
+    // The members' contact regions are disjoint, so together they hold no more than the plate.
+    if (needed > plateArea * (1 + AREA_SLACK)) return failing(t, t.order[0], Infinity);
+    // No slide within ±steps gives any member more than the plate swept across all of them.
+    if (steps > 0 && !checksAt(t, 0, steps * SLIDE_STEP_MM))
+      return failing(t, t.order[0], Infinity);
   }
   const centred = checksAt(t, 0, 0);
   if (centred) return { offset: 0, checks: centred };
@@ -252,6 +295,11 @@ const LINE_TEXT: Record<SteelCheck['line'], string> = {
   chordFace: "across the chord's face",
   joint: 'across the joint line',
 };
+
+const steelFailure = (s: SteelCheck) => ({
+  member: `${s.member} (steel ${s.kind} ${LINE_TEXT[s.line]})`,
+  ratio: s.ratio,
+});
 
 /** Largest ratio of the tooth and steel checks, at least 0 (as Math.max over all of them). */
 const largestRatio = (checks: MemberPlateCheck[], steel: SteelCheck[]) => {
@@ -328,24 +376,12 @@ export const designJointPlate = (
   const sections = steelSections(joint.kind, local, joint.members);
 
   // Per set of lateral values: each member's governing tooth case, its demand and capacity per area.
-  const toothOf = new Map<string, { angles: ToothCheck[]; demand: number[]; perArea: number[] }>();
-  for (const plate of plates) {
-    const halfLength = (plate.length * MM_PER_INCH) / 2;
-    const halfWidth = (plate.width * MM_PER_INCH) / 2;
-    const steel = steelChecks(sections, plate, halfLength, halfWidth);
-    const badSteel = steel.find((s) => s.ratio > 1);
-    if (badSteel) {
-      failure = {
-        member: `${badSteel.member} (steel ${badSteel.kind} ${LINE_TEXT[badSteel.line]})`,
-        ratio: badSteel.ratio,
-      };
-      continue;
-    }
-    // Tooth values depend on the plate only through its four lateral values (a catalog has a
-    // few sets, one per gauge): each set is evaluated once per joint.
-    const lv = plate.lateralValue;
-    const key = `${lv.aa}/${lv.ea}/${lv.ae}/${lv.ee}`;
-    let tooth = toothOf.get(key);
+  const toothOf: { angles: ToothCheck[]; demand: number[]; perArea: number[] }[] = [];
+  const slides = new Map<number, number>();
+  for (let p = 0; p < plates.length; p++) {
+    const { spec: plate, halfLength, halfWidth, lateralSet } = plates[p];
+    const last = p === plates.length - 1;
+    let tooth = toothOf[lateralSet];
     if (!tooth) {
       const governs = teeth.map((cases) => governingTooth(plate, cases));
       const angles = governs.map((g) => g.angles);
@@ -354,7 +390,18 @@ export const designJointPlate = (
         demand: governs.map((g) => g.demand),
         perArea: angles.map((v) => PLATES_PER_JOINT * v.lateralValue * v.heelFactor * cd),
       };
-      toothOf.set(key, tooth);
+      toothOf[lateralSet] = tooth;
+    }
+    let steps = slides.get(halfWidth);
+    if (steps === undefined)
+      slides.set(halfWidth, (steps = slideSteps(joint.kind, chordHalf, halfWidth)));
+    // The steel is checked first on the last plate only, whose failure is the one reported;
+    // elsewhere after the teeth, which drop most plates for less work (the same plate is chosen).
+    const steelFirst = last ? steelChecks(sections, plate, halfLength, halfWidth) : undefined;
+    const badSteelFirst = steelFirst?.find((s) => s.ratio > 1);
+    if (badSteelFirst) {
+      failure = steelFailure(badSteelFirst);
+      continue;
     }
     const trial: Trial = {
       joint,
@@ -368,13 +415,15 @@ export const designJointPlate = (
       halfWidth,
       best: { i: order[0], ratio: Infinity },
     };
-    const fit = placePlate(trial, local, {
-      steps: slideSteps(joint.kind, chordHalf, halfWidth),
-      endExclusion,
-      edgeExclusion,
-    });
+    const fit = placePlate(trial, local, { steps, endExclusion, edgeExclusion }, last);
     if ('failure' in fit) {
       failure = fit.failure;
+      continue;
+    }
+    const steel = steelFirst ?? steelChecks(sections, plate, halfLength, halfWidth);
+    const badSteel = steel.find((s) => s.ratio > 1);
+    if (badSteel) {
+      failure = steelFailure(badSteel);
       continue;
     }
     const { checks, offset } = fit;
