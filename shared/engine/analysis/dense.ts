@@ -73,41 +73,57 @@ export function luSolve(f: LuFactors, b: ArrayLike<number>, x: Float64Array): vo
 export interface CholeskyFactors {
   readonly n: number;
   readonly l: Float64Array;
+  /**
+   * Per row, its first column that may be non-zero (the envelope): L keeps A's envelope, so the
+   * entries left of it are exact zeros that no sum needs to visit.
+   */
+  readonly first: Int32Array;
   /** Smallest ratio pivot² / original diagonal; ≤ 0 means not positive definite. */
   readonly minPivotRatio: number;
 }
 
-/** Factorises the symmetric n×n matrix `a` in place (only its lower triangle is read). */
+/**
+ * Factorises the symmetric n×n matrix `a` in place (only its lower triangle is read), within each
+ * row's envelope: a stiffness matrix numbered along the structure is mostly zeros, and the
+ * skipped products are exact zeros, so the factor is the same to the last bit.
+ */
 export function choleskyFactor(a: Float64Array, n: number): CholeskyFactors {
+  const first = new Int32Array(n);
+  for (let i = 0; i < n; i++) {
+    let c = 0;
+    while (c < i && a[i * n + c] === 0) c++;
+    first[i] = c;
+  }
   let minPivotRatio = Infinity;
   for (let k = 0; k < n; k++) {
     const diag = a[k * n + k];
     let s = diag;
-    for (let c = 0; c < k; c++) s -= a[k * n + c] * a[k * n + c];
+    for (let c = first[k]; c < k; c++) s -= a[k * n + c] * a[k * n + c];
     minPivotRatio = Math.min(minPivotRatio, diag > 0 ? s / diag : 0);
-    if (!(s > 0)) return { n, l: a, minPivotRatio: Math.min(minPivotRatio, 0) };
+    if (!(s > 0)) return { n, l: a, first, minPivotRatio: Math.min(minPivotRatio, 0) };
     const d = Math.sqrt(s);
     a[k * n + k] = d;
     for (let i = k + 1; i < n; i++) {
+      if (first[i] > k) continue;
       let t = a[i * n + k];
-      for (let c = 0; c < k; c++) t -= a[i * n + c] * a[k * n + c];
+      for (let c = Math.max(first[i], first[k]); c < k; c++) t -= a[i * n + c] * a[k * n + c];
       a[i * n + k] = t / d;
     }
   }
-  return { n, l: a, minPivotRatio: n === 0 ? Infinity : minPivotRatio };
+  return { n, l: a, first, minPivotRatio: n === 0 ? Infinity : minPivotRatio };
 }
 
 /** Solves A·x = b with the Cholesky factors; `x` may alias `b`. Allocates nothing. */
 export function choleskySolve(f: CholeskyFactors, b: ArrayLike<number>, x: Float64Array): void {
-  const { n, l } = f;
+  const { n, l, first } = f;
   for (let i = 0; i < n; i++) {
     let s = b[i];
-    for (let c = 0; c < i; c++) s -= l[i * n + c] * x[c];
+    for (let c = first[i]; c < i; c++) s -= l[i * n + c] * x[c];
     x[i] = s / l[i * n + i];
   }
   for (let i = n - 1; i >= 0; i--) {
     let s = x[i];
-    for (let r = i + 1; r < n; r++) s -= l[r * n + i] * x[r];
+    for (let r = i + 1; r < n; r++) if (first[r] <= i) s -= l[r * n + i] * x[r];
     x[i] = s / l[i * n + i];
   }
 }
