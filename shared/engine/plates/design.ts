@@ -1,9 +1,9 @@
 import { EngineError } from '../errors';
 import { MM_PER_INCH, TOLERANCE } from '../units';
-import { memberContactRegions, type LocalMember } from './contact';
+import { memberContactRegions, type LocalMember, type Region } from './contact';
 import { placePlate, slideSteps, type Trial } from './placement';
 import type { Point } from './geometry';
-import { governingTooth, toothCasesOf, type ToothCheck } from './teeth';
+import { governingTooth, toothCasesOf, type ToothCase, type ToothCheck } from './teeth';
 import { steelChecks, steelSections } from './steel';
 import type {
   Direction,
@@ -176,36 +176,55 @@ export const designJointPlate = (
   const cd = options.cd ?? 1;
   // Board parts (an overhang beyond a heel) lend their wood to the member they continue and
   // leave the checks; everything but the contact regions sees the members proper only.
-  const kept = given.members.flatMap((m, i) => (m.partOf === undefined ? [i] : []));
+  // Plain loops, no spreads: this runs for every joint of every design.
+  const kept: number[] = [];
+  for (let i = 0; i < given.members.length; i++) {
+    if (given.members[i].partOf === undefined) kept.push(i);
+  }
   const joint =
     kept.length < given.members.length
       ? { ...given, members: kept.map((i) => given.members[i]) }
       : given;
   const axis = plateAxis(joint, options);
-  const allLocal: LocalMember[] = given.members.map((m) => {
+  const allLocal: LocalMember[] = [];
+  for (const m of given.members) {
     const [x, y] = unit(m.direction, `Member ${m.id}`);
-    return {
+    const lm: LocalMember = {
       role: m.role,
       direction: [x * axis[0] + y * axis[1], -x * axis[1] + y * axis[0]],
       halfDepth: m.depth / 2,
-      ...(m.length !== undefined && { length: m.length }),
     };
-  });
+    if (m.length !== undefined) lm.length = m.length;
+    allLocal.push(lm);
+  }
   const { plates, reach } = sortedPlates(catalog);
   const chordHalf = chordHalfDepth(allLocal);
   const endExclusion = options.endExclusion ?? END_EXCLUSION_MM;
   const edgeExclusion = options.edgeExclusion ?? EDGE_EXCLUSION_MM;
   const allRegions = memberContactRegions(allLocal, { endExclusion, edgeExclusion, reach });
-  const regions = kept.map((i) =>
-    allRegions[i].concat(
-      ...given.members.flatMap((p, j) => (p.partOf === given.members[i].id ? [allRegions[j]] : [])),
-    ),
-  );
-  const local = kept.map((i) => allLocal[i]);
+  const regions: Region[] = [];
+  const local: LocalMember[] = [];
+  for (const i of kept) {
+    let region = allRegions[i];
+    for (let j = 0; j < given.members.length; j++) {
+      if (given.members[j].partOf === given.members[i].id) region = region.concat(allRegions[j]);
+    }
+    regions.push(region);
+    local.push(allLocal[i]);
+  }
   // Most loaded members first: they fail soonest, so a too-small plate is dropped early.
-  const teeth = joint.members.map((m, i) => toothCasesOf(joint, m, local[i].direction));
-  const largest = teeth.map((cases) => Math.max(...cases.map((c) => c.force)));
-  const order: number[] = joint.members.map((_, i) => i).sort((a, b) => largest[b] - largest[a]);
+  const teeth: ToothCase[][] = [];
+  const largest: number[] = [];
+  const order: number[] = [];
+  for (let i = 0; i < joint.members.length; i++) {
+    const cases = toothCasesOf(joint, joint.members[i], local[i].direction);
+    let most = -Infinity;
+    for (const c of cases) if (c.force > most) most = c.force;
+    teeth.push(cases);
+    largest.push(most);
+    order.push(i);
+  }
+  order.sort((a, b) => largest[b] - largest[a]);
   let failure = { member: '', ratio: 0 };
   const sections = steelSections(joint.kind, local, joint.members);
 

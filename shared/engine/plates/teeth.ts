@@ -64,12 +64,23 @@ export interface ToothCase {
  */
 export const toothCasesOf = (joint: PlateJoint, m: PlateJointMember, local: Point): ToothCase[] => {
   const raw = m.toothCases ?? [{ force: Math.abs(m.force), loadToGrain: m.loadToGrain ?? 0 }];
-  const byAngle = new Map<number, number>();
+  // Parallel arrays, not a Map and a spread: a handful of cases, for every member of every joint.
+  const angles: number[] = [];
+  const forces: number[] = [];
   for (const c of raw) {
     const a = foldAngle(c.loadToGrain);
-    if (Math.abs(c.force) >= (byAngle.get(a) ?? -1)) byAngle.set(a, Math.abs(c.force));
+    const f = Math.abs(c.force);
+    const k = angles.indexOf(a);
+    if (k < 0) {
+      angles.push(a);
+      forces.push(f);
+    } else if (f >= forces[k]) forces[k] = f;
   }
-  return [...byAngle].map(([a, force]) => ({ force, angles: toothAngles(joint, m, local, a) }));
+  const out: ToothCase[] = [];
+  for (let k = 0; k < angles.length; k++) {
+    out.push({ force: forces[k], angles: toothAngles(joint, m, local, angles[k]) });
+  }
+  return out;
 };
 
 /**
