@@ -107,6 +107,12 @@ function jointIssues(model: TrussModel): ValidationIssue[] {
   return issues;
 }
 
+const unknownEnd = (id: string, end: string): ValidationIssue => ({
+  kind: 'unknown_joint',
+  message: `member "${id}" refers to unknown joint "${end}"`,
+  ids: [id, end],
+});
+
 function memberIssues(model: TrussModel, byId: ReadonlyMap<string, { x: number; y: number }>) {
   const issues: ValidationIssue[] = [];
   const seen = new Set<string>();
@@ -124,18 +130,8 @@ function memberIssues(model: TrussModel, byId: ReadonlyMap<string, { x: number; 
     seen.add(id);
     const a = byId.get(m.from);
     const b = byId.get(m.to);
-    for (const [end, joint] of [
-      [m.from, a],
-      [m.to, b],
-    ] as const) {
-      if (!joint) {
-        issues.push({
-          kind: 'unknown_joint',
-          message: `member "${id}" refers to unknown joint "${end}"`,
-          ids: [id, end],
-        });
-      }
-    }
+    if (!a) issues.push(unknownEnd(id, m.from));
+    if (!b) issues.push(unknownEnd(id, m.to));
     if (m.from === m.to) {
       issues.push({
         kind: 'self_member',

@@ -1,7 +1,7 @@
 import { EngineError } from '../errors';
 import { MM_PER_INCH, TOLERANCE } from '../units';
 import { memberContactRegions, type LocalMember, type Region } from './contact';
-import { placePlate, slideSteps, type Trial } from './placement';
+import { placePlate, slideSteps, type PlateFrame, type Trial } from './placement';
 import type { Point } from './geometry';
 import { governingTooth, toothCasesOf, type ToothCase, type ToothCheck } from './teeth';
 import { steelChecks, steelSections } from './steel';
@@ -231,6 +231,23 @@ export const designJointPlate = (
   // Per set of lateral values: each member's governing tooth case, its demand and capacity per area.
   const toothOf: { angles: ToothCheck[]; demand: number[]; perArea: number[] }[] = [];
   const slides = new Map<number, number>();
+  // One trial and one frame per joint, refilled for each plate: most plates are dropped at once.
+  const trial: Trial = {
+    joint,
+    regions,
+    order,
+    plate: plates[0].spec,
+    perArea: [],
+    demand: [],
+    angles: [],
+    halfLength: 0,
+    halfWidth: 0,
+    bestI: order[0],
+    bestRatio: Infinity,
+    failMember: '',
+    failRatio: 0,
+  };
+  const frame: PlateFrame = { steps: 0, endExclusion, edgeExclusion };
   for (let p = 0; p < plates.length; p++) {
     const { spec: plate, halfLength, halfWidth, lateralSet } = plates[p];
     const last = p === plates.length - 1;
@@ -256,21 +273,18 @@ export const designJointPlate = (
       failure = steelFailure(badSteelFirst);
       continue;
     }
-    const trial: Trial = {
-      joint,
-      regions,
-      order,
-      plate,
-      perArea: tooth.perArea,
-      demand: tooth.demand,
-      angles: tooth.angles,
-      halfLength,
-      halfWidth,
-      best: { i: order[0], ratio: Infinity },
-    };
-    const fit = placePlate(trial, local, { steps, endExclusion, edgeExclusion }, last);
-    if ('failure' in fit) {
-      failure = fit.failure;
+    trial.plate = plate;
+    trial.perArea = tooth.perArea;
+    trial.demand = tooth.demand;
+    trial.angles = tooth.angles;
+    trial.halfLength = halfLength;
+    trial.halfWidth = halfWidth;
+    trial.bestI = order[0];
+    trial.bestRatio = Infinity;
+    frame.steps = steps;
+    const fit = placePlate(trial, local, frame, last);
+    if (!fit) {
+      failure = { member: trial.failMember, ratio: trial.failRatio };
       continue;
     }
     const steel = steelFirst ?? steelChecks(sections, plate, halfLength, halfWidth);

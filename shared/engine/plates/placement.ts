@@ -43,11 +43,10 @@ export interface PlateFrame {
 }
 
 /** A plate placement that holds every member. */
-interface Fit {
+export interface Fit {
   offset: number;
   checks: MemberPlateCheck[];
 }
-export type Placement = Fit | { failure: { member: string; ratio: number } };
 
 /** One plate tried at one joint: what every step of its placement needs. */
 export interface Trial {
@@ -64,11 +63,16 @@ export interface Trial {
   halfWidth: number;
   /** Per member: its angles, lateral value (MPa) and heel factor, for the report. */
   angles: Omit<MemberPlateCheck, 'member' | 'area' | 'demand' | 'capacity' | 'ratio'>[];
-  /** The member failing by the least at an exact slide, for the message. */
-  best: { i: number; ratio: number };
+  /** The member failing by the least at an exact slide, and its ratio, for the message. */
+  bestI: number;
+  bestRatio: number;
+  /** When the plate does not fit: the member reported, and its ratio. */
+  failMember: string;
+  failRatio: number;
 }
 
-// Module-level functions, not closures: this runs for every plate of every joint per keystroke.
+// Module-level functions, not closures, and no objects until a plate fits: this runs for
+// every plate of every joint per keystroke.
 
 const capacityOf = (t: Trial, i: number, area: number): number => area * t.perArea[i];
 
@@ -79,30 +83,43 @@ const toFront = (order: number[], k: number) => {
   order[0] = i;
 };
 
-/** Moves member i to the front of the check order and reports it as the plate's failure. */
-const failing = (t: Trial, i: number, ratio: number): Placement => {
+/** Moves member i to the front of the check order and records it as the plate's failure. */
+const failing = (t: Trial, i: number, ratio: number): undefined => {
   toFront(t.order, t.order.indexOf(i));
-  return { failure: { member: t.joint.members[i].id, ratio } };
+  t.failMember = t.joint.members[i].id;
+  t.failRatio = ratio;
+  return undefined;
 };
 
 /**
- * Every member's check at one slide; or, with `spread` > 0, a bound for every slide within
- * ±spread of `offset` (the plate swept across them: no slide there gives any member more).
- * Undefined as soon as one member fails.
+ * Whether every member holds at one slide; or, with `spread` > 0, a bound for every slide
+ * within ±spread of `offset` (the plate swept across them: no slide there gives any member
+ * more). Stops at the first member that fails and moves it to the front.
  */
-const checksAt = (t: Trial, offset: number, spread: number): MemberPlateCheck[] | undefined => {
-  const checks: MemberPlateCheck[] = [];
+const holds = (t: Trial, offset: number, spread: number): boolean => {
   for (let k = 0; k < t.order.length; k++) {
     const i = t.order[k];
     const area = regionAreaInPlate(t.regions[i], t.halfLength, t.halfWidth + spread, offset);
+    const ratio = ratioOf(t.demand[i], capacityOf(t, i, area));
+    if (ratio > 1) {
+      if (spread === 0 && ratio < t.bestRatio) {
+        t.bestI = i;
+        t.bestRatio = ratio;
+      }
+      if (k > 0) toFront(t.order, k);
+      return false;
+    }
+  }
+  return true;
+};
+
+/** Every member's check at a slide that holds them all. */
+const checksAt = (t: Trial, offset: number): MemberPlateCheck[] => {
+  const checks: MemberPlateCheck[] = [];
+  for (const i of t.order) {
+    const area = regionAreaInPlate(t.regions[i], t.halfLength, t.halfWidth, offset);
     const demand = t.demand[i];
     const capacity = capacityOf(t, i, area);
-    const ratio = ratioOf(demand, capacity);
-    if (ratio > 1) {
-      if (spread === 0 && ratio < t.best.ratio) t.best = { i, ratio };
-      if (k > 0) toFront(t.order, k);
-      return undefined;
-    }
     // Every field written out: spreading the check and the angles in cost more than the rest.
     const a = t.angles[i];
     checks.push({
@@ -110,7 +127,7 @@ const checksAt = (t: Trial, offset: number, spread: number): MemberPlateCheck[] 
       area,
       demand,
       capacity,
-      ratio,
+      ratio: ratioOf(demand, capacity),
       plateToLoad: a.plateToLoad,
       loadToGrain: a.loadToGrain,
       lateralValue: a.lateralValue,
@@ -121,33 +138,32 @@ const checksAt = (t: Trial, offset: number, spread: number): MemberPlateCheck[] 
 };
 
 /**
- * Slides of k1…k2 grid steps to one side: the one nearest the centre that holds every member,
- * found by halving the range wherever its swept bound still holds (branch and bound).
+ * Slides of k1…k2 grid steps to one side: the offset of the one nearest the centre that holds
+ * every member, found by halving the range wherever its swept bound still holds (branch and
+ * bound).
  */
-const nearestSlide = (t: Trial, side: number, k1: number, k2: number): Fit | undefined => {
+const nearestSlide = (t: Trial, side: number, k1: number, k2: number): number | undefined => {
   if (k1 > k2) return undefined;
   const mid = ((k1 + k2) / 2) * SLIDE_STEP_MM * side;
-  if (k1 === k2) {
-    const checks = checksAt(t, mid, 0);
-    return checks ? { offset: mid, checks } : undefined;
-  }
-  if (!checksAt(t, mid, ((k2 - k1) / 2) * SLIDE_STEP_MM)) return undefined;
+  if (k1 === k2) return holds(t, mid, 0) ? mid : undefined;
+  if (!holds(t, mid, ((k2 - k1) / 2) * SLIDE_STEP_MM)) return undefined;
   const m = Math.floor((k1 + k2) / 2);
   return nearestSlide(t, side, k1, m) ?? nearestSlide(t, side, m + 1, k2);
 };
 
 /**
  * Tooth holding of every member for one plate, centred or at the slide nearest the centre
- * that holds them all, or the member that fails at the best slide tried (for the message when
- * no plate fits). `exact` (the catalog's last plate, whose failure is reported) skips the
- * bounds that only tell that some member fails, not which fails by the least.
+ * that holds them all; undefined when none does, with the member that fails at the best slide
+ * tried in `t.failMember` (for the message when no plate fits). `exact` (the catalog's last
+ * plate, whose failure is reported) skips the bounds that only tell that some member fails,
+ * not which fails by the least.
  */
 export const placePlate = (
   t: Trial,
   local: LocalMember[],
   frame: PlateFrame,
   exact: boolean,
-): Placement => {
+): Fit | undefined => {
   const { steps } = frame;
   const plateArea = 4 * t.halfLength * t.halfWidth;
   // Cheap bound, for every slide at once: a member's band (its depth less the edge margins)
@@ -158,21 +174,20 @@ export const placePlate = (
   for (const i of t.order) {
     const band = 2 * Math.max(0, local[i].halfDepth - frame.edgeExclusion) * reachInPlate;
     const area = Math.min(plateArea, Math.max(0, band));
-    if (t.demand[i] > capacityOf(t, i, area)) {
-      return failing(t, i, Infinity);
-    }
+    if (t.demand[i] > capacityOf(t, i, area)) return failing(t, i, Infinity);
     if (t.demand[i] > 0) needed += t.demand[i] / t.perArea[i];
   }
   if (!exact) {
     // The members' contact regions are disjoint, so together they hold no more than the plate.
     if (needed > plateArea * (1 + AREA_SLACK)) return failing(t, t.order[0], Infinity);
     // No slide within ±steps gives any member more than the plate swept across all of them.
-    if (steps > 0 && !checksAt(t, 0, steps * SLIDE_STEP_MM))
-      return failing(t, t.order[0], Infinity);
+    if (steps > 0 && !holds(t, 0, steps * SLIDE_STEP_MM)) return failing(t, t.order[0], Infinity);
   }
-  const centred = checksAt(t, 0, 0);
-  if (centred) return { offset: 0, checks: centred };
+  if (holds(t, 0, 0)) return { offset: 0, checks: checksAt(t, 0) };
   const up = nearestSlide(t, 1, 1, steps);
-  const nearer = up ? Math.round(Math.abs(up.offset) / SLIDE_STEP_MM) - 1 : steps;
-  return nearestSlide(t, -1, 1, nearer) ?? up ?? failing(t, t.best.i, t.best.ratio);
+  const nearer = up !== undefined ? Math.round(Math.abs(up) / SLIDE_STEP_MM) - 1 : steps;
+  const offset = nearestSlide(t, -1, 1, nearer) ?? up;
+  return offset !== undefined
+    ? { offset, checks: checksAt(t, offset) }
+    : failing(t, t.bestI, t.bestRatio);
 };

@@ -24,19 +24,14 @@ interface ToothAngles {
  * `loadToGrain` to it, to either side (the lower value is used). The top chord at a heel takes
  * the heel reduction for its slope.
  */
-const toothAngles = (
-  joint: PlateJoint,
-  m: PlateJointMember,
-  local: Point,
-  toGrain: number,
-): ToothAngles => {
+const toothAngles = (local: Point, toGrain: number, heelFactor: number): ToothAngles => {
   const loadToGrain = foldAngle(toGrain);
   const axisAngle = Math.atan2(local[1], local[0]);
   const plateToLoad =
     loadToGrain === 0
       ? [foldAngle(axisAngle)]
       : [foldAngle(axisAngle + loadToGrain), foldAngle(axisAngle - loadToGrain)];
-  return { plateToLoad, loadToGrain, heelFactor: heelFactorOf(joint, m) };
+  return { plateToLoad, loadToGrain, heelFactor };
 };
 
 /**
@@ -76,9 +71,10 @@ export const toothCasesOf = (joint: PlateJoint, m: PlateJointMember, local: Poin
       forces.push(f);
     } else if (f >= forces[k]) forces[k] = f;
   }
+  const heelFactor = heelFactorOf(joint, m);
   const out: ToothCase[] = [];
   for (let k = 0; k < angles.length; k++) {
-    out.push({ force: forces[k], angles: toothAngles(joint, m, local, angles[k]) });
+    out.push({ force: forces[k], angles: toothAngles(local, angles[k], heelFactor) });
   }
   return out;
 };
@@ -88,17 +84,31 @@ export const toothCasesOf = (joint: PlateJoint, m: PlateJointMember, local: Poin
  * area is the same for every case, so this is the largest ratio wherever the plate sits).
  */
 export const governingTooth = (plate: PlateSpec, cases: ToothCase[]) => {
-  let best = { demand: 0, angles: toothValue(plate, cases[0].angles) };
+  // Scores first, one object for the case that governs: this runs for every member, every
+  // case and every set of lateral values at each joint.
+  let k = 0;
   let worst = -1;
-  for (const c of cases) {
-    const angles = toothValue(plate, c.angles);
-    const score = c.force / angles.lateralValue;
+  for (let c = 0; c < cases.length; c++) {
+    const score = cases[c].force / (lowestValue(plate, cases[c].angles) * PSI_TO_N_PER_MM2);
     if (score > worst) {
       worst = score;
-      best = { demand: c.force, angles };
+      k = c;
     }
   }
-  return best;
+  return {
+    demand: worst === -1 ? 0 : cases[k].force,
+    angles: toothValue(plate, cases[k].angles),
+  };
+};
+
+/** The lowest lateral value of a member's plate-to-load angles on one plate, psi per face. */
+const lowestValue = (plate: PlateSpec, t: ToothAngles): number => {
+  let value = Infinity;
+  for (const a of t.plateToLoad) {
+    const v = lateralValue(plate, a, t.loadToGrain);
+    if (v < value) value = v;
+  }
+  return value;
 };
 
 /** A member's lateral value on one plate, MPa per face, at the lowest of its angles. */
