@@ -119,6 +119,18 @@ const contactRegion = (
 // Pieces thinner than this (mm²) are rounding slivers of a cut along a shared edge.
 const SLIVER_AREA = 1e-9;
 
+/** 1 when every vertex has a·u + b·v > c, −1 when every one has < c, else 0. */
+const sideOf = (ring: Ring, a: number, b: number, c: number): number => {
+  let above = 0;
+  let below = 0;
+  for (const p of ring) {
+    const f = a * p[0] + b * p[1] - c;
+    if (f > 0) above++;
+    else if (f < 0) below++;
+  }
+  return above === ring.length ? 1 : below === ring.length ? -1 : 0;
+};
+
 /**
  * Removes the convex polygon `cut` from disjoint convex pieces. For each piece, the part outside
  * edge i of `cut` but inside edges 0…i−1 is convex, and these parts are disjoint and together
@@ -136,6 +148,13 @@ export const subtractConvex = (pieces: Region, cut: Ring): Region => {
       const a = p[1] - q[1];
       const b = q[0] - p[0];
       const c = a * p[0] + b * p[1];
+      // Wholly on one side of the edge (the usual case): nothing to clip, nothing to allocate.
+      const whole = sideOf(inside, a, b, c);
+      if (whole > 0) continue;
+      if (whole < 0) {
+        if (Math.abs(signedArea(inside)) > SLIVER_AREA) out.push(inside);
+        break;
+      }
       const outside = clipHalfPlane(inside, -a, -b, -c);
       if (outside.length > 2 && Math.abs(signedArea(outside)) > SLIVER_AREA) out.push(outside);
       inside = clipHalfPlane(inside, a, b, c);

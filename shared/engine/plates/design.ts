@@ -22,10 +22,11 @@ const END_EXCLUSION_MM = 0.5 * MM_PER_INCH;
 const EDGE_EXCLUSION_MM = 0.25 * MM_PER_INCH;
 const PLATES_PER_JOINT = 2;
 
-const unit = (d: Direction, what: string): Point => {
+/** Unit vector of d; the message names `what` and `id` (built only when it is thrown). */
+const unit = (d: Direction, what: string, id: string): Point => {
   const len = Math.hypot(d.x, d.y);
   if (!Number.isFinite(len) || len < TOLERANCE) {
-    throw new EngineError('invalid', `${what} needs a direction`, { direction: d });
+    throw new EngineError('invalid', `${what} ${id} needs a direction`, { direction: d });
   }
   return [d.x / len, d.y / len];
 };
@@ -37,13 +38,13 @@ const unit = (d: Direction, what: string): Point => {
  * the chord's own line.
  */
 const plateAxis = (joint: PlateJoint, options: PlateDesignOptions): Point => {
-  if (options.orientation) return unit(options.orientation, `Plate at joint ${joint.id}`);
+  if (options.orientation) return unit(options.orientation, 'Plate at joint', joint.id);
   const bottom = joint.members.filter((m) => m.role === 'bottomChord');
   const chords = bottom.length > 0 ? bottom : joint.members.filter((m) => m.role !== 'web');
   const first = chords[0] ?? joint.members[0];
-  let [x, y] = unit(first.direction, `Member ${first.id}`);
+  let [x, y] = unit(first.direction, 'Member', first.id);
   if (chords.length === 2) {
-    const [x2, y2] = unit(chords[1].direction, `Member ${chords[1].id}`);
+    const [x2, y2] = unit(chords[1].direction, 'Member', chords[1].id);
     const len = Math.hypot(x - x2, y - y2);
     if (len > TOLERANCE) [x, y] = [(x - x2) / len, (y - y2) / len];
   }
@@ -188,7 +189,7 @@ export const designJointPlate = (
   const axis = plateAxis(joint, options);
   const allLocal: LocalMember[] = [];
   for (const m of given.members) {
-    const [x, y] = unit(m.direction, `Member ${m.id}`);
+    const [x, y] = unit(m.direction, 'Member', m.id);
     const lm: LocalMember = {
       role: m.role,
       direction: [x * axis[0] + y * axis[1], -x * axis[1] + y * axis[0]],
@@ -284,7 +285,7 @@ export const designJointPlate = (
     frame.steps = steps;
     const fit = placePlate(trial, local, frame, last);
     if (!fit) {
-      failure = { member: trial.failMember, ratio: trial.failRatio };
+      if (last) failure = { member: trial.failMember, ratio: trial.failRatio };
       continue;
     }
     const steel = steelFirst ?? steelChecks(sections, plate, halfLength, halfWidth);
