@@ -1,5 +1,5 @@
 import { repetitiveApplies } from '../lumber';
-import { checkMember, type GoverningCheck } from '../members/checkMember';
+import { checkMember, type GoverningCheck, type MemberCheckInput } from '../members/checkMember';
 import type { Piece, ProfileMember, TrussProfile } from '../profiles/types';
 import type { MemberDemands } from './demands';
 
@@ -120,7 +120,7 @@ export function checkOverCombinations(
   const combos = order ?? ctx.critical[k];
   for (let t = 0; t < combos.length; t++) {
     const i = combos[t];
-    const result = checkMember({
+    const check: MemberCheckInput = {
       lumberId: option.lumber,
       plies: ctx.plies,
       axial: axial[i * m + k],
@@ -132,11 +132,13 @@ export function checkOverCombinations(
       cd: ctx.cds[i],
       repetitive,
       shear: shear[i * m + k],
-      ...(ctx.amplifyPanelPoint && { amplifyPanelPoint: true }),
-      // A chord held out of plane only at purlins or bracing is held at the same points against
-      // lateral-torsional buckling, whichever edge its moment puts in compression (CL, §3.3.3).
-      ...(member.role !== 'web' && leWeak > 0 && { luBending: leWeak }),
-    });
+    };
+    // Set, not spread in: this runs for every member, option and combination.
+    if (ctx.amplifyPanelPoint) check.amplifyPanelPoint = true;
+    // A chord held out of plane only at purlins or bracing is held at the same points against
+    // lateral-torsional buckling, whichever edge its moment puts in compression (CL, §3.3.3).
+    if (member.role !== 'web' && leWeak > 0) check.luBending = leWeak;
+    const result = checkMember(check);
     if (perCombination) perCombination[i] = result.csi;
     if (result.csi > worst.csi) {
       worst = { csi: result.csi, combination: i, governing: result.governing };
