@@ -1,15 +1,10 @@
-import { afterAll, beforeAll, describe, expect, it } from 'vitest';
-import type { BrowserContext } from 'playwright-core';
-import type { Server } from 'node:http';
-import { testApp, testMailer } from '../support/db';
+import { beforeAll, describe, expect, it } from 'vitest';
 import { createOrder, createPlant, createUser } from '../support/factories';
-import { launchBrowser, listen, SCREENSHOTS, signInAs } from '../support/browser';
+import { SCREENSHOTS, signInAs } from '../support/browser';
+import { servedBrowser } from '../support/servedBrowser';
 import { OrderLine, type Order, type User } from '../../server/models';
 
-let browser: BrowserContext;
-let closeBrowser: () => Promise<void>;
-let server: Server;
-let base: string;
+const web = servedBrowser({ mail: true });
 let sales: User;
 let engineer: User;
 let order: Order;
@@ -19,14 +14,6 @@ beforeAll(async () => {
   sales = await createUser({ role: 'sales', plant });
   engineer = await createUser({ role: 'engineer', plant });
   order = await createOrder({ plant });
-  const app = testApp({ demo: true }, 'dist/client', await testMailer());
-  ({ server, url: base } = await listen(app));
-  ({ browser, close: closeBrowser } = await launchBrowser());
-});
-
-afterAll(async () => {
-  await closeBrowser?.();
-  server?.close();
 });
 
 /**
@@ -37,9 +24,9 @@ afterAll(async () => {
  */
 describe('the Bracing section of the truss editor (desktop)', () => {
   it('no ceiling: the bottom chord is checked over the bracing spacing typed; saved and reviewed', async () => {
-    const page = await browser.newPage();
-    await signInAs(browser, page, base, sales.email);
-    await page.goto(`${base}/orders/${order.id}/lines/new`);
+    const page = await web.browser.newPage();
+    await signInAs(web.browser, page, web.base, sales.email);
+    await page.goto(`${web.base}/orders/${order.id}/lines/new`);
     await expect.poll(() => page.locator('h1').first().textContent()).toBe('Truss editor');
     await page.getByLabel('Mark', { exact: true }).fill('B1');
     await page.getByLabel('Wind uplift (psf)').fill('30');
@@ -73,7 +60,7 @@ describe('the Bracing section of the truss editor (desktop)', () => {
     await page.screenshot({ path: `${SCREENSHOTS}/editor-bracing.png`, fullPage: true });
 
     await page.getByRole('button', { name: 'Save truss' }).click();
-    await page.waitForURL(`${base}/orders/${order.id}`);
+    await page.waitForURL(`${web.base}/orders/${order.id}`);
     const line = await OrderLine.findOne({ where: { orderId: order.id, mark: 'B1' } });
     expect(line!.designInput).toMatchObject({
       bracing: {
@@ -89,13 +76,13 @@ describe('the Bracing section of the truss editor (desktop)', () => {
     expect(notes).toMatch(/purlins at 2'-0" o\.c\..*no ceiling\) by lateral bracing at 2'-0"/);
 
     // Opened again, the section shows what was saved.
-    await page.goto(`${base}/orders/${order.id}/lines/${line!.id}`);
+    await page.goto(`${web.base}/orders/${order.id}/lines/${line!.id}`);
     await expect.poll(() => page.getByLabel('Purlin spacing').inputValue()).toBe(`2'-0"`);
     expect(await page.getByLabel('Ceiling on bottom chord').isChecked()).toBe(false);
 
     // The reviewer sees it beside the loads.
-    await signInAs(browser, page, base, engineer.email);
-    await page.goto(`${base}/reviews/${line!.id}?order=${order.id}`);
+    await signInAs(web.browser, page, web.base, engineer.email);
+    await page.goto(`${web.base}/reviews/${line!.id}?order=${order.id}`);
     await expect
       .poll(() =>
         page

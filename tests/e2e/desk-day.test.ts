@@ -1,7 +1,5 @@
-import { afterAll, beforeAll, describe, expect, it } from 'vitest';
-import type { BrowserContext, Page } from 'playwright-core';
-import type { Server } from 'node:http';
-import { testApp, testMailer } from '../support/db';
+import { beforeAll, describe, expect, it } from 'vitest';
+import type { Page } from 'playwright-core';
 import {
   createCustomer,
   createJob,
@@ -9,37 +7,27 @@ import {
   createPlant,
   createUser,
 } from '../support/factories';
-import { launchBrowser, listen, SCREENSHOTS, signInAs } from '../support/browser';
+import { SCREENSHOTS, signInAs } from '../support/browser';
+import { servedBrowser } from '../support/servedBrowser';
 import type { Plant, User } from '../../server/models';
 
-let browser: BrowserContext;
-let closeBrowser: () => Promise<void>;
-let server: Server;
-let base: string;
+const web = servedBrowser({ mail: true });
 let plant: Plant;
 let sales: User;
 
-const signIn = (page: Page, user: User) => signInAs(browser, page, base, user.email);
+const signIn = (page: Page, user: User) => signInAs(web.browser, page, web.base, user.email);
 
 beforeAll(async () => {
   plant = await createPlant({ name: 'Desk Day Test Plant' });
   sales = await createUser({ role: 'sales', plant });
-  const app = testApp({ demo: true }, 'dist/client', await testMailer());
-  ({ server, url: base } = await listen(app));
-  ({ browser, close: closeBrowser } = await launchBrowser());
-});
-
-afterAll(async () => {
-  await closeBrowser?.();
-  server?.close();
 });
 
 describe('the desk after a day’s use, in a browser', () => {
   it('asks before creating a builder twice', async () => {
     await createCustomer({ plant, name: 'Birchwood Homes' });
-    const page = await browser.newPage();
+    const page = await web.browser.newPage();
     await signIn(page, sales);
-    await page.goto(`${base}/builders`);
+    await page.goto(`${web.base}/builders`);
     await page.getByRole('button', { name: 'New builder' }).click();
     await page.getByLabel('Company name').fill('birchwood homes');
     await page.getByLabel('E-mail', { exact: true }).fill('new@birchwood.test');
@@ -54,10 +42,10 @@ describe('the desk after a day’s use, in a browser', () => {
   it('compares profiles, guards unsaved edits, confirms a save, and redesigns old-load lines', async () => {
     const job = await createJob({ plant, name: 'Lot 4 — Fernhill' });
     const order = await createOrder({ job });
-    const page = await browser.newPage();
+    const page = await web.browser.newPage();
     await page.setViewportSize({ width: 1440, height: 1000 });
     await signIn(page, sales);
-    await page.goto(`${base}/orders/${order.id}/lines/new`);
+    await page.goto(`${web.base}/orders/${order.id}/lines/new`);
     await page.getByLabel('Mark', { exact: true }).fill('T1');
     await page.getByLabel('Span', { exact: true }).fill(`28'`);
     await page.getByRole('button', { name: 'Compare every profile' }).click();
@@ -81,7 +69,7 @@ describe('the desk after a day’s use, in a browser', () => {
     await expect.poll(() => page.getByText(/^Saved T1: Howe/).count()).toBe(1);
 
     // The job's loads change: the line is flagged, and one click redesigns it.
-    await page.goto(`${base}/jobs/${job.id}`);
+    await page.goto(`${web.base}/jobs/${job.id}`);
     const csrf = await page.evaluate(async () => {
       const r = await fetch('/api/auth/csrf');
       return ((await r.json()) as { token: string }).token;
@@ -98,7 +86,7 @@ describe('the desk after a day’s use, in a browser', () => {
       [job.id, csrf] as const,
     );
     expect(status).toBe(200);
-    await page.goto(`${base}/orders/${order.id}`);
+    await page.goto(`${web.base}/orders/${order.id}`);
     await expect.poll(() => page.getByText('Designed with old loads: T1').count()).toBe(1);
     await page.screenshot({ path: `${SCREENSHOTS}/desk-old-loads.png`, fullPage: true });
     await page.getByRole('button', { name: 'Redesign T1' }).click();

@@ -1,15 +1,10 @@
-import { afterAll, beforeAll, describe, expect, it } from 'vitest';
-import type { BrowserContext } from 'playwright-core';
-import type { Server } from 'node:http';
-import { testApp, testMailer } from '../support/db';
+import { beforeAll, describe, expect, it } from 'vitest';
 import { createOrder, createPlant, createUser } from '../support/factories';
-import { launchBrowser, listen, SCREENSHOTS, signInAs } from '../support/browser';
+import { SCREENSHOTS, signInAs } from '../support/browser';
+import { servedBrowser } from '../support/servedBrowser';
 import { OrderLine, type Order, type User } from '../../server/models';
 
-let browser: BrowserContext;
-let closeBrowser: () => Promise<void>;
-let server: Server;
-let base: string;
+const web = servedBrowser({ mail: true });
 let sales: User;
 let order: Order;
 
@@ -17,21 +12,13 @@ beforeAll(async () => {
   const plant = await createPlant({ name: 'Girder Test Plant' });
   sales = await createUser({ role: 'sales', plant });
   order = await createOrder({ plant });
-  const app = testApp({ demo: true }, 'dist/client', await testMailer());
-  ({ server, url: base } = await listen(app));
-  ({ browser, close: closeBrowser } = await launchBrowser());
-});
-
-afterAll(async () => {
-  await closeBrowser?.();
-  server?.close();
 });
 
 describe('a girder with point loads, in the truss editor (desktop)', () => {
   it('enters hung loads in the point-load table, sees them drawn and the ply fastening, saves', async () => {
-    const page = await browser.newPage();
-    await signInAs(browser, page, base, sales.email);
-    await page.goto(`${base}/orders/${order.id}/lines/new`);
+    const page = await web.browser.newPage();
+    await signInAs(web.browser, page, web.base, sales.email);
+    await page.goto(`${web.base}/orders/${order.id}/lines/new`);
     await expect.poll(() => page.locator('h1').first().textContent()).toBe('Truss editor');
     await page.getByLabel('Mark', { exact: true }).fill('G1');
     await page.getByLabel('Plies', { exact: true }).fill('2');
@@ -67,7 +54,7 @@ describe('a girder with point loads, in the truss editor (desktop)', () => {
     await drawing.screenshot({ path: `${SCREENSHOTS}/editor-girder-drawing.png` });
 
     await page.getByRole('button', { name: 'Save truss' }).click();
-    await page.waitForURL(`${base}/orders/${order.id}`);
+    await page.waitForURL(`${web.base}/orders/${order.id}`);
     const line = await OrderLine.findOne({ where: { orderId: order.id, mark: 'G1' } });
     expect(line!.plies).toBe(2);
     expect(line!.designInput).toMatchObject({
@@ -77,7 +64,7 @@ describe('a girder with point loads, in the truss editor (desktop)', () => {
       ],
     });
     // Opened again, the table shows the stored loads as typed.
-    await page.goto(`${base}/orders/${order.id}/lines/${line!.id}`);
+    await page.goto(`${web.base}/orders/${order.id}/lines/${line!.id}`);
     await expect.poll(() => page.getByLabel('Point load 1 position').inputValue()).toBe(`9'-0"`);
     await page.close();
   });

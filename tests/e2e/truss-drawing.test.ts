@@ -1,7 +1,4 @@
-import { afterAll, beforeAll, describe, expect, it } from 'vitest';
-import type { BrowserContext } from 'playwright-core';
-import type { Server } from 'node:http';
-import { testApp } from '../support/db';
+import { beforeAll, describe, expect, it } from 'vitest';
 import {
   createCustomer,
   createJob,
@@ -9,14 +6,12 @@ import {
   createPlant,
   createUser,
 } from '../support/factories';
-import { launchBrowser, listen, SCREENSHOTS, signInAs } from '../support/browser';
+import { SCREENSHOTS, signInAs } from '../support/browser';
+import { servedBrowser } from '../support/servedBrowser';
 import { PROFILE_KINDS } from '../../shared/engine/profiles';
 import type { Order, User } from '../../server/models';
 
-let browser: BrowserContext;
-let closeBrowser: () => Promise<void>;
-let server: Server;
-let base: string;
+const web = servedBrowser();
 let sales: User;
 let order: Order;
 
@@ -26,21 +21,14 @@ beforeAll(async () => {
   order = await createOrder({
     job: await createJob({ customer: await createCustomer({ plant }) }),
   });
-  ({ server, url: base } = await listen(testApp({ demo: true }, 'dist/client')));
-  ({ browser, close: closeBrowser } = await launchBrowser());
-});
-
-afterAll(async () => {
-  await closeBrowser?.();
-  server?.close();
 });
 
 describe('the truss drawing, every profile', () => {
   it('dimensions heel, height, overhangs and panel points, clips no label and keeps joint letters off the T/C tags', async () => {
-    const page = await browser.newPage();
+    const page = await web.browser.newPage();
     await page.setViewportSize({ width: 1280, height: 900 });
-    await signInAs(browser, page, base, sales.email);
-    await page.goto(`${base}/orders/${order.id}/lines/new`);
+    await signInAs(web.browser, page, web.base, sales.email);
+    await page.goto(`${web.base}/orders/${order.id}/lines/new`);
     for (const p of PROFILE_KINDS) {
       await page.getByRole('button', { name: p.label, exact: true }).click();
       const drawing = page.getByTestId('truss-drawing');
