@@ -11,14 +11,19 @@ import { Providers } from './app/providers';
 import { queryClient } from './app/query-client';
 import { createAppRouter } from './app/entry-router';
 
-const router = createAppRouter(queryClient);
-const root = document.getElementById('root');
-if (!root) throw new Error('index.html has no #root element');
+const element = document.getElementById('root');
+if (!element) throw new Error('index.html has no #root element');
+const root = createRoot(element);
 
-createRoot(root).render(
-  <StrictMode>
-    <Providers client={queryClient}>
-      <RouterProvider router={router} />
-    </Providers>
-  </StrictMode>,
-);
+// The router (its first match, loaders and route discovery) starts in a task of its own, not in
+// the one that runs the entry's code (React DOM, React Router and the frame: one long task).
+setTimeout(() => {
+  const router = createAppRouter(queryClient);
+  root.render(
+    <StrictMode>
+      <Providers client={queryClient}>
+        <RouterProvider router={router} />
+      </Providers>
+    </StrictMode>,
+  );
+}, 0);

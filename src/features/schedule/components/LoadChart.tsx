@@ -1,3 +1,4 @@
+import { useEffect, useMemo, useState } from 'react';
 import { Bar, BarChart, Tooltip, XAxis, YAxis } from 'recharts';
 import type { Schedule } from '../../../../shared/api/production';
 
@@ -26,15 +27,10 @@ const WEEK_TICK = tick('middle', '0.71em');
 const WEEK = new Intl.DateTimeFormat('en-GB', { day: 'numeric', month: 'short', timeZone: 'UTC' });
 const HOURS_TICK = tick('end', '0.32em', ' h');
 
-/**
- * Weekly planned hours against capacity, all tables together (lazy-loaded with recharts). Kept
- * lean, as it is drawn beside a full board: every axis tick shown (`interval={0}`), ticks as plain
- * text and no grid lines, so recharts measures no label in the DOM (each a forced layout of the
- * whole page); the legend is plain HTML; the chart sizes itself to its box (`responsive`).
- */
-export default function LoadChart({ board }: { board: Load }) {
+/** Planned and free hours per week (by its Monday), all tables together. */
+function weeklyLoad(load: Load['load']) {
   const weeks = new Map<string, { week: string; planned: number; capacity: number }>();
-  for (const l of board.load) {
+  for (const l of load) {
     const d = new Date(`${l.date}T00:00:00Z`);
     const monday = new Date(d.getTime() - ((d.getUTCDay() + 6) % 7) * 86_400_000);
     const key = monday.toISOString().slice(0, 10);
@@ -43,25 +39,65 @@ export default function LoadChart({ board }: { board: Load }) {
     w.capacity += l.capacity / 60;
     weeks.set(key, w);
   }
-  const data = [...weeks.values()].map((w) => ({
+  return [...weeks.values()].map((w) => ({
     week: w.week,
     planned: Math.round(w.planned),
     free: Math.max(0, Math.round(w.capacity - w.planned)),
   }));
+}
+
+/** The chart's parts in the order they are added: axes, the two bars, the tooltip. */
+const PARTS = 5;
+
+/**
+ * How many of the chart's parts to draw: one more per task. recharts keeps its state in a store
+ * whose updates React renders synchronously, so the whole chart mounted at once is one long task
+ * (60–90 ms of CPU under a full board); a part at a time keeps each task short.
+ */
+function usePartsShown() {
+  const [shown, setShown] = useState(0);
+  useEffect(() => {
+    if (shown >= PARTS) return;
+    const id = setTimeout(() => setShown((n) => n + 1), 0);
+    return () => clearTimeout(id);
+  }, [shown]);
+  return shown;
+}
+
+const formatLabel = (week: unknown) => `Week of ${String(week)}`;
+
+/**
+ * Weekly planned hours against capacity, all tables together (lazy-loaded with recharts). Kept
+ * lean, as it is drawn beside a full board: every axis tick shown (`interval={0}`), ticks as plain
+ * text and no grid lines, so recharts measures no label in the DOM (each a forced layout of the
+ * whole page); the legend is plain HTML; the chart sizes itself to its box (`responsive`). Its
+ * parts are added one task at a time, the chart hidden until all are drawn.
+ */
+export default function LoadChart({ board }: { board: Load }) {
+  const data = useMemo(() => weeklyLoad(board.load), [board.load]);
+  const shown = usePartsShown();
   return (
     <div data-testid="load-chart" aria-label="Planned hours against capacity by week">
-      <BarChart data={data} responsive style={{ width: '100%', height: 232 }}>
-        <XAxis dataKey="week" tick={WEEK_TICK} interval={0} />
-        <YAxis tick={HOURS_TICK} interval={0} />
-        <Tooltip labelFormatter={(week) => `Week of ${String(week)}`} />
-        <Bar
-          dataKey="planned"
-          name="Planned hours"
-          stackId="a"
-          fill={PLANNED}
-          isAnimationActive={false}
-        />
-        <Bar dataKey="free" name="Free hours" stackId="a" fill={FREE} isAnimationActive={false} />
+      <BarChart
+        data={data}
+        responsive
+        style={{ width: '100%', height: 232, visibility: shown < PARTS ? 'hidden' : undefined }}
+      >
+        {shown >= 1 ? <XAxis dataKey="week" tick={WEEK_TICK} interval={0} /> : null}
+        {shown >= 2 ? <YAxis tick={HOURS_TICK} interval={0} /> : null}
+        {shown >= 3 ? (
+          <Bar
+            dataKey="planned"
+            name="Planned hours"
+            stackId="a"
+            fill={PLANNED}
+            isAnimationActive={false}
+          />
+        ) : null}
+        {shown >= 4 ? (
+          <Bar dataKey="free" name="Free hours" stackId="a" fill={FREE} isAnimationActive={false} />
+        ) : null}
+        {shown >= 5 ? <Tooltip labelFormatter={formatLabel} /> : null}
       </BarChart>
       <ul className="flex justify-center gap-4 text-sm text-sand-700">
         {[
