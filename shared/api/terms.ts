@@ -31,27 +31,17 @@ export const depositSentence = (amount: number, money: (v: number) => string): s
 /** How a calendar day is spelled: "1 January 2027", "9 Dec 2026" or "Wed 9 Dec 2026". */
 export type DayStyle = 'long' | 'short' | 'weekday';
 
-const DAY_FORMATS: Record<DayStyle, Intl.DateTimeFormat> = {
-  long: new Intl.DateTimeFormat('en-GB', {
-    day: 'numeric',
-    month: 'long',
-    year: 'numeric',
-    timeZone: 'UTC',
-  }),
-  short: new Intl.DateTimeFormat('en-GB', {
-    day: 'numeric',
-    month: 'short',
-    year: 'numeric',
-    timeZone: 'UTC',
-  }),
-  weekday: new Intl.DateTimeFormat('en-GB', {
-    weekday: 'short',
-    day: 'numeric',
-    month: 'short',
-    year: 'numeric',
-    timeZone: 'UTC',
-  }),
+const DAY_OPTIONS: Record<DayStyle, Intl.DateTimeFormatOptions> = {
+  long: { day: 'numeric', month: 'long', year: 'numeric', timeZone: 'UTC' },
+  short: { day: 'numeric', month: 'short', year: 'numeric', timeZone: 'UTC' },
+  weekday: { weekday: 'short', day: 'numeric', month: 'short', year: 'numeric', timeZone: 'UTC' },
 };
+
+// Built on first use, not when the module loads: the first formatter of a page loads the
+// locale's calendar data (tens of ms), which should not add to the task that starts the app.
+const dayFormats: Partial<Record<DayStyle, Intl.DateTimeFormat>> = {};
+const dayFormat = (style: DayStyle) =>
+  (dayFormats[style] ??= new Intl.DateTimeFormat('en-GB', DAY_OPTIONS[style]));
 
 /**
  * A calendar day ("2027-01-01", or the day of an ISO timestamp), day first as every date the app
@@ -59,7 +49,7 @@ const DAY_FORMATS: Record<DayStyle, Intl.DateTimeFormat> = {
  */
 export function formatDay(isoDate: string, style: DayStyle = 'short'): string {
   const d = new Date(`${isoDate.slice(0, 10)}T00:00:00Z`);
-  return Number.isNaN(d.getTime()) ? isoDate : DAY_FORMATS[style].format(d);
+  return Number.isNaN(d.getTime()) ? isoDate : dayFormat(style).format(d);
 }
 
 /** A calendar date of the terms ("1 January 2027"). */
