@@ -226,6 +226,7 @@ export const designJointPlate = (
     order.push(i);
   }
   order.sort((a, b) => largest[b] - largest[a]);
+  const mostLoadedFirst = order.slice();
   let failure = { member: '', ratio: 0 };
   const sections = steelSections(joint.kind, local, joint.members);
 
@@ -283,6 +284,9 @@ export const designJointPlate = (
     trial.bestI = order[0];
     trial.bestRatio = Infinity;
     frame.steps = steps;
+    // The last plate's failure is the one reported: checked in the joint's own order, so the
+    // member named does not depend on which smaller plates the search dropped, and how.
+    if (last) for (let k = 0; k < order.length; k++) order[k] = mostLoadedFirst[k];
     const fit = placePlate(trial, local, frame, last);
     if (!fit) {
       if (last) failure = { member: trial.failMember, ratio: trial.failRatio };

@@ -245,6 +245,34 @@ describe('plate choice', () => {
     }
   });
 
+  it('names the most loaded failing member, whatever the smaller plates tried before', () => {
+    // Both webs need far more than any plate gives; the report must not depend on the search.
+    const joint: PlateJoint = {
+      id: 'D',
+      x: 0,
+      y: 0,
+      members: [
+        member('BC1', 'bottomChord', -1, 0, 10),
+        member('BC2', 'bottomChord', 1, 0, 10),
+        member('W1', 'web', 1, 1, 6000),
+        member('W2', 'web', -1, 1, 8000),
+      ],
+    };
+    const named = (catalog: PlateCatalog) => {
+      try {
+        designJointPlate(joint, catalog);
+      } catch (e) {
+        return (e as { details: { member: string } }).details.member;
+      }
+      return undefined;
+    };
+    const largest = [...DEMO_PLATE_CATALOG.plates].sort(
+      (a, b) => b.width * b.length - a.width * a.length || a.gauge - b.gauge,
+    )[0];
+    expect(named(DEMO_PLATE_CATALOG)).toBe('W2');
+    expect(named({ ...DEMO_PLATE_CATALOG, plates: [largest] })).toBe('W2');
+  });
+
   it('names the spliced chord when the steel across the joint line is too weak', () => {
     const joint: PlateJoint = {
       id: 'S',
