@@ -138,6 +138,8 @@ describe('which combinations a design gets (ASCE 7-16 §2.4.1)', () => {
     const { loads } = loadsOf(kingPost16(TYPICAL_LOADS));
     expect(loads.combinations.map((c) => c.name)).not.toContain('D + L(bc)');
     expect(loads.cases.Lbc).toBeUndefined();
+    // No snow, wind or point loads: nothing assumed beyond the basic cases, so no notes.
+    expect(loads.notes).toEqual([]);
   });
 
   const windy = (windUplift?: number) =>
