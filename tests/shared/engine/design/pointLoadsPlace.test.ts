@@ -52,9 +52,9 @@ describe('placePointLoad at the ends of the chords', () => {
   it('within 1 mm of a bearing, on either side, is the bearing joint', () => {
     const p = fink28();
     const [left, right] = heels(p);
-    for (const x of [0, 0.5, 1, -0.9])
+    for (const x of [0, 0.5, 1, -0.9, -1])
       expect(placePointLoad(p, 'bottom', x)).toEqual({ joint: left });
-    for (const x of [SPAN, SPAN - 0.5, SPAN - 1, SPAN + 0.9])
+    for (const x of [SPAN, SPAN - 0.5, SPAN - 1, SPAN + 0.9, SPAN + 1])
       expect(placePointLoad(p, 'bottom', x)).toEqual({ joint: right });
     expect(placePointLoad(p, 'top', 0.5)).toEqual({ joint: left });
     expect(placePointLoad(p, 'top', SPAN - 0.5)).toEqual({ joint: right });
