@@ -21,9 +21,10 @@ const N_PER_LB = 4.4482216152605;
 const NO_LOADS = { tcll: 0, tcdl: 0, bcll: 0, bcdl: 0 };
 
 describe('mid-panel sag under a point load (AISC Manual 15th ed. Table 3-23, case 8)', () => {
-  it('P at a = L/3 of a hinged panel: Δ(mid) = Pa(3L² − 4a²)/(48EI) + drop at B / 2', () => {
+  it('P at L/3 from B (2L/3 from the heel) of a hinged panel: Δ(mid) = Pa(3L² − 4a²)/(48EI) + drop at B / 2', () => {
     // The 28 ft Fink's first bottom-chord panel AB (112 in) is hinged at the heel and the splice
-    // B (see serviceDeflection.test.ts). 100 lb dead load at 112/3 in from the heel, nothing else.
+    // B (see serviceDeflection.test.ts). 100 lb dead load at 2 × 112/3 in from the heel (a = L/3
+    // from the nearer end, B), nothing else.
     // 2x4 SPF No.1/No.2: E = 1,400,000 psi (NDS 2018 Supplement Table 4A), I = 5.359 in⁴ (Table 1B).
     const L = 112;
     const a = L / 3;
@@ -35,7 +36,7 @@ describe('mid-panel sag under a point load (AISC Manual 15th ed. Table 3-23, cas
         ...FINK_28_OVERHANGS,
         loads: NO_LOADS,
         lumber: { bottomChord: '2x4 SPF-1/2' },
-        pointLoads: [{ x: a, chord: 'bottom', dead: P, live: 0, kind: 'roofLive' }],
+        pointLoads: [{ x: L - a, chord: 'bottom', dead: P, live: 0, kind: 'roofLive' }],
       }),
     );
     const mid = d.additional.deflection.midPanel.total;
@@ -45,6 +46,23 @@ describe('mid-panel sag under a point load (AISC Manual 15th ed. Table 3-23, cas
     // Table values (1.4e6, 5.359) are rounded: 0.1 % covers them.
     expect(mid.max / 25.4).toBeWithin(b.total / 25.4 / 2 + sag, { rel: 1e-3 });
     expect(d.additional.deflection.midPanel.live).toBeUndefined();
+  });
+});
+
+describe('mid-panel deflection is the bottom chord’s (the ceiling hangs from it)', () => {
+  it('a heavy roof on a king post: the top chord sags more, the check still names a bottom panel', () => {
+    // TCLL 40 psf, no bottom-chord load: each top chord sags between heel and peak while the
+    // unloaded bottom panels only follow their ends (common practice: the span/n limits of the
+    // ceiling are checked on the bottom chord).
+    const d = designTruss(engineInput(kingPost16({ tcll: 40, tcdl: 10, bcll: 0, bcdl: 0 })));
+    const mid = d.additional.deflection.midPanel.total;
+    const bottom = d.members.filter((m) => m.role === 'bottomChord').map((m) => m.id);
+    expect(bottom).toContain(mid.joint.replace('mid-panel of ', ''));
+    // The top chord's own sag, 5w⊥L⁴/(384EI) with w⊥ ≈ 91 plf over 101 in., is over an inch: a
+    // mid-panel check over all chords would name a top chord.
+    expect(mid.max / 25.4).toBeLessThan(0.5);
+    // Not a scissor: no roller movement is reported.
+    expect(d.additional.deflection.rollerMovement).toBeUndefined();
   });
 });
 
