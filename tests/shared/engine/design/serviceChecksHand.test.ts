@@ -180,3 +180,25 @@ describe('roller movement of a scissor truss', () => {
     expect(r.movement).toBeGreaterThan(0);
   });
 });
+
+describe('mid-panel deflection of a scissor truss under mirrored loads', () => {
+  it('a point load at x or at span − x gives the same worst mid-panel drop (symmetry)', () => {
+    // A symmetric truss on a pin and a roller under vertical loads deflects symmetrically: a
+    // load on the right-hand sloped bottom chord drops its panel as the mirror load does the
+    // left one (the chords slope the other way: the check must take each one's downward side).
+    const at = (xIn: number) =>
+      designTruss(
+        engineInput({
+          ...SCISSOR_32,
+          loads: NO_LOADS,
+          lumber: { topChord: '2x6 SPF-1/2', bottomChord: '2x6 SPF-1/2', webs: '2x4 SPF-1/2' },
+          pointLoads: [{ x: xIn, chord: 'bottom', dead: 400, live: 0, kind: 'roofLive' }],
+        }),
+      ).additional.deflection.midPanel.total;
+    const left = at(32 * 3 + 10);
+    const right = at(32 * 12 - (32 * 3 + 10));
+    expect(left.max).toBeGreaterThan(0);
+    expect(right.max).toBeWithin(left.max, { rel: 1e-6 });
+    expect(right.joint).not.toBe(left.joint);
+  });
+});
