@@ -19,13 +19,13 @@ describe('top-chord shear of a king-post truss (NDS 2018 §3.4.2)', () => {
   const s = 2; // ft, 24 in o.c.
   const cos = 12 / Math.hypot(12, 4);
   const slope = 8 / cos; // ft, heel to peak
-  const design = kingPost(10);
   const dead = 10 * s * cos; // plf across the chord
   const live = 20 * s * cos * cos;
   const vD = (dead * slope) / 2; // 80.0 lb
   const vDLr = ((dead + live) * slope) / 2; // 231.8 lb
 
   it('V under D + Lr is (w⊥D + w⊥Lr)·L/2 = 231.8 lb, and it governs', () => {
+    const design = kingPost(10);
     expect(vDLr).toBeWithin(231.8, { abs: 0.05 });
     const tc = design.additional.shear.find((c) => c.member === 'AD')!;
     expect(tc.combination).toBe('D + Lr');
@@ -36,6 +36,7 @@ describe('top-chord shear of a king-post truss (NDS 2018 §3.4.2)', () => {
   });
 
   it("the member's shear envelope is the D + Lr value; D alone (80.0 lb at CD 0.9) does not govern", () => {
+    const design = kingPost(10);
     expect(vD).toBeWithin(80.0, { abs: 0.05 });
     const ad = design.members.find((m) => m.id === 'AD')!;
     expect(ad.maxShear / N_PER_LB).toBeWithin(vDLr, { rel: 1e-6 });
@@ -43,6 +44,7 @@ describe('top-chord shear of a king-post truss (NDS 2018 §3.4.2)', () => {
   });
 
   it('says how shear is checked, and webs carry none', () => {
+    const design = kingPost(10);
     expect(design.notes.join(' ')).toMatch(/NDS 2018 §3\.4\.2/);
     expect(design.additional.shear.map((c) => c.member)).not.toContain('BD');
   });
@@ -61,17 +63,18 @@ describe('top-chord shear of a king-post truss (NDS 2018 §3.4.2)', () => {
 describe('heel plate steel with the full force (king post, method of joints)', () => {
   const cos = 12 / Math.hypot(12, 4);
   const sin = 4 / Math.hypot(12, 4);
-  const design = kingPost(0);
   const w = 10 * 2 * (8 / cos) + 20 * 2 * 8; // 488.6 lb under D + Lr
   const c = w / (2 * sin);
 
   it('the top chord carries C = W/(2 sinθ) = 772.6 lb under D + Lr', () => {
+    const design = kingPost(0);
     expect(c).toBeWithin(772.6, { abs: 0.05 });
     const ad = design.members.find((m) => m.id === 'AD')!;
     expect(ad.maxCompression / N_PER_LB).toBeWithin(c, { rel: 0.01 });
   });
 
   it('the heel steel takes C·cosθ (shear) and C·sinθ (tension), not divided by CD 1.25', () => {
+    const design = kingPost(0);
     const heel = design.plates.find((p) => p.joint === 'A')!;
     expect(heel.kind).toBe('heel');
     const shear = heel.design!.steel.find((s) => s.kind === 'shear')!;

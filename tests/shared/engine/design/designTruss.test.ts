@@ -15,9 +15,11 @@ import { engineInput, lightFink, TYPICAL_LOADS } from './support/inputs';
 
 describe('a light truss', () => {
   // Common practice: a 24 ft 4/12 Fink at 20/10/0/10 psf, 24 in o.c. is built of 2x4 chords.
-  const d = designTruss(engineInput(lightFink()));
+  // Designed inside each test (README, mutation testing).
+  const designed = () => designTruss(engineInput(lightFink()));
 
   it('passes with 2x4 chords and 2x4 webs', () => {
+    const d = designed();
     expect(d.ok).toBe(true);
     expect(d.warnings).toEqual([]);
     for (const p of d.pieces) {
@@ -28,6 +30,7 @@ describe('a light truss', () => {
   });
 
   it('gives both top chords one lumber and every member the lumber of its piece', () => {
+    const d = designed();
     const top = new Set(d.pieces.filter((p) => p.role === 'topChord').map((p) => p.lumber));
     expect(top.size).toBe(1);
     const byMark = new Map(d.pieces.map((p) => [p.mark, p]));
@@ -35,12 +38,14 @@ describe('a light truss', () => {
   });
 
   it('analyses the 4 in standard heel as the pointed heel and says so', () => {
+    const d = designed();
     expect(d.heelHeight.requested).toBeWithin(4 * MM_PER_INCH, { rel: 1e-12 });
     expect(d.heelHeight.analysed).toBe(0);
     expect(d.notes.some((n) => n.startsWith('Standard heel'))).toBe(true);
   });
 
   it('reports force envelopes as positive magnitudes and the governing combination', () => {
+    const d = designed();
     for (const m of d.members) {
       expect(m.maxTension).toBe(Math.max(0, ...m.forces));
       expect(m.maxCompression).toBe(Math.max(0, ...m.forces.map((f) => -f)));
@@ -53,6 +58,7 @@ describe('a light truss', () => {
   });
 
   it('plates every joint and bears on both supports', () => {
+    const d = designed();
     expect(d.plates).toHaveLength(d.joints.length);
     expect(d.plates.every((p) => p.ok && p.design!.count === 2)).toBe(true);
     expect(d.plates.filter((p) => p.kind === 'heel').map((p) => p.joint)).toEqual(
@@ -62,6 +68,7 @@ describe('a light truss', () => {
   });
 
   it('carries every caution of DESIGN.md §4.6 and the engine version', () => {
+    const d = designed();
     expect(d.cautions).toEqual([...DESIGN_CAUTIONS]);
     const text = d.cautions.join(' ');
     for (const phrase of [
@@ -83,20 +90,22 @@ describe('a long truss under heavy snow', () => {
   // 40 ft 6/12 Fink, pg = 70 psf: the W's long compression webs (about 6 ft) buckle out of
   // plane over their full length (NDS 2018 3.7.1, le/b near 50), and the chords must be
   // deeper than 2x4 (common practice for such a truss).
-  const d = designTruss(
-    engineInput({
-      units: 'imperial',
-      profile: 'fink',
-      span: 40 * 12,
-      pitch: 6,
-      heelHeight: 5,
-      overhang: 18,
-      spacing: 24,
-      loads: { ...TYPICAL_LOADS, snow: { pg: 70 } },
-    }),
-  );
+  const designed = () =>
+    designTruss(
+      engineInput({
+        units: 'imperial',
+        profile: 'fink',
+        span: 40 * 12,
+        pitch: 6,
+        heelHeight: 5,
+        overhang: 18,
+        spacing: 24,
+        loads: { ...TYPICAL_LOADS, snow: { pg: 70 } },
+      }),
+    );
 
   it('upsizes the chords and braces the long webs', () => {
+    const d = designed();
     const chords = d.pieces.filter((p) => p.role !== 'web');
     expect(chords.every((p) => !p.lumber.startsWith('2x4 '))).toBe(true);
     const braced = d.members.filter((m) => m.braced);
@@ -111,20 +120,23 @@ describe('a long truss under heavy snow', () => {
   });
 
   it('prefers a 2x4 web with a brace over a deeper web', () => {
+    const d = designed();
     for (const m of d.members.filter((x) => x.braced)) expect(m.lumber).toBe('2x4 SPF-1/2');
   });
 });
 
 describe('a fixed lumber that cannot pass', () => {
-  const d = designTruss(
-    engineInput({
-      ...lightFink({ span: 32 * 12 }),
-      loads: { ...TYPICAL_LOADS, snow: { pg: 60 } },
-      lumber: { topChord: '2x3 SPF-1/2' },
-    }),
-  );
+  const designed = () =>
+    designTruss(
+      engineInput({
+        ...lightFink({ span: 32 * 12 }),
+        loads: { ...TYPICAL_LOADS, snow: { pg: 60 } },
+        lumber: { topChord: '2x3 SPF-1/2' },
+      }),
+    );
 
   it('returns ok = false with a readable warning instead of throwing', () => {
+    const d = designed();
     expect(d.ok).toBe(false);
     const top = d.pieces.filter((p) => p.role === 'topChord');
     expect(top.every((p) => p.failing && p.lumber === '2x3 SPF-1/2')).toBe(true);

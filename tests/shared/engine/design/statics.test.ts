@@ -17,17 +17,19 @@ describe('reactions of a symmetric truss, closed form', () => {
   const spanIn = 28 * 12;
   const overhangIn = 18;
   const pitch = 6;
-  const d = designTruss(
-    engineInput({
-      units: 'imperial',
-      profile: 'fink',
-      span: spanIn,
-      pitch,
-      overhang: overhangIn,
-      spacing: 24,
-      loads: { tcll: 20, tcdl: 10, bcll: 0, bcdl: 10 },
-    }),
-  );
+  // Designed inside each test (README, mutation testing).
+  const designed = () =>
+    designTruss(
+      engineInput({
+        units: 'imperial',
+        profile: 'fink',
+        span: spanIn,
+        pitch,
+        overhang: overhangIn,
+        spacing: 24,
+        loads: { tcll: 20, tcdl: 10, bcll: 0, bcdl: 10 },
+      }),
+    );
   const secant = Math.hypot(12, pitch) / 12;
   const L = spanIn * MM_PER_INCH;
   const run = L + 2 * overhangIn * MM_PER_INCH; // horizontal length of the roof line
@@ -41,11 +43,13 @@ describe('reactions of a symmetric truss, closed form', () => {
   };
 
   it('has the combinations of the cases present (ASCE 7-16 §2.4.1, D and Lr only)', () => {
+    const d = designed();
     expect(d.combinations.map((c) => c.name)).toEqual(Object.keys(expected));
   });
 
   for (const [name, total] of Object.entries(expected)) {
     it(`${name}: each reaction is half the total load, no horizontal reaction`, () => {
+      const d = designed();
       const i = d.combinations.findIndex((c) => c.name === name);
       for (const r of d.reactions) {
         expect(r.vertical[i]).toBeWithin(total / 2, { rel: 1e-9 });
@@ -55,6 +59,7 @@ describe('reactions of a symmetric truss, closed form', () => {
   }
 
   it('reports the envelope as positive magnitudes', () => {
+    const d = designed();
     for (const r of d.reactions) {
       expect(r.maxDown).toBeWithin((dead + roofLive) / 2, { rel: 1e-9 });
       expect(r.maxUp).toBe(0);
@@ -65,16 +70,17 @@ describe('reactions of a symmetric truss, closed form', () => {
 describe('king post truss under its own panel loads, closed form', () => {
   // 16 ft 4/12 king post, pointed heels, no overhang, 24 in o.c., TCDL 10 psf, BCDL 10 psf.
   const spanIn = 16 * 12;
-  const d = designTruss(
-    engineInput({
-      units: 'imperial',
-      profile: 'kingPost',
-      span: spanIn,
-      pitch: 4,
-      spacing: 24,
-      loads: { tcll: 0, tcdl: 10, bcll: 0, bcdl: 10 },
-    }),
-  );
+  const designed = () =>
+    designTruss(
+      engineInput({
+        units: 'imperial',
+        profile: 'kingPost',
+        span: spanIn,
+        pitch: 4,
+        spacing: 24,
+        loads: { tcll: 0, tcdl: 10, bcll: 0, bcdl: 10 },
+      }),
+    );
   const L = spanIn * MM_PER_INCH;
   const theta = Math.atan(4 / 12);
   const s = L / 2 / Math.cos(theta); // slope length of each top chord
@@ -91,26 +97,29 @@ describe('king post truss under its own panel loads, closed form', () => {
   const topChord = -(R - heel) / Math.sin(theta);
   const bottomChord = (R - heel) / Math.tan(theta);
   const post = mid;
-  const force = (role: string) => d.members.filter((m) => m.role === role).map((m) => m.forces[0]);
+  const force = (d: ReturnType<typeof designed>, role: string) =>
+    d.members.filter((m) => m.role === role).map((m) => m.forces[0]);
 
   it('has the dead-load combination only', () => {
+    const d = designed();
     expect(d.combinations.map((c) => c.name)).toEqual(['D']);
   });
 
   it('reactions are half the load; the king post carries between the simple and rigid shares', () => {
+    const d = designed();
     // The 16 ft bottom chord is one piece, continuous over the king post: the post takes the
     // mid-span reaction of a two-span beam on an elastic support, between the simple-span share
     // wL/2 (a hinged chord) and the rigid-support share 10/8 · w·(L/2) (AISC Steel Construction
     // Manual, 15th ed., Table 3-23, continuous beam – two equal spans – uniform load).
     for (const r of d.reactions) expect(r.vertical[0]).toBeWithin(R, { rel: 1e-9 });
-    expect(force('web')).toHaveLength(1);
-    expect(force('web')[0]).toBeGreaterThan(post);
-    expect(force('web')[0]).toBeLessThan((10 / 8) * wb * (L / 2));
+    expect(force(d, 'web')).toHaveLength(1);
+    expect(force(d, 'web')[0]).toBeGreaterThan(post);
+    expect(force(d, 'web')[0]).toBeLessThan((10 / 8) * wb * (L / 2));
     // Hinged at heel and peak, the two top chords still carry the line-model thrust within the
     // shift of the post force: both in compression, equal by symmetry.
-    const [left, right] = force('topChord');
+    const [left, right] = force(d, 'topChord');
     expect(left).toBeLessThan(topChord * 0.9);
     expect(left).toBeWithin(right, { rel: 1e-9 });
-    for (const f of force('bottomChord')) expect(f).toBeGreaterThan(bottomChord);
+    for (const f of force(d, 'bottomChord')) expect(f).toBeGreaterThan(bottomChord);
   });
 });

@@ -16,12 +16,12 @@ describe('net uplift at the bearings (ASCE 7-16 §2.4.1 combination 7)', () => {
   const dead = 10 * 2 * (16 / cos) + 10 * 2 * 16; // 657.3 lb
   const wind = 30 * 2 * 16; // 960 lb up
   const uplift = 0.6 * (wind / 2) - 0.6 * (dead / 2); // 90.8 lb
-  const design = designTruss(
-    engineInput(kingPost16({ tcll: 20, tcdl: 10, bcll: 0, bcdl: 10, windUplift: 30 })),
-  );
+  const windy = () =>
+    designTruss(engineInput(kingPost16({ tcll: 20, tcdl: 10, bcll: 0, bcdl: 10, windUplift: 30 })));
 
   it('each bearing must hold 0.6·W/2 − 0.6·D/2 = 90.8 lb down, under 0.6D + 0.6W', () => {
     expect(uplift).toBeWithin(90.8, { abs: 0.05 });
+    const design = windy();
     expect(design.additional.uplift.map((u) => u.joint).sort()).toEqual(['A', 'C']);
     for (const u of design.additional.uplift) {
       expect(u.force / N_PER_LB).toBeWithin(uplift, { rel: 1e-6 });
@@ -30,6 +30,7 @@ describe('net uplift at the bearings (ASCE 7-16 §2.4.1 combination 7)', () => {
   });
 
   it('says so in the warnings with the force in lb and N (a hold-down is named)', () => {
+    const design = windy();
     const w = design.warnings.filter((x) => /Net uplift/.test(x));
     expect(w).toHaveLength(2);
     expect(w[0]).toContain(`${Math.round(uplift)} lb (${Math.round(uplift * N_PER_LB)} N)`);
@@ -61,9 +62,11 @@ const fink28 = (total: number) => ({
 });
 
 describe('long-term deflection with creep of the dead load (NDS 2018 §3.5.2)', () => {
-  const design = designTruss(engineInput(fink28(180)));
+  // Computed inside each test (README, mutation testing).
+  const at180 = () => designTruss(engineInput(fink28(180)));
 
   it('1.5·Δ(dead) + Δ(live), the largest over the bottom-chord panel points', () => {
+    const design = at180();
     const lt = design.additional.longTermDeflection;
     const drops = design.deflection.bottomChord.map((b) => 1.5 * (b.total - b.live) + b.live);
     const max = Math.max(...drops);
@@ -76,12 +79,13 @@ describe('long-term deflection with creep of the dead load (NDS 2018 §3.5.2)', 
   });
 
   // A limit between the long-term and the short-term span/Δ: short-term passes, long-term fails.
-  const limit = Math.floor(
-    (design.additional.longTermDeflection.ratio + design.deflection.total.ratio) / 2,
-  );
-  const chordOf = (role: string) => design.pieces.find((p) => p.role === role)!.lumber;
+  const between = (design: ReturnType<typeof at180>) =>
+    Math.floor((design.additional.longTermDeflection.ratio + design.deflection.total.ratio) / 2);
 
   it('a limit the long-term value misses fails the design (chords fixed), with a warning', () => {
+    const design = at180();
+    const limit = between(design);
+    const chordOf = (role: string) => design.pieces.find((p) => p.role === role)!.lumber;
     expect(limit).toBeGreaterThan(design.additional.longTermDeflection.ratio);
     expect(limit).toBeLessThan(design.deflection.total.ratio);
     const fixed = { topChord: chordOf('topChord'), bottomChord: chordOf('bottomChord') };
@@ -95,6 +99,7 @@ describe('long-term deflection with creep of the dead load (NDS 2018 §3.5.2)', 
   });
 
   it('with lumber to choose from, sizing raises a chord until the long-term check passes', () => {
+    const limit = between(at180());
     const sized = designTruss(engineInput(fink28(limit)));
     expect(sized.additional.longTermDeflection.pass).toBe(true);
     expect(sized.ok).toBe(true);
