@@ -232,7 +232,6 @@ export const designJointPlate = (
 
   // Per set of lateral values: each member's governing tooth case, its demand and capacity per area.
   const toothOf: { angles: ToothCheck[]; demand: number[]; perArea: number[] }[] = [];
-  const slides = new Map<number, number>();
   // One trial and one frame per joint, refilled for each plate: most plates are dropped at once.
   const trial: Trial = {
     joint,
@@ -264,17 +263,6 @@ export const designJointPlate = (
       };
       toothOf[lateralSet] = tooth;
     }
-    let steps = slides.get(halfWidth);
-    if (steps === undefined)
-      slides.set(halfWidth, (steps = slideSteps(joint.kind, chordHalf, halfWidth)));
-    // The steel is checked first on the last plate only, whose failure is the one reported;
-    // elsewhere after the teeth, which drop most plates for less work (the same plate is chosen).
-    const steelFirst = last ? steelChecks(sections, plate, halfLength, halfWidth) : undefined;
-    const badSteelFirst = steelFirst?.find((s) => s.ratio > 1);
-    if (badSteelFirst) {
-      failure = steelFailure(badSteelFirst);
-      continue;
-    }
     trial.plate = plate;
     trial.perArea = tooth.perArea;
     trial.demand = tooth.demand;
@@ -283,27 +271,24 @@ export const designJointPlate = (
     trial.halfWidth = halfWidth;
     trial.bestI = order[0];
     trial.bestRatio = Infinity;
-    frame.steps = steps;
+    frame.steps = slideSteps(joint.kind, chordHalf, halfWidth);
     // The last plate's failure is the one reported: checked in the joint's own order, so the
     // member named does not depend on which smaller plates the search dropped, and how.
     if (last) for (let k = 0; k < order.length; k++) order[k] = mostLoadedFirst[k];
     const fit = placePlate(trial, local, frame, last);
-    if (!fit) {
-      if (last) failure = { member: trial.failMember, ratio: trial.failRatio };
-      continue;
-    }
-    const steel = steelFirst ?? steelChecks(sections, plate, halfLength, halfWidth);
-    const badSteel = steel.find((s) => s.ratio > 1);
+    // The steel only where the teeth hold (they drop most plates for less work), and on the last
+    // plate, whose steel failure is reported before its teeth's.
+    const steel = fit || last ? steelChecks(sections, plate, halfLength, halfWidth) : undefined;
+    const badSteel = steel?.find((s) => s.ratio > 1);
     if (badSteel) {
       failure = steelFailure(badSteel);
       continue;
     }
+    if (!fit || !steel) {
+      if (last) failure = { member: trial.failMember, ratio: trial.failRatio };
+      continue;
+    }
     const { checks, offset } = fit;
-    checks.sort(
-      (a, b) =>
-        joint.members.findIndex((m) => m.id === a.member) -
-        joint.members.findIndex((m) => m.id === b.member),
-    );
     return {
       joint: joint.id,
       plate,

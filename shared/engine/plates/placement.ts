@@ -113,10 +113,10 @@ const holds = (t: Trial, offset: number, spread: number): boolean => {
   return true;
 };
 
-/** Every member's check at a slide that holds them all. */
+/** Every member's check at a slide that holds them all, in the joint's member order. */
 const checksAt = (t: Trial, offset: number): MemberPlateCheck[] => {
   const checks: MemberPlateCheck[] = [];
-  for (const i of t.order) {
+  for (let i = 0; i < t.regions.length; i++) {
     const area = regionAreaInPlate(t.regions[i], t.halfLength, t.halfWidth, offset);
     const demand = t.demand[i];
     const capacity = capacityOf(t, i, area);

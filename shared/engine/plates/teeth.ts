@@ -79,6 +79,36 @@ export const toothCasesOf = (joint: PlateJoint, m: PlateJointMember, local: Poin
   return out;
 };
 
+// The value `lowestAngle` found (psi per face), read right after each call: the hot loop of
+// `governingTooth` then builds no object per case.
+let lowestFound = Infinity;
+
+/** Index of the plate-to-load angle with the lowest lateral value on one plate (first on a tie). */
+const lowestAngle = (plate: PlateSpec, t: ToothAngles): number => {
+  let k = 0;
+  let value = Infinity;
+  for (let a = 0; a < t.plateToLoad.length; a++) {
+    const v = lateralValue(plate, t.plateToLoad[a], t.loadToGrain);
+    if (v < value) {
+      value = v;
+      k = a;
+    }
+  }
+  lowestFound = value;
+  return k;
+};
+
+/** A member's lateral value on one plate, MPa per face, at the lowest of its angles. */
+const toothValue = (plate: PlateSpec, t: ToothAngles): ToothCheck => {
+  const k = lowestAngle(plate, t);
+  return {
+    plateToLoad: t.plateToLoad[k],
+    loadToGrain: t.loadToGrain,
+    lateralValue: lowestFound * PSI_TO_N_PER_MM2,
+    heelFactor: t.heelFactor,
+  };
+};
+
 /**
  * The case that governs a member on one plate: the largest demand over tooth value (the contact
  * area is the same for every case, so this is the largest ratio wherever the plate sits).
@@ -89,7 +119,8 @@ export const governingTooth = (plate: PlateSpec, cases: ToothCase[]) => {
   let k = 0;
   let worst = -1;
   for (let c = 0; c < cases.length; c++) {
-    const score = cases[c].force / (lowestValue(plate, cases[c].angles) * PSI_TO_N_PER_MM2);
+    lowestAngle(plate, cases[c].angles);
+    const score = cases[c].force / (lowestFound * PSI_TO_N_PER_MM2);
     if (score > worst) {
       worst = score;
       k = c;
@@ -98,30 +129,5 @@ export const governingTooth = (plate: PlateSpec, cases: ToothCase[]) => {
   return {
     demand: worst === -1 ? 0 : cases[k].force,
     angles: toothValue(plate, cases[k].angles),
-  };
-};
-
-/** The lowest lateral value of a member's plate-to-load angles on one plate, psi per face. */
-const lowestValue = (plate: PlateSpec, t: ToothAngles): number => {
-  let value = Infinity;
-  for (const a of t.plateToLoad) {
-    const v = lateralValue(plate, a, t.loadToGrain);
-    if (v < value) value = v;
-  }
-  return value;
-};
-
-/** A member's lateral value on one plate, MPa per face, at the lowest of its angles. */
-const toothValue = (plate: PlateSpec, t: ToothAngles): ToothCheck => {
-  let best = { plateToLoad: t.plateToLoad[0], value: Infinity };
-  for (const a of t.plateToLoad) {
-    const value = lateralValue(plate, a, t.loadToGrain);
-    if (value < best.value) best = { plateToLoad: a, value };
-  }
-  return {
-    plateToLoad: best.plateToLoad,
-    loadToGrain: t.loadToGrain,
-    lateralValue: best.value * PSI_TO_N_PER_MM2,
-    heelFactor: t.heelFactor,
   };
 };
