@@ -11,7 +11,7 @@ import { checkMember } from '../../../../shared/engine/members/checkMember';
 import { generateProfile } from '../../../../shared/engine/profiles';
 import { KPA_PER_PSF, MM_PER_INCH } from '../../../../shared/engine/units';
 import { ENGINE_VERSION } from '../../../../shared/engine/version';
-import { engineInput, lightFink, TYPICAL_LOADS } from './support/inputs';
+import { engineInput, HEAVY_SNOW_FINK_40, lightFink, TYPICAL_LOADS } from './support/inputs';
 
 describe('a light truss', () => {
   // Common practice: a 24 ft 4/12 Fink at 20/10/0/10 psf, 24 in o.c. is built of 2x4 chords.
@@ -90,19 +90,7 @@ describe('a long truss under heavy snow', () => {
   // 40 ft 6/12 Fink, pg = 70 psf: the W's long compression webs (about 6 ft) buckle out of
   // plane over their full length (NDS 2018 3.7.1, le/b near 50), and the chords must be
   // deeper than 2x4 (common practice for such a truss).
-  const designed = () =>
-    designTruss(
-      engineInput({
-        units: 'imperial',
-        profile: 'fink',
-        span: 40 * 12,
-        pitch: 6,
-        heelHeight: 5,
-        overhang: 18,
-        spacing: 24,
-        loads: { ...TYPICAL_LOADS, snow: { pg: 70 } },
-      }),
-    );
+  const designed = () => designTruss(engineInput(HEAVY_SNOW_FINK_40));
 
   it('upsizes the chords and braces the long webs', () => {
     const d = designed();

@@ -1,6 +1,6 @@
 import { describe, expect, it } from 'vitest';
 import { designTruss } from '../../../../shared/engine/design';
-import { engineInput, TYPICAL_LOADS } from './support/inputs';
+import { engineInput, HEAVY_SNOW_FINK_40, TYPICAL_LOADS } from './support/inputs';
 
 /**
  * Plates at crowded joints of trusses a plant builds every week (common practice for the
@@ -57,18 +57,7 @@ describe('plates of a 24 ft 6/12 scissor with a 3/12 bottom chord', () => {
 describe('plates of the 40 ft 6/12 heavy-snow Fink', () => {
   // The same truss as the heavy-snow design test (pg = 70 psf): 2x8 chords, 2x4 webs, which meet
   // the top chords at the peak at about 30°.
-  const d = designTruss(
-    engineInput({
-      units: 'imperial',
-      profile: 'fink',
-      span: 40 * 12,
-      pitch: 6,
-      heelHeight: 5,
-      overhang: 18,
-      spacing: 24,
-      loads: { ...TYPICAL_LOADS, snow: { pg: 70 } },
-    }),
-  );
+  const d = designTruss(engineInput(HEAVY_SNOW_FINK_40));
 
   it('plates every joint, the peak included, with the demo catalog', () => {
     expect(d.plates.filter((p) => !p.ok).map((p) => p.message)).toEqual([]);

@@ -5,25 +5,15 @@ import { placePointLoad } from '../../../../shared/engine/design/pointLoads';
 import { prepareFrame, solveFrame } from '../../../../shared/engine/frame';
 import { generateProfile } from '../../../../shared/engine/profiles';
 import type { TrussProfile } from '../../../../shared/engine/profiles/types';
-import type { DesignInputDraft } from '../../../../shared/api/design';
-import { engineInput } from './support/inputs';
+import { engineInput, fink28 } from './support/inputs';
 
 const N_PER_LB = 4.4482216152605;
 
-/** A 28 ft 6/12 Fink at 24 in. o.c. without overhangs; panel points at 0, 7, 9.33, 14, … ft. */
-const fink = (extra: Partial<DesignInputDraft> = {}): DesignInputDraft => ({
-  units: 'imperial',
-  profile: 'fink',
-  span: 28 * 12,
-  pitch: 6,
-  spacing: 24,
-  loads: { tcll: 0, tcdl: 0, bcll: 0, bcdl: 0 },
-  ...extra,
-});
+// fink28: panel points at 0, 7, 9.33, 14, … ft.
 
 describe('point loads: placement and statics', () => {
   it('lands on a panel point as a joint load and between panel points on the chord member', () => {
-    const p = generateProfile(engineInput(fink()).profile);
+    const p = generateProfile(engineInput(fink28()).profile);
     const b = p.joints.find((j) => j.id === p.bottomChordJoints[1])!;
     expect(placePointLoad(p, 'bottom', b.x)).toEqual({ joint: b.id });
     const inside = placePointLoad(p, 'bottom', b.x + 100);
@@ -40,7 +30,7 @@ describe('point loads: placement and statics', () => {
     const x = 10 * 12;
     for (const chord of ['top', 'bottom'] as const) {
       const d = designTruss(
-        engineInput(fink({ pointLoads: [{ x, chord, dead: P, live: 0, kind: 'roofLive' }] })),
+        engineInput(fink28({ pointLoads: [{ x, chord, dead: P, live: 0, kind: 'roofLive' }] })),
       );
       const i = d.combinations.findIndex((c) => c.name === 'D');
       const [left, right] = d.reactions.map((r) => r.vertical[i] / N_PER_LB);
@@ -50,7 +40,7 @@ describe('point loads: placement and statics', () => {
   });
 
   it('live point loads enter the combinations of their case, with its CD', () => {
-    const draft = fink({
+    const draft = fink28({
       loads: { tcll: 0, tcdl: 0, bcll: 0, bcdl: 0, snow: { pg: 30 } },
       pointLoads: [
         { x: 100, chord: 'bottom', dead: 200, live: 1000, kind: 'snow' },
@@ -136,16 +126,16 @@ describe('point loads on a continuous chord: closed forms', () => {
 describe('point loads in the request', () => {
   it('are checked in the user units and converted exactly (lb → N, kN → N)', () => {
     const bad = designInputSchema.safeParse(
-      fink({ pointLoads: [{ x: 400, chord: 'bottom', dead: 100, live: 0 }] }),
+      fink28({ pointLoads: [{ x: 400, chord: 'bottom', dead: 100, live: 0 }] }),
     );
     expect(bad.success).toBe(false);
     expect(bad.error!.issues[0].message).toMatch(/between the heels/);
     const neg = designInputSchema.safeParse(
-      fink({ pointLoads: [{ x: 40, chord: 'top', dead: -5, live: 0 }] }),
+      fink28({ pointLoads: [{ x: 40, chord: 'top', dead: -5, live: 0 }] }),
     );
     expect(neg.error!.issues[0].message).toMatch(/between 0 and 20,000 lb/);
     const imperial = engineInput(
-      fink({ pointLoads: [{ x: 120, chord: 'top', dead: 100, live: 250, kind: 'snow' }] }),
+      fink28({ pointLoads: [{ x: 120, chord: 'top', dead: 100, live: 250, kind: 'snow' }] }),
     );
     expect(imperial.pointLoads![0]).toMatchObject({
       x: 120 * 25.4,
@@ -154,7 +144,7 @@ describe('point loads in the request', () => {
       kind: 'S',
     });
     const metric = engineInput({
-      ...fink(),
+      ...fink28(),
       units: 'metric',
       span: 8534,
       spacing: 610,

@@ -10,7 +10,7 @@ import { generateProfile } from '../../../../shared/engine/profiles';
 import type { TrussProfile } from '../../../../shared/engine/profiles/types';
 import { engineErrorOf } from '../analysis/support/errors';
 import { mm, newton } from '../../../../shared/engine/units';
-import { engineInput } from './support/inputs';
+import { engineInput, fink28 } from './support/inputs';
 
 /**
  * Where a point load lands, by geometry alone: a 28 ft 6/12 Fink without overhangs, bearings at
@@ -19,17 +19,7 @@ import { engineInput } from './support/inputs';
  * (README, mutation testing).
  */
 const SPAN = 28 * 12 * 25.4;
-const fink28 = () =>
-  generateProfile(
-    engineInput({
-      units: 'imperial',
-      profile: 'fink',
-      span: 28 * 12,
-      pitch: 6,
-      spacing: 24,
-      loads: { tcll: 0, tcdl: 0, bcll: 0, bcdl: 0 },
-    }).profile,
-  );
+const finkProfile = () => generateProfile(engineInput(fink28()).profile);
 const heels = (p: TrussProfile) => {
   const byX = [...p.supports].map((s) => p.joints.find((j) => j.id === s.joint)!);
   byX.sort((a, b) => a.x - b.x);
@@ -50,7 +40,7 @@ const load = (
 
 describe('placePointLoad at the ends of the chords', () => {
   it('within 1 mm of a bearing, on either side, is the bearing joint', () => {
-    const p = fink28();
+    const p = finkProfile();
     const [left, right] = heels(p);
     for (const x of [0, 0.5, 1, -0.9, -1])
       expect(placePointLoad(p, 'bottom', x)).toEqual({ joint: left });
@@ -61,7 +51,7 @@ describe('placePointLoad at the ends of the chords', () => {
   });
 
   it('beyond the bearings it refuses, saying where in inches', () => {
-    const p = fink28();
+    const p = finkProfile();
     for (const [x, chord] of [
       [-1.5, 'bottom'],
       [SPAN + 1.5, 'top'],
@@ -77,7 +67,7 @@ describe('placePointLoad at the ends of the chords', () => {
   });
 
   it('between panel points: the member under x, at the run from its end (bottom chord level)', () => {
-    const p = fink28();
+    const p = finkProfile();
     const byId = new Map(p.joints.map((j) => [j.id, j]));
     const bottom = p.members.filter((m) => m.role === 'bottomChord');
     // Every bottom-chord member: a load at 30 % of its run lands on it, 0.3·L from its start.
@@ -101,13 +91,13 @@ describe('placePointLoad at the ends of the chords', () => {
 describe('addPointLoads into the load cases', () => {
   it('no point loads: no note and no case touched', () => {
     const cases: Partial<Record<DesignCaseId, CaseLoads>> = {};
-    expect(addPointLoads(cases, fink28(), [])).toEqual([]);
-    expect(addPointLoads(cases, fink28(), undefined)).toEqual([]);
+    expect(addPointLoads(cases, finkProfile(), [])).toEqual([]);
+    expect(addPointLoads(cases, finkProfile(), undefined)).toEqual([]);
     expect(cases).toEqual({});
   });
 
   it('dead to D and live to its own case, at a panel point as a joint load (down = −y)', () => {
-    const p = fink28();
+    const p = finkProfile();
     const joint = p.bottomChordJoints[1];
     const x = p.joints.find((j) => j.id === joint)!.x;
     const cases: Partial<Record<DesignCaseId, CaseLoads>> = {};
@@ -135,17 +125,17 @@ describe('addPointLoads into the load cases', () => {
 
   it('no live load: no live case is created (so no live combinations appear)', () => {
     const cases: Partial<Record<DesignCaseId, CaseLoads>> = {};
-    addPointLoads(cases, fink28(), [load({ live: 0, kind: 'S' })]);
+    addPointLoads(cases, finkProfile(), [load({ live: 0, kind: 'S' })]);
     expect(Object.keys(cases)).toEqual(['D']);
   });
 
   it('snow goes into the unbalanced cases too, when the design has them', () => {
     const empty = (): CaseLoads => ({ jointLoads: [], memberLoads: [], overhangMoments: [] });
     const plain: Partial<Record<DesignCaseId, CaseLoads>> = {};
-    addPointLoads(plain, fink28(), [load({ live: 300, kind: 'S' })]);
+    addPointLoads(plain, finkProfile(), [load({ live: 300, kind: 'S' })]);
     expect(Object.keys(plain).sort()).toEqual(['D', 'S']);
     const both: Partial<Record<DesignCaseId, CaseLoads>> = { SuL: empty(), SuR: empty() };
-    addPointLoads(both, fink28(), [load({ live: 300, kind: 'S' })]);
+    addPointLoads(both, finkProfile(), [load({ live: 300, kind: 'S' })]);
     for (const u of ['S', 'SuL', 'SuR'] as const)
       expect(both[u]!.pointLoads!.map((l) => l.fy)).toEqual([-300]);
   });
@@ -160,13 +150,13 @@ describe('addPointLoads into the load cases', () => {
     ]) {
       const cases: Partial<Record<DesignCaseId, CaseLoads>> = {};
       const e = engineErrorOf(() =>
-        addPointLoads(cases, fink28(), [load({ ...bad, label: 'hip girder' })]),
+        addPointLoads(cases, finkProfile(), [load({ ...bad, label: 'hip girder' })]),
       );
       expect(e.code).toBe('invalid');
       expect(e.message).toBe('A point load needs a position and loads of 0 or more.');
       expect(e.details).toEqual({ load: 'hip girder' });
     }
-    const e = engineErrorOf(() => addPointLoads({}, fink28(), [load({ dead: -1 })]));
+    const e = engineErrorOf(() => addPointLoads({}, finkProfile(), [load({ dead: -1 })]));
     expect(e.details).toEqual({ load: null });
   });
 });

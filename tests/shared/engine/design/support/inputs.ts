@@ -39,6 +39,32 @@ export const kingPost16 = (loads: DesignInputDraft['loads']): DesignInputDraft =
   lumber: { topChord: '2x4 SPF-1/2', bottomChord: '2x4 SPF-1/2', webs: '2x4 SPF-1/2' },
 });
 
+/**
+ * A 40 ft 6/12 Fink, 5 in heel, 18 in overhangs, 24 in o.c., "20/10/0/10" psf and pg = 70 psf:
+ * heavy snow that needs chords deeper than 2x4 (common practice for such a truss).
+ */
+export const HEAVY_SNOW_FINK_40: DesignInputDraft = {
+  units: 'imperial',
+  profile: 'fink',
+  span: 40 * 12,
+  pitch: 6,
+  heelHeight: 5,
+  overhang: 18,
+  spacing: 24,
+  loads: { ...TYPICAL_LOADS, snow: { pg: 70 } },
+};
+
+/** A 28 ft 6/12 Fink at 24 in o.c. without overhangs or loads (geometry and point loads only). */
+export const fink28 = (extra: Partial<DesignInputDraft> = {}): DesignInputDraft => ({
+  units: 'imperial',
+  profile: 'fink',
+  span: 28 * 12,
+  pitch: 6,
+  spacing: 24,
+  loads: { tcll: 0, tcdl: 0, bcll: 0, bcdl: 0 },
+  ...extra,
+});
+
 /** A 28 ft 6/12 Fink with 24 in overhangs, 24 in o.c., "20/10/0/10" psf. */
 export const FINK_28_OVERHANGS: DesignInputDraft = {
   units: 'imperial',
