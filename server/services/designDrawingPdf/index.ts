@@ -170,19 +170,20 @@ function jointColumns(w: number): PdfColumn[] {
 
 /** The foot band: the cautions, and (when the sheet is full) the adjustments after them. */
 interface FootBand {
-  parts: { title: string; text: string }[];
+  /** Each part with the height its paragraph takes. */
+  parts: { title: string; text: string; height: number }[];
   height: number;
 }
 
 function footBand(doc: Doc, s: DesignDrawingSheet, fullW: number, adjustments: boolean): FootBand {
-  const parts = [{ title: 'CAUTIONS', text: s.cautions.join('  •  ') }];
+  const texts = [{ title: 'CAUTIONS', text: s.cautions.join('  •  ') }];
   if (adjustments)
-    parts.push({ title: 'ADJUSTMENTS FOR CONDITIONS OF USE', text: s.adjustments.join('  •  ') });
-  const height = parts.reduce(
-    (h, p) => h + paragraphHeight(doc, p.text, fullW - 16, { size: BODY }) + 12,
-    8,
-  );
-  return { parts, height };
+    texts.push({ title: 'ADJUSTMENTS FOR CONDITIONS OF USE', text: s.adjustments.join('  •  ') });
+  const parts = texts.map((t) => ({
+    ...t,
+    height: paragraphHeight(doc, t.text, fullW - 16, { size: BODY }),
+  }));
+  return { parts, height: parts.reduce((h, p) => h + p.height + 12, 8) };
 }
 
 /**
@@ -291,7 +292,7 @@ function sheet(doc: Doc, s: DesignDrawingSheet) {
   for (const part of band.parts) {
     textAt(doc, part.title, M + 8, by, { font: 'bold', size: 7 });
     paragraph(doc, part.text, M + 8, by + 9, fullW - 16, { size: BODY, color: COLORS.text });
-    by += paragraphHeight(doc, part.text, fullW - 16, { size: BODY }) + 12;
+    by += part.height + 12;
   }
 
   const c: Column = {
