@@ -28,13 +28,18 @@ export const depositSentence = (amount: number, money: (v: number) => string): s
     ? `${TERMS.depositDue} ${TERMS.onAcceptance}: ${money(amount)}.`
     : `${TERMS.noDeposit}: your account terms apply.`;
 
-/** How a calendar day is spelled: "1 January 2027", "9 Dec 2026" or "Wed 9 Dec 2026". */
-export type DayStyle = 'long' | 'short' | 'weekday';
+/**
+ * How a calendar day is spelled: "1 January 2027", "9 Dec 2026", "Wed 9 Dec 2026", and within the
+ * coming weeks (a board's headings, a chart's weeks) "Wed 9 Dec" and "9 Dec".
+ */
+export type DayStyle = 'long' | 'short' | 'weekday' | 'weekdayNoYear' | 'noYear';
 
 const DAY_OPTIONS: Record<DayStyle, Intl.DateTimeFormatOptions> = {
   long: { day: 'numeric', month: 'long', year: 'numeric', timeZone: 'UTC' },
   short: { day: 'numeric', month: 'short', year: 'numeric', timeZone: 'UTC' },
   weekday: { weekday: 'short', day: 'numeric', month: 'short', year: 'numeric', timeZone: 'UTC' },
+  weekdayNoYear: { weekday: 'short', day: 'numeric', month: 'short', timeZone: 'UTC' },
+  noYear: { day: 'numeric', month: 'short', timeZone: 'UTC' },
 };
 
 // Built on first use, not when the module loads: the first formatter of a page loads the

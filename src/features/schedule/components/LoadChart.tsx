@@ -1,6 +1,7 @@
 import { useEffect, useMemo, useState } from 'react';
 import { Bar, BarChart, Tooltip, XAxis, YAxis } from 'recharts';
 import type { Schedule } from '../../../../shared/api/production';
+import { formatDay } from '../../../../shared/api/terms';
 
 type Load = Pick<Schedule, 'load'>;
 
@@ -23,8 +24,6 @@ const tick =
     </text>
   );
 const WEEK_TICK = tick('middle', '0.71em');
-/** A week by its Monday ("30 Nov"), short enough for every week's tick on a tablet. */
-const WEEK = new Intl.DateTimeFormat('en-GB', { day: 'numeric', month: 'short', timeZone: 'UTC' });
 const HOURS_TICK = tick('end', '0.32em', ' h');
 
 /** Planned and free hours per week (by its Monday), all tables together. */
@@ -34,7 +33,8 @@ function weeklyLoad(load: Load['load']) {
     const d = new Date(`${l.date}T00:00:00Z`);
     const monday = new Date(d.getTime() - ((d.getUTCDay() + 6) % 7) * 86_400_000);
     const key = monday.toISOString().slice(0, 10);
-    const w = weeks.get(key) ?? { week: WEEK.format(monday), planned: 0, capacity: 0 };
+    // A week by its Monday ("30 Nov"), short enough for every week's tick on a tablet.
+    const w = weeks.get(key) ?? { week: formatDay(key, 'noYear'), planned: 0, capacity: 0 };
     w.planned += l.used / 60;
     w.capacity += l.capacity / 60;
     weeks.set(key, w);

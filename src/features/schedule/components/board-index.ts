@@ -1,4 +1,5 @@
 import type { Schedule, ScheduleBlock } from '../../../../shared/api/production';
+import { formatDay } from '../../../../shared/api/terms';
 
 type Load = Schedule['load'][number];
 
@@ -15,14 +16,6 @@ export interface BoardIndex {
   /** The most blocks on one day of each table, by table id. */
   most: Map<number, number>;
 }
-
-// One formatter for every heading: building one per call is what makes toLocaleDateString slow.
-const DAY = new Intl.DateTimeFormat('en-GB', {
-  weekday: 'short',
-  day: 'numeric',
-  month: 'short',
-  timeZone: 'UTC',
-});
 
 /** The key of one table-day. */
 export const cellKey = (tableId: number, date: string) => `${tableId}|${date}`;
@@ -42,7 +35,7 @@ export function indexBoard(board: Schedule): BoardIndex {
     blocks,
     load: new Map(board.load.map((l) => [cellKey(l.tableId, l.date), l])),
     late: new Set(board.orders.filter((o) => o.late).map((o) => o.id)),
-    dayLabels: new Map(board.days.map((d) => [d, DAY.format(new Date(`${d}T00:00:00Z`))])),
+    dayLabels: new Map(board.days.map((d) => [d, formatDay(d, 'weekdayNoYear')])),
     most,
   };
 }
