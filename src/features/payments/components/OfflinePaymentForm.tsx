@@ -90,7 +90,12 @@ export function OfflinePaymentForm({
   const hasFieldErrors = isApiError(failure) && FIELDS.some((f) => failure.fields[f]);
 
   return (
-    <form onSubmit={onSubmit} noValidate aria-labelledby="offline-payment-title">
+    <form
+      onSubmit={onSubmit}
+      noValidate
+      aria-labelledby="offline-payment-title"
+      className="print:hidden"
+    >
       <h3 id="offline-payment-title" className="mb-3 text-base font-semibold text-sand-900">
         Record offline payment
       </h3>
